@@ -1,0 +1,17 @@
+/**
+ * Formats a number for output files so that the same value always prints the same way.
+ *
+ * Returns `''` for `undefined`, `null` and non-finite values (missing is empty, never `NaN`).
+ * Integers print as integers; other values with up to 10 significant digits, trailing zeros
+ * removed, and without exponent notation for magnitudes between 1e-6 and 1e15.
+ */
+export function formatNumber(value: number | undefined | null, digits = 10): string {
+  if (value === undefined || value === null || !Number.isFinite(value)) return '';
+  if (Number.isInteger(value) && Math.abs(value) < 1e15) return String(value);
+  const magnitude = Math.abs(value);
+  if (magnitude !== 0 && (magnitude < 1e-6 || magnitude >= 1e15)) return value.toPrecision(digits).replace(/\.?0+e/, 'e');
+  let text = value.toPrecision(digits);
+  if (text.includes('e')) text = Number(text).toFixed(20);
+  if (text.includes('.')) text = text.replace(/0+$/, '').replace(/\.$/, '');
+  return text === '-0' ? '0' : text;
+}
