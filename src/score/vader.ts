@@ -1,0 +1,248 @@
+import {
+  VADER_AFTER_BUT,
+  VADER_BEFORE_BUT,
+  VADER_BOOSTERS,
+  VADER_CAPS_BOOST,
+  VADER_DAMPEN,
+  VADER_DISTANCE_SCALE,
+  VADER_EXCLAMATION_BOOST,
+  VADER_IDIOMS,
+  VADER_MAX_EXCLAMATIONS,
+  VADER_NEGATION_SCALAR,
+  VADER_NEGATORS,
+  VADER_NEVER_SO_FAR,
+  VADER_NEVER_SO_NEAR,
+  VADER_NORMALISATION_ALPHA,
+  VADER_QUESTION_BOOST,
+  VADER_QUESTION_BOOST_MAX,
+} from './vader-constants.js';
+import { vaderTokens } from './vader-tokens.js';
+
+/** A VADER lexicon: lower-case token → mean valence (−4 … +4). */
+export type VaderLexicon = ReadonlyMap<string, number>;
+
+/** VADER's scores of one text. */
+export interface VaderScores {
+  /** Normalised sum of valences, in [−1, 1]; 0 when nothing matched. */
+  compound: number;
+  /** Share of positive intensity (0 … 1). */
+  pos: number;
+  /** Share of neutral tokens (0 … 1). */
+  neu: number;
+  /** Share of negative intensity (0 … 1). */
+  neg: number;
+  /** VADER tokens of the text; 0 means the reference's all-zero result, not a measurement. */
+  tokens: number;
+  /** Tokens found in the lexicon and scored (boosters and "kind of" are not scored). */
+  matched: number;
+}
+
+/** Words that can take part in an idiom or a two-word dampener (raw, case-sensitive). */
+const IDIOM_WORDS: ReadonlySet<string> = new Set(
+  [...VADER_IDIOMS.keys(), ...[...VADER_BOOSTERS.keys()].filter((k) => k.includes(' '))].flatMap((k) => k.split(' ')),
+);
+
+/** Python's `str.isupper` as the reference port defines it: some A–Z and no a–z. */
+function isAllCaps(word: string): boolean {
+  let upper = false;
+  for (let k = 0; k < word.length; k++) {
+    const c = word.charCodeAt(k);
+    if (c >= 0x61 && c <= 0x7a) return false;
+    if (c >= 0x41 && c <= 0x5a) upper = true;
+  }
+  return upper;
+}
+
+/** A single token negates when it is a negator or contains "n't" (case-sensitive, as published). */
+function isNegator(word: string): boolean {
+  return VADER_NEGATORS.has(word) || word.includes("n't");
+}
+
+function countChar(text: string, code: number): number {
+  let count = 0;
+  for (let k = 0; k < text.length; k++) if (text.charCodeAt(k) === code) count++;
+  return count;
+}
+
+/** The special-idiom and two-word-dampener check, applied with the modifier three tokens back. */
+function idiomValence(valence: number, raw: readonly string[], i: number): number {
+  const w3 = raw[i - 3]!;
+  const w2 = raw[i - 2]!;
+  const w1 = raw[i - 1]!;
+  const w0 = raw[i]!;
+  const has1 = IDIOM_WORDS.has(w1);
+  const has2 = IDIOM_WORDS.has(w2);
+  const has3 = IDIOM_WORDS.has(w3);
+  let v = valence;
+  if (has1 || has2 || has3 || IDIOM_WORDS.has(w0)) {
+    const sequences = [`${w1} ${w0}`, `${w2} ${w1} ${w0}`, `${w2} ${w1}`, `${w3} ${w2} ${w1}`, `${w3} ${w2}`];
+    for (const seq of sequences) {
+      const idiom = VADER_IDIOMS.get(seq);
+      if (idiom !== undefined) {
+        v = idiom;
+        break;
+      }
+    }
+  }
+  const n = raw.length;
+  if (n - 1 > i && IDIOM_WORDS.has(w0)) {
+    const w = raw[i + 1]!;
+    const idiom = VADER_IDIOMS.get(`${w0} ${w}`);
+    if (idiom !== undefined) v = idiom;
+    if (n - 1 > i + 1) {
+      const idiom3 = VADER_IDIOMS.get(`${w0} ${w} ${raw[i + 2]!}`);
+      if (idiom3 !== undefined) v = idiom3;
+    }
+  }
+  if ((has3 && has2 && VADER_BOOSTERS.has(`${w3} ${w2}`)) || (has2 && has1 && VADER_BOOSTERS.has(`${w2} ${w1}`))) {
+    v += VADER_DAMPEN;
+  }
+  return v;
+}
+
+/**
+ * Score one text with the VADER rules (Hutto & Gilbert 2014).
+ *
+ * Per token (see {@link vaderTokens}) found in the lexicon, its valence v is
+ * adjusted, in this order, as in the reference implementation:
+ * 1. ALL-CAPS emphasis: ±0.733 when the token is in capitals and the text is
+ *    not entirely in capitals;
+ * 2. for each of the 3 preceding tokens that is not itself in the lexicon:
+ *    booster/dampener ±0.293 (sign follows v, ±0.733 more when the modifier is in
+ *    capitals) scaled by distance 1, 0.95, 0.9; negation v × −0.74 when the token
+ *    is a negator or contains "n't"; "never so/this" × 1.5 (2 back) or × 1.25
+ *    (3 back, also for "so/this" right before); at 3 back, the special idioms
+ *    replace v and "kind of"/"sort of"/"just enough" add −0.293;
+ * 3. "least" right before: × −0.74 unless preceded by "at" or "very".
+ * Boosters and "kind" in "kind of" score 0. Then sentiment before the first
+ * "but" (or "BUT") is × 0.5 and after it × 1.5. With x the sum of valences,
+ * exclamation marks (up to 4, 0.292 each) and question marks (2–3: 0.18 each,
+ * more: 0.96) add to |x|, and compound = x / √(x² + 15).
+ * pos, neg and neu are the shares of Σ(v+1) over positive v, Σ|v−1| over
+ * negative v and the count of zero v, the punctuation emphasis added to the
+ * larger of pos and neg.
+ *
+ * Values are not rounded (the reference rounds compound to 4 and the shares to
+ * 3 decimals for display). Score each entry on its own: compound saturates, so
+ * it is never meaningful over concatenated entries.
+ *
+ * @param text - the text of one entry
+ * @param lexicon - lower-case token → mean valence, e.g. the bundled `vader` lexicon
+ * @returns the scores; a text without tokens gives all zeros with `tokens: 0`
+ *   (the reference's result), which callers should treat as "no score"
+ */
+export function scoreVader(text: string, lexicon: VaderLexicon): VaderScores {
+  const raw = vaderTokens(text);
+  const n = raw.length;
+  if (n === 0) return { compound: 0, pos: 0, neu: 0, neg: 0, tokens: 0, matched: 0 };
+
+  const lower = new Array<string>(n);
+  const valenceOf = new Array<number | undefined>(n);
+  const caps = new Array<boolean>(n);
+  let capsCount = 0;
+  for (let k = 0; k < n; k++) {
+    const w = raw[k]!;
+    const lw = w.toLowerCase();
+    lower[k] = lw;
+    valenceOf[k] = lexicon.get(lw);
+    const c = isAllCaps(w);
+    caps[k] = c;
+    if (c) capsCount++;
+  }
+  const capDiff = capsCount > 0 && capsCount < n;
+
+  const sentiments = new Array<number>(n);
+  let matched = 0;
+  for (let i = 0; i < n; i++) {
+    const lw = lower[i]!;
+    const base = valenceOf[i];
+    if (base === undefined || VADER_BOOSTERS.has(lw) || (lw === 'kind' && i < n - 1 && lower[i + 1] === 'of')) {
+      sentiments[i] = 0;
+      continue;
+    }
+    matched++;
+    let v = base;
+    if (capDiff && caps[i]) v += v > 0 ? VADER_CAPS_BOOST : -VADER_CAPS_BOOST;
+
+    for (let back = 0; back < 3 && back < i; back++) {
+      const j = i - back - 1;
+      if (valenceOf[j] !== undefined) continue;
+      const booster = VADER_BOOSTERS.get(lower[j]!);
+      if (booster !== undefined) {
+        let s = v < 0 ? -booster : booster;
+        if (capDiff && caps[j]) s += v > 0 ? VADER_CAPS_BOOST : -VADER_CAPS_BOOST;
+        if (back > 0 && s !== 0) s *= VADER_DISTANCE_SCALE[back]!;
+        v += s;
+      }
+      v = negationCheck(v, raw, back, i);
+      if (back === 2) v = idiomValence(v, raw, i);
+    }
+
+    if (i > 0 && lower[i - 1] === 'least' && valenceOf[i - 1] === undefined) {
+      if (i === 1 || (lower[i - 2] !== 'at' && lower[i - 2] !== 'very')) v *= VADER_NEGATION_SCALAR;
+    }
+    sentiments[i] = v;
+  }
+
+  let but = raw.indexOf('but');
+  if (but < 0) but = raw.indexOf('BUT');
+  if (but >= 0) {
+    for (let i = 0; i < n; i++) {
+      if (i < but) sentiments[i] = sentiments[i]! * VADER_BEFORE_BUT;
+      else if (i > but) sentiments[i] = sentiments[i]! * VADER_AFTER_BUT;
+    }
+  }
+
+  let sum = 0;
+  let posSum = 0;
+  let negSum = 0;
+  let neutral = 0;
+  for (let i = 0; i < n; i++) {
+    const s = sentiments[i]!;
+    sum += s;
+    if (s > 0) posSum += s + 1;
+    else if (s < 0) negSum += s - 1;
+    else neutral++;
+  }
+
+  const emphasis = punctuationEmphasis(text);
+  if (sum > 0) sum += emphasis;
+  else if (sum < 0) sum -= emphasis;
+  const compound = Math.max(-1, Math.min(1, sum / Math.sqrt(sum * sum + VADER_NORMALISATION_ALPHA)));
+
+  if (posSum > Math.abs(negSum)) posSum += emphasis;
+  else if (posSum < Math.abs(negSum)) negSum -= emphasis;
+  const total = posSum + Math.abs(negSum) + neutral;
+  return {
+    compound,
+    pos: Math.abs(posSum / total),
+    neu: Math.abs(neutral / total),
+    neg: Math.abs(negSum / total),
+    tokens: n,
+    matched,
+  };
+}
+
+/** Negation and "never so/this" with the modifier `back + 1` tokens before token i. */
+function negationCheck(v: number, raw: readonly string[], back: number, i: number): number {
+  if (back === 0) return isNegator(raw[i - 1]!) ? v * VADER_NEGATION_SCALAR : v;
+  if (back === 1) {
+    const w1 = raw[i - 1]!;
+    if (raw[i - 2] === 'never' && (w1 === 'so' || w1 === 'this')) return v * VADER_NEVER_SO_NEAR;
+    return isNegator(raw[i - 2]!) ? v * VADER_NEGATION_SCALAR : v;
+  }
+  const w1 = raw[i - 1]!;
+  const w2 = raw[i - 2]!;
+  if ((raw[i - 3] === 'never' && (w2 === 'so' || w2 === 'this')) || w1 === 'so' || w1 === 'this') {
+    return v * VADER_NEVER_SO_FAR;
+  }
+  return isNegator(raw[i - 3]!) ? v * VADER_NEGATION_SCALAR : v;
+}
+
+/** Emphasis from "!" (0.292 each, up to 4) and "?" (2–3: 0.18 each; more: 0.96) anywhere in the text. */
+function punctuationEmphasis(text: string): number {
+  const exclamations = Math.min(countChar(text, 0x21), VADER_MAX_EXCLAMATIONS);
+  const questions = countChar(text, 0x3f);
+  const q = questions > 1 ? (questions <= 3 ? questions * VADER_QUESTION_BOOST : VADER_QUESTION_BOOST_MAX) : 0;
+  return exclamations * VADER_EXCLAMATION_BOOST + q;
+}
