@@ -1,0 +1,29 @@
+import { pearsonCorrelation, type Correlation } from './pearson-correlation.js';
+import { spearmanBrown } from './spearman-brown.js';
+import type { StatResult } from './stat-result.js';
+
+/** A split-half reliability estimate. */
+export interface SplitHalfReliability {
+  /** Correlation between the two half scores. */
+  halfCorrelation: Correlation;
+  /** Spearman–Brown corrected to full length: 2r / (1 + r). */
+  reliability: number;
+}
+
+/**
+ * Split-half reliability: the Pearson correlation between two half scores of the same units
+ * (`aof`, `bof`, missing pairs skipped), stepped up to full length with the Spearman–Brown
+ * formula 2r/(1 + r) (Spearman 1910; Brown 1910). The correction assumes parallel halves.
+ * Not estimable when the correlation is not (too few pairs, constant halves) or r ≤ −1.
+ */
+export function splitHalfReliability<T>(
+  values: Iterable<T>,
+  aof: (d: T, i: number) => number | undefined | null,
+  bof: (d: T, i: number) => number | undefined | null,
+): StatResult<SplitHalfReliability> {
+  const correlation = pearsonCorrelation(values, aof, bof);
+  if (!correlation.ok) return correlation;
+  const reliability = spearmanBrown(correlation.r, 2);
+  if (reliability === undefined) return { ok: false, code: 'negative_half_correlation', reason: 'the two halves are perfectly negatively related' };
+  return { ok: true, halfCorrelation: correlation, reliability };
+}
