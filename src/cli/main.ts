@@ -1,11 +1,13 @@
 import { Command, CommanderError } from 'commander';
 import { exitCodeFor, LexichronError } from '../errors.js';
 import { TOOL_VERSION } from '../version.js';
+import { registerLexicons } from './lexicons.js';
+import { registerScore } from './score.js';
 
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
-const commands: Register[] = [];
+const commands: Register[] = [registerScore, registerLexicons];
 
 /** Builds the commander program with every command registered. */
 export function buildProgram(): Command {

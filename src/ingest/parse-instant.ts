@@ -1,0 +1,117 @@
+import { DateTime } from 'luxon';
+import { resolveWallClock, zoneOffset, type WallClockPolicy } from './zone-offset.js';
+
+/** How timestamps are read. */
+export interface TimeOptions {
+  /** A luxon format such as `dd/MM/yyyy HH:mm`; when absent, ISO 8601 / RFC 3339 or epoch numbers. */
+  format?: string;
+  /** Unit of numeric timestamps: seconds, milliseconds, or `auto` (13 or more digits → ms). */
+  epoch: 'auto' | 's' | 'ms';
+  /** Spring-forward gap policy for times without an offset. */
+  gap: WallClockPolicy;
+  /** Fall-back overlap policy for times without an offset. */
+  overlap: WallClockPolicy;
+}
+
+export const DEFAULT_TIME_OPTIONS: TimeOptions = { epoch: 'auto', gap: 'reject', overlap: 'reject' };
+
+/** A parsed instant, or the reason it could not be parsed. */
+export type InstantResult =
+  | { ok: true; instant: number; offsetMinutes: number; hadOffset: boolean }
+  | { ok: false; code: string; message: string };
+
+const RFC3339 = /^(\d{4})-(\d{2})-(\d{2})(?:[Tt ](\d{2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?)?\s*(Z|z|[+-]\d{2}(?::?\d{2})?)?$/;
+const EPOCH = /^-?\d{9,16}(?:\.\d+)?$/;
+
+function daysInMonth(year: number, month: number): number {
+  return new Date(Date.UTC(year, month, 0)).getUTCDate();
+}
+
+function parseOffset(text: string): number {
+  if (text === 'Z' || text === 'z') return 0;
+  const sign = text[0] === '-' ? -1 : 1;
+  const digits = text.slice(1).replace(':', '');
+  return sign * (Number(digits.slice(0, 2)) * 60 + Number(digits.slice(2, 4) || '0'));
+}
+
+function bad(value: string, what: string): InstantResult {
+  return { ok: false, code: 'bad_time', message: `cannot read the time \`${value.slice(0, 60)}\`: ${what}` };
+}
+
+/**
+ * Reads one timestamp.
+ *
+ * Accepted, in order: epoch seconds or milliseconds (a plain number of 9–16 digits); RFC 3339 /
+ * ISO 8601 calendar date-times, with `T` or a space, optional seconds and fraction, and an
+ * optional `Z` or `±hh:mm` offset; other ISO 8601 forms through luxon; or `options.format`.
+ * A time with an offset is taken as written (`hadOffset`); a time without one is a wall-clock
+ * time in `zone`, and a daylight-saving gap or overlap is resolved by `options.gap`/`overlap`.
+ * A leap second (`:60`, RFC 3339 section 5.7) is read as the first instant of the next minute,
+ * as POSIX time has no leap seconds.
+ */
+export function parseInstant(raw: string, zone: string, options: TimeOptions = DEFAULT_TIME_OPTIONS): InstantResult {
+  const value = raw.trim();
+  if (value === '') return { ok: false, code: 'missing_time', message: 'the time is empty; every row needs a time' };
+  if (options.format) return parseWithFormat(value, zone, options);
+  if (EPOCH.test(value)) {
+    const n = Number(value);
+    const digits = value.replace(/^-/, '').split('.')[0]?.length ?? 0;
+    const ms = options.epoch === 'ms' || (options.epoch === 'auto' && digits >= 12) ? n : n * 1000;
+    return { ok: true, instant: Math.round(ms), offsetMinutes: zoneOffset(zone, Math.round(ms)), hadOffset: true };
+  }
+  const m = RFC3339.exec(value);
+  if (m) {
+    const year = Number(m[1]);
+    const month = Number(m[2]);
+    const day = Number(m[3]);
+    const hour = Number(m[4] ?? 0);
+    const minute = Number(m[5] ?? 0);
+    const second = Number(m[6] ?? 0);
+    const fraction = m[7] ? Math.round(Number(`0.${m[7]}`) * 1000) : 0;
+    if (month < 1 || month > 12) return bad(value, `month ${month} is not 1–12`);
+    if (day < 1 || day > daysInMonth(year, month)) return bad(value, `day ${day} does not exist in ${year}-${String(month).padStart(2, '0')}`);
+    if (hour > 23 || minute > 59 || second > 60) return bad(value, 'the clock time is out of range (hours 00–23, minutes 00–59, seconds 00–60)');
+    const wall = Date.UTC(year, month - 1, day, hour, minute, second, fraction);
+    if (m[8] !== undefined) {
+      const offset = parseOffset(m[8]);
+      if (Math.abs(offset) >= 24 * 60) return bad(value, 'the UTC offset is out of range');
+      return { ok: true, instant: wall - offset * 60000, offsetMinutes: offset, hadOffset: true };
+    }
+    return fromWall(wall, zone, options);
+  }
+  const iso = DateTime.fromISO(value, { setZone: true, zone: 'UTC' });
+  if (iso.isValid) {
+    if (/(?:Z|[+-]\d{2}(?::?\d{2})?)$/i.test(value)) return { ok: true, instant: iso.toMillis(), offsetMinutes: iso.offset, hadOffset: true };
+    const wall = Date.UTC(iso.year, iso.month - 1, iso.day, iso.hour, iso.minute, iso.second, iso.millisecond);
+    return fromWall(wall, zone, options);
+  }
+  return bad(value, 'expected RFC 3339 such as 2026-03-29T08:15:00+02:00, a local time such as 2026-03-29 08:15, epoch seconds or milliseconds, or pass --time-format');
+}
+
+function fromWall(wall: number, zone: string, options: TimeOptions): InstantResult {
+  const resolved = resolveWallClock(wall, zone, options);
+  if (!resolved.ok) return resolved;
+  return { ok: true, instant: resolved.instant, offsetMinutes: resolved.offsetMinutes, hadOffset: false };
+}
+
+function parseWithFormat(value: string, zone: string, options: TimeOptions): InstantResult {
+  const format = options.format as string;
+  const dt = DateTime.fromFormat(value, format, { zone: 'UTC', setZone: true });
+  if (!dt.isValid) return bad(value, `it does not match the format \`${format}\` (${dt.invalidExplanation ?? dt.invalidReason ?? 'no reason given'})`);
+  if (/Z{1,3}|ZZZZ/.test(format.replace(/'[^']*'/g, ''))) return { ok: true, instant: dt.toMillis(), offsetMinutes: dt.offset, hadOffset: true };
+  const wall = Date.UTC(dt.year, dt.month - 1, dt.day, dt.hour, dt.minute, dt.second, dt.millisecond);
+  return fromWall(wall, zone, options);
+}
+
+/** Formats an instant as RFC 3339 UTC with milliseconds (`2026-03-29T06:15:00.000Z`). */
+export function formatUtc(instant: number): string {
+  return new Date(instant).toISOString();
+}
+
+/** Formats an instant as local time with its offset (`2026-03-29T08:15:00.000+02:00`). */
+export function formatLocal(instant: number, offsetMinutes: number): string {
+  const local = new Date(instant + offsetMinutes * 60000).toISOString().slice(0, 23);
+  const sign = offsetMinutes < 0 ? '-' : '+';
+  const abs = Math.abs(offsetMinutes);
+  return `${local}${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
+}

@@ -1,0 +1,85 @@
+import { basename } from 'node:path';
+import type { Diagnostic, RawEntry, ReadItem, SourceRef } from '../types.js';
+import { parseColumnMapping, resolveColumns, type ColumnMapping } from './column-mapping.js';
+import { DEFAULT_TIME_OPTIONS, parseInstant, type TimeOptions } from './parse-instant.js';
+import { readRecords, type ReadRecordsOptions } from './read-records.js';
+import { isValidZone, zoneOffset } from './zone-offset.js';
+import { zoneAtInstant, zoneOnLocalDate, type ZoneTable } from './zone-table.js';
+
+export interface ReadEntriesOptions extends ReadRecordsOptions {
+  columns?: ColumnMapping | string;
+  zones: ZoneTable;
+  time?: TimeOptions;
+}
+
+function reject(code: string, message: string, source: SourceRef): ReadItem {
+  const diagnostic: Diagnostic = { code, message, source, stage: 'ingest' };
+  return { kind: 'reject', diagnostic };
+}
+
+/**
+ * Turns one record into an entry, or a reject with its reason.
+ *
+ * The zone is the record's own `zone` column when present, otherwise the person's zone from
+ * the zone table (for a wall-clock time, the zone in force on that local date). Times with an
+ * offset keep their instant; the entry's offset is always the person's zone offset at that instant.
+ */
+export function recordToEntry(record: Record<string, string>, source: SourceRef, columns: ColumnMapping, zones: ZoneTable, time: TimeOptions): ReadItem {
+  const person = (record[columns.person] ?? '').trim();
+  if (person === '') return reject('missing_person', `the \`${columns.person}\` field is empty; every row needs a person id`, source);
+  const text = record[columns.text] ?? '';
+  if (text.trim() === '') return reject('empty_text', `the \`${columns.text}\` field is empty; there is nothing to score`, source);
+  const timeText = (record[columns.time] ?? '').trim();
+  let zone = columns.zone ? (record[columns.zone] ?? '').trim() : '';
+  if (zone !== '') {
+    if (!isValidZone(zone)) return reject('unknown_zone', `unknown time zone \`${zone}\`; expected an IANA name such as Europe/Brussels`, source);
+  } else {
+    const date = /^\d{4}-\d{2}-\d{2}/.test(timeText) ? timeText.slice(0, 10) : undefined;
+    zone = (date ? zoneOnLocalDate(zones, person, date) : undefined) ?? zoneAtInstant(zones, person, 0) ?? '';
+    if (zone === '') return reject('no_zone', `person \`${person}\` has no time zone; list them in --zones or pass --time-zone`, source);
+  }
+  const parsed = parseInstant(timeText, zone, time);
+  if (!parsed.ok) return reject(parsed.code, parsed.message, source);
+  if (columns.zone === undefined || (record[columns.zone] ?? '').trim() === '') {
+    const atInstant = zoneAtInstant(zones, person, parsed.instant);
+    if (atInstant && atInstant !== zone && parsed.hadOffset) zone = atInstant;
+  }
+  const idText = columns.id ? (record[columns.id] ?? '').trim() : '';
+  const entry: RawEntry = {
+    id: idText !== '' ? idText : `${source.file}:${source.line}`,
+    person,
+    instant: parsed.instant,
+    zone,
+    offsetMinutes: zoneOffset(zone, parsed.instant),
+    text,
+    source,
+  };
+  return { kind: 'entry', entry };
+}
+
+/**
+ * Reads entries from a CSV, TSV, JSON Lines or JSON file as a stream: each row becomes an entry
+ * or a reject with file, line and reason. Throws (before any row) when the header lacks a mapped
+ * column.
+ */
+export async function* readEntries(path: string, options: ReadEntriesOptions): AsyncGenerator<ReadItem> {
+  const time = options.time ?? DEFAULT_TIME_OPTIONS;
+  const mapping = typeof options.columns === 'string' || options.columns === undefined ? parseColumnMapping(options.columns) : options.columns;
+  let columns: ColumnMapping | undefined;
+  const file = basename(path);
+  for await (const item of readRecords(path, options)) {
+    if (item.kind === 'header') {
+      if (item.columns.length > 0) columns = resolveColumns(mapping, item.columns, file);
+      continue;
+    }
+    if (item.kind === 'reject') {
+      yield { kind: 'reject', diagnostic: item.diagnostic };
+      continue;
+    }
+    if (!columns) {
+      // JSON sources have no header: resolve against the first record's keys.
+      columns = resolveColumns(mapping, Object.keys(item.record), file);
+    }
+    yield recordToEntry(item.record, item.source, columns, options.zones, time);
+  }
+}

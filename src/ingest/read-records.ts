@@ -1,0 +1,273 @@
+import { createReadStream } from 'node:fs';
+import { open } from 'node:fs/promises';
+import { basename, extname } from 'node:path';
+import { createInterface } from 'node:readline';
+import Papa from 'papaparse';
+import { inputError, usageError } from '../errors.js';
+import type { Diagnostic, SourceRef } from '../types.js';
+
+/** The table formats lexichron reads. */
+export type TableFormat = 'csv' | 'tsv' | 'jsonl' | 'json';
+
+export interface ReadRecordsOptions {
+  /** Format; by default taken from the file's extension (.csv, .tsv, .jsonl/.ndjson, .json). */
+  format?: TableFormat;
+  /** Field delimiter for delimited text; by default `,` for .csv and a tab for .tsv, or guessed when `auto`. */
+  delimiter?: string;
+  /** Longest accepted field in characters; longer rows are rejected with `field_too_long`. Default 1,000,000. */
+  maxFieldLength?: number;
+}
+
+/** One row read from a table, with its source line, or the reason it was rejected. */
+export type RecordItem =
+  | { kind: 'header'; columns: string[]; source: SourceRef }
+  | { kind: 'record'; record: Record<string, string>; source: SourceRef }
+  | { kind: 'reject'; diagnostic: Diagnostic };
+
+const DEFAULT_MAX_FIELD = 1_000_000;
+
+/** The table format implied by a file name, or undefined when the extension says nothing. */
+export function formatFromPath(path: string): TableFormat | undefined {
+  const ext = extname(path).toLowerCase();
+  if (ext === '.csv') return 'csv';
+  if (ext === '.tsv' || ext === '.tab') return 'tsv';
+  if (ext === '.jsonl' || ext === '.ndjson') return 'jsonl';
+  if (ext === '.json') return 'json';
+  return undefined;
+}
+
+function reject(file: string, line: number, code: string, message: string): RecordItem {
+  return { kind: 'reject', diagnostic: { code, message, source: { file, line }, stage: 'ingest' } };
+}
+
+/**
+ * Reads a table file as a stream of records keyed by column name.
+ *
+ * CSV/TSV go through papaparse with RFC 4180 quoting (quoted fields may hold delimiters,
+ * doubled quotes and line breaks); the first item is always the header. Row-level problems
+ * (unclosed quote, wrong field count, invalid UTF-8, over-long field, bad JSON) become
+ * `reject` items with the physical line of the row's start; nothing is dropped silently.
+ * A byte-order mark is removed. Memory stays bounded by one row.
+ */
+export async function* readRecords(path: string, options: ReadRecordsOptions = {}): AsyncGenerator<RecordItem> {
+  const format = options.format ?? formatFromPath(path);
+  if (!format) {
+    throw usageError(`Cannot tell the format of \`${path}\` from its extension; name it .csv, .tsv, .jsonl or .json, or pass --format csv|tsv|jsonl|json.`);
+  }
+  await assertReadable(path);
+  const maxField = options.maxFieldLength ?? DEFAULT_MAX_FIELD;
+  if (format === 'jsonl') yield* readJsonLines(path, maxField);
+  else if (format === 'json') yield* readJsonArray(path, maxField);
+  else yield* readDelimited(path, format === 'tsv' ? (options.delimiter ?? '\t') : (options.delimiter ?? ','), maxField);
+}
+
+async function assertReadable(path: string): Promise<void> {
+  try {
+    const handle = await open(path, 'r');
+    await handle.close();
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code === 'ENOENT') throw usageError(`Cannot read \`${path}\`: no such file; check the path.`);
+    if (code === 'EISDIR') throw usageError(`Cannot read \`${path}\`: it is a folder; name a file.`);
+    throw inputError(`Cannot read \`${path}\`: ${(error as Error).message}.`);
+  }
+}
+
+function stripBom(text: string): string {
+  return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+}
+
+function countNewlines(fields: readonly string[]): number {
+  let n = 0;
+  for (const field of fields) {
+    for (let i = field.indexOf('\n'); i !== -1; i = field.indexOf('\n', i + 1)) n++;
+  }
+  return n;
+}
+
+function fieldProblem(fields: readonly string[], maxField: number): { code: string; message: string } | undefined {
+  for (const field of fields) {
+    if (field.length > maxField) {
+      return { code: 'field_too_long', message: `a field holds ${field.length} characters, more than the limit of ${maxField}; split the text or raise --max-field` };
+    }
+    if (field.includes('\uFFFD')) {
+      return { code: 'invalid_utf8', message: 'the row holds bytes that are not valid UTF-8 (or a U+FFFD replacement character); re-save the file as UTF-8' };
+    }
+  }
+  return undefined;
+}
+
+/** Reads CSV/TSV rows through papaparse, yielding header, records and rejects with line numbers. */
+async function* readDelimited(path: string, delimiter: string, maxField: number): AsyncGenerator<RecordItem> {
+  const file = basename(path);
+  const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: 1 << 16 });
+  type Row = { data: string[]; errors: Papa.ParseError[] };
+  const queue: Row[] = [];
+  let done = false;
+  let failure: Error | undefined;
+  let wake: (() => void) | undefined;
+  let parser: Papa.Parser | undefined;
+  let paused = false;
+  const notify = (): void => {
+    const w = wake;
+    wake = undefined;
+    w?.();
+  };
+  let first = true;
+  Papa.parse<string[]>(stream as unknown as File, {
+    delimiter,
+    header: false,
+    skipEmptyLines: false,
+    step: (results, p) => {
+      parser = p;
+      let data = results.data;
+      if (first) {
+        first = false;
+        if (data.length > 0) data = [stripBom(data[0] ?? ''), ...data.slice(1)];
+      }
+      queue.push({ data, errors: results.errors });
+      if (queue.length > 512 && !paused) {
+        paused = true;
+        p.pause();
+      }
+      notify();
+    },
+    complete: () => {
+      done = true;
+      notify();
+    },
+    error: (error: Error) => {
+      failure = error;
+      done = true;
+      notify();
+    },
+  });
+
+  let header: string[] | undefined;
+  let line = 1;
+  try {
+    for (;;) {
+      if (queue.length === 0) {
+        if (done) break;
+        if (paused && parser) {
+          paused = false;
+          parser.resume();
+        }
+        await new Promise<void>((resolve) => {
+          wake = resolve;
+        });
+        continue;
+      }
+      const row = queue.shift() as Row;
+      const start = line;
+      line += 1 + countNewlines(row.data);
+      const isBlank = row.data.length === 1 && row.data[0] === '';
+      if (isBlank && row.errors.length === 0) continue;
+      if (!header) {
+        header = row.data.map((h) => h.trim());
+        yield { kind: 'header', columns: header, source: { file, line: start } };
+        continue;
+      }
+      const quoteError = row.errors.find((e) => e.code === 'MissingQuotes' || e.code === 'InvalidQuotes');
+      if (quoteError) {
+        yield reject(file, start, 'unclosed_quote', `a quoted field is not closed (${quoteError.message}); the file may be truncated or a quote is unescaped (double it as "")`);
+        continue;
+      }
+      if (row.data.length !== header.length) {
+        yield reject(file, start, 'field_count', `the row has ${row.data.length} fields but the header has ${header.length}; check the delimiter and quoting of this row`);
+        continue;
+      }
+      const problem = fieldProblem(row.data, maxField);
+      if (problem) {
+        yield reject(file, start, problem.code, problem.message);
+        continue;
+      }
+      const record: Record<string, string> = {};
+      for (let i = 0; i < header.length; i++) record[header[i] as string] = row.data[i] as string;
+      yield { kind: 'record', record, source: { file, line: start } };
+    }
+    if (failure) throw inputError(`Cannot read \`${path}\`: ${failure.message}.`);
+    if (!header) throw inputError(`Cannot read \`${path}\`: the file is empty; expected a header row and at least one data row.`);
+  } finally {
+    stream.destroy();
+  }
+}
+
+function toRecord(value: unknown): Record<string, string> | undefined {
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) return undefined;
+  const record: Record<string, string> = {};
+  for (const [key, v] of Object.entries(value as Record<string, unknown>)) {
+    if (v === null || v === undefined) record[key] = '';
+    else if (typeof v === 'object') record[key] = JSON.stringify(v);
+    else record[key] = String(v);
+  }
+  return record;
+}
+
+/** Reads JSON Lines: one object per line; blank lines are skipped, bad lines rejected. */
+async function* readJsonLines(path: string, maxField: number): AsyncGenerator<RecordItem> {
+  const file = basename(path);
+  const lines = createInterface({ input: createReadStream(path, { encoding: 'utf8' }), crlfDelay: Infinity });
+  let line = 0;
+  let headerSent = false;
+  for await (const raw of lines) {
+    line++;
+    const text = line === 1 ? stripBom(raw) : raw;
+    if (text.trim() === '') continue;
+    if (!headerSent) {
+      headerSent = true;
+      yield { kind: 'header', columns: [], source: { file, line } };
+    }
+    let parsed: unknown;
+    try {
+      parsed = JSON.parse(text);
+    } catch (error) {
+      yield reject(file, line, 'bad_json', `the line is not valid JSON (${(error as Error).message}); each line must hold one JSON object`);
+      continue;
+    }
+    const record = toRecord(parsed);
+    if (!record) {
+      yield reject(file, line, 'bad_json', 'the line holds JSON that is not an object; each line must hold one JSON object such as {"person": …, "time": …, "text": …}');
+      continue;
+    }
+    const problem = fieldProblem(Object.values(record), maxField);
+    if (problem) {
+      yield reject(file, line, problem.code, problem.message);
+      continue;
+    }
+    yield { kind: 'record', record, source: { file, line } };
+  }
+  if (!headerSent) throw inputError(`Cannot read \`${path}\`: the file holds no JSON lines; expected one JSON object per line.`);
+}
+
+/**
+ * Reads a JSON array of objects. The whole file is parsed at once (JSON arrays cannot be
+ * streamed without a streaming parser); prefer JSON Lines for large inputs. Line numbers are
+ * the 1-based position of each element in the array.
+ */
+async function* readJsonArray(path: string, maxField: number): AsyncGenerator<RecordItem> {
+  const file = basename(path);
+  const { readFile } = await import('node:fs/promises');
+  const text = stripBom(await readFile(path, 'utf8'));
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(text);
+  } catch (error) {
+    throw inputError(`Cannot read \`${path}\`: not valid JSON (${(error as Error).message}); expected an array of objects, or use JSON Lines (.jsonl).`);
+  }
+  if (!Array.isArray(parsed)) throw inputError(`Cannot read \`${path}\`: the JSON is not an array; expected [ {…}, {…} ] with one object per entry.`);
+  yield { kind: 'header', columns: [], source: { file, line: 1 } };
+  for (let i = 0; i < parsed.length; i++) {
+    const record = toRecord(parsed[i]);
+    if (!record) {
+      yield reject(file, i + 1, 'bad_json', `element ${i + 1} of the array is not an object; each element must be an object such as {"person": …, "time": …, "text": …}`);
+      continue;
+    }
+    const problem = fieldProblem(Object.values(record), maxField);
+    if (problem) {
+      yield reject(file, i + 1, problem.code, problem.message);
+      continue;
+    }
+    yield { kind: 'record', record, source: { file, line: i + 1 } };
+  }
+}

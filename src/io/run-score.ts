@@ -1,0 +1,143 @@
+import { createHash } from 'node:crypto';
+import { createReadStream } from 'node:fs';
+import { stat } from 'node:fs/promises';
+import { basename } from 'node:path';
+import type { ColumnMapping } from '../ingest/column-mapping.js';
+import type { TimeOptions } from '../ingest/parse-instant.js';
+import { readEntries } from '../ingest/read-entries.js';
+import type { TableFormat } from '../ingest/read-records.js';
+import type { ZoneTable } from '../ingest/zone-table.js';
+import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
+import { csvRow } from '../report/csv.js';
+import { scoreRow, scoresHeader } from '../report/score-rows.js';
+import { scoreColumns, scoreEntry, type ScoreColumn } from '../score/score-entry.js';
+import type { Diagnostic, LexiconRef, Reconciliation, ScoredEntry } from '../types.js';
+import { TOOL_VERSION } from '../version.js';
+import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
+
+/** One input file with how to read it. */
+export interface ScoreInput {
+  path: string;
+  columns?: ColumnMapping | string;
+  format?: TableFormat;
+  delimiter?: string;
+}
+
+export interface RunScoreOptions {
+  inputs: ScoreInput[];
+  lexicons: CompiledLexicon[];
+  zones: ZoneTable;
+  time: TimeOptions;
+  out: string;
+  keepText?: boolean;
+  /** Maps kept text before it is written (redaction). */
+  redact?: (text: string) => string;
+  /** Maps person ids before anything is written (pseudonymization). */
+  person?: (id: string) => string;
+  /** Called every 1,000 rows with the rows read so far. */
+  onProgress?: (rows: number) => void;
+  /** Also receives each scored entry (for the series stage of `run`). */
+  onEntry?: (entry: ScoredEntry) => void;
+}
+
+/** Description of an input file for the manifest. */
+export interface InputRecord {
+  path: string;
+  bytes: number;
+  sha256: string;
+  rows: number;
+}
+
+export interface RunScoreResult {
+  reconciliation: Reconciliation;
+  columns: ScoreColumn[];
+  lexicons: LexiconRef[];
+  inputs: InputRecord[];
+  scoresPath: string;
+  rejectsPath: string;
+  metaPath: string;
+}
+
+/** Where the rejects and the sidecar of a scores file go. */
+export function scoreSidecars(out: string): { rejects: string; meta: string } {
+  const stem = out.replace(/\.csv$/i, '');
+  return { rejects: `${stem}.rejects.csv`, meta: `${out}.meta.json` };
+}
+
+/** SHA-256 and size of a file, streamed. */
+export async function fileDigest(path: string): Promise<{ sha256: string; bytes: number }> {
+  const hash = createHash('sha256');
+  for await (const chunk of createReadStream(path)) hash.update(chunk as Buffer);
+  return { sha256: hash.digest('hex'), bytes: (await stat(path)).size };
+}
+
+/**
+ * Streams every input through reading and scoring into a scores CSV, a rejects CSV
+ * (file, line, stage, code, message; never the text) and a JSON sidecar with lexicon
+ * provenance, column aggregations and the reconciliation. All three are written atomically;
+ * memory does not grow with the number of rows.
+ */
+export async function runScore(options: RunScoreOptions): Promise<RunScoreResult> {
+  const columns = scoreColumns(options.lexicons);
+  const keepText = options.keepText === true;
+  const sidecars = scoreSidecars(options.out);
+  const scores = await openAtomicLineWriter(options.out);
+  const rejects = await openAtomicLineWriter(sidecars.rejects);
+  const reconciliation: Reconciliation = { read: 0, scored: 0, rejected: {}, dropped: {} };
+  const inputs: InputRecord[] = [];
+  const mapPerson = options.person ?? ((id: string) => id);
+  try {
+    await scores.write(csvRow(scoresHeader(columns, options.lexicons, keepText)));
+    await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
+    const addReject = async (d: Diagnostic): Promise<void> => {
+      reconciliation.rejected[d.code] = (reconciliation.rejected[d.code] ?? 0) + 1;
+      await rejects.write(csvRow([d.source?.file ?? '', String(d.source?.line ?? ''), d.stage, d.code, d.message]));
+    };
+    for (const input of options.inputs) {
+      let rows = 0;
+      for await (const item of readEntries(input.path, { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: options.zones, time: options.time })) {
+        rows++;
+        reconciliation.read++;
+        if (reconciliation.read % 1000 === 0) options.onProgress?.(reconciliation.read);
+        if (item.kind === 'reject') {
+          await addReject(item.diagnostic);
+          continue;
+        }
+        const entry = item.entry;
+        entry.person = mapPerson(entry.person);
+        const scored = scoreEntry(entry, options.lexicons, keepText);
+        if (keepText && scored.text !== undefined && options.redact) scored.text = options.redact(scored.text);
+        reconciliation.scored++;
+        options.onEntry?.(scored);
+        await scores.write(scoreRow(scored, columns, options.lexicons, keepText));
+      }
+      const digest = await fileDigest(input.path);
+      inputs.push({ path: basename(input.path), bytes: digest.bytes, sha256: digest.sha256, rows });
+    }
+    options.onProgress?.(reconciliation.read);
+    const meta = {
+      tool: { name: 'lexichron', version: TOOL_VERSION },
+      lexicons: options.lexicons.map((l) => l.ref),
+      columns,
+      inputs,
+      reconciliation,
+      options: { keepText, time: options.time },
+    };
+    await scores.commit();
+    await rejects.commit();
+    await writeFileAtomic(sidecars.meta, JSON.stringify(meta, null, 2) + '\n');
+  } catch (error) {
+    await scores.abort();
+    await rejects.abort();
+    throw error;
+  }
+  return {
+    reconciliation,
+    columns,
+    lexicons: options.lexicons.map((l) => l.ref),
+    inputs,
+    scoresPath: options.out,
+    rejectsPath: sidecars.rejects,
+    metaPath: sidecars.meta,
+  };
+}

@@ -1,0 +1,111 @@
+import { tokenize } from '../text/tokenize.js';
+import type { LexiconRef } from '../types.js';
+import { lexiconHash } from './lexicon-hash.js';
+import type { Aggregation, Lexicon, NegationRule } from './lexicon-types.js';
+import { isWildcard } from './parse-lexicon.js';
+
+/** What one pattern contributes: a weight to each of its categories (by index). */
+export interface Hit {
+  pattern: string;
+  categories: number[];
+  weights: number[];
+}
+
+export interface Phrase extends Hit {
+  tokens: string[];
+}
+
+/**
+ * A lexicon compiled to read-only matchers. Built once per run; scoring never mutates it.
+ */
+export interface CompiledLexicon {
+  ref: LexiconRef;
+  lexicon: Lexicon;
+  language: string;
+  scoring: 'rules' | 'vader';
+  categories: ReadonlyArray<{ name: string; aggregation: Aggregation }>;
+  /** Single-token patterns by normalised token. */
+  single: ReadonlyMap<string, Hit>;
+  /** Multi-token phrases by their first token, longest first. */
+  phrases: ReadonlyMap<string, Phrase[]>;
+  /** Trailing wildcards by stem. */
+  wildcards: ReadonlyMap<string, Hit>;
+  /** Distinct stem lengths, longest first. */
+  stemLengths: number[];
+  negation: NegationRule;
+  negators: ReadonlySet<string>;
+  window: number;
+  /** Midpoint sum of the scale: `flip` maps a weight w to `reflect − w`. */
+  reflect: number;
+  /** For VADER scoring: lower-cased term → valence. */
+  valence: ReadonlyMap<string, number>;
+}
+
+function addHit(map: Map<string, Hit>, key: string, pattern: string, category: number, weight: number): void {
+  const hit = map.get(key);
+  if (!hit) map.set(key, { pattern, categories: [category], weights: [weight] });
+  else if (!hit.categories.includes(category)) {
+    hit.categories.push(category);
+    hit.weights.push(weight);
+  }
+}
+
+/**
+ * Compiles a parsed lexicon. Terms are tokenized with the tokenizer of the lexicon's language,
+ * so phrases, contractions and emoji are matched token by token exactly as the text is.
+ * Only `accepted` terms are compiled.
+ */
+export function compileLexicon(lexicon: Lexicon): CompiledLexicon {
+  const categoryIndex = new Map(lexicon.categories.map((c, i) => [c.name, i]));
+  const single = new Map<string, Hit>();
+  const wildcards = new Map<string, Hit>();
+  const phraseMap = new Map<string, Map<string, Phrase>>();
+  const valence = new Map<string, number>();
+  for (const row of lexicon.terms) {
+    if (row.status !== 'accepted') continue;
+    const c = categoryIndex.get(row.category) as number;
+    if (lexicon.scoring === 'vader') {
+      if (!valence.has(row.term)) valence.set(row.term, row.weight);
+      continue;
+    }
+    if (isWildcard(row.term)) {
+      addHit(wildcards, row.term.slice(0, -1).toLocaleLowerCase(lexicon.language), row.term, c, row.weight);
+      continue;
+    }
+    const tokens = tokenize(row.term, lexicon.language).norm;
+    if (tokens.length === 0) continue;
+    if (tokens.length === 1) {
+      addHit(single, tokens[0] as string, row.term, c, row.weight);
+      continue;
+    }
+    const first = tokens[0] as string;
+    let byText = phraseMap.get(first);
+    if (!byText) phraseMap.set(first, (byText = new Map()));
+    const key = tokens.join(' ');
+    const existing = byText.get(key);
+    if (!existing) byText.set(key, { pattern: row.term, tokens, categories: [c], weights: [row.weight] });
+    else if (!existing.categories.includes(c)) {
+      existing.categories.push(c);
+      existing.weights.push(row.weight);
+    }
+  }
+  const phrases = new Map<string, Phrase[]>();
+  for (const [first, byText] of phraseMap) phrases.set(first, [...byText.values()].sort((a, b) => b.tokens.length - a.tokens.length));
+  const stemLengths = [...new Set([...wildcards.keys()].map((k) => k.length))].sort((a, b) => b - a);
+  return {
+    ref: { name: lexicon.name, version: lexicon.version, sha256: lexiconHash(lexicon), license: lexicon.license, source: lexicon.source },
+    lexicon,
+    language: lexicon.language,
+    scoring: lexicon.scoring,
+    categories: lexicon.categories.map((c) => ({ name: c.name, aggregation: c.aggregation })),
+    single,
+    phrases,
+    wildcards,
+    stemLengths,
+    negation: lexicon.negation,
+    negators: new Set(lexicon.negators),
+    window: lexicon.window,
+    reflect: lexicon.scale[0] + lexicon.scale[1],
+    valence,
+  };
+}

@@ -1,0 +1,101 @@
+import type { CompiledLexicon, Hit } from '../lexicon/compile-lexicon.js';
+import { TokenKind, type Tokens } from '../text/tokenize.js';
+
+/** Per-category totals of one lexicon over one entry. */
+export interface LexiconMatch {
+  /** Sum of (possibly flipped) weights per category. */
+  sums: Float64Array;
+  /** Matched terms per category. */
+  counts: Int32Array;
+  /** Hits preceded by a negator within the window (flipped, dropped or left as they were). */
+  negated: number;
+}
+
+/** Called for each hit (for audits and keyword-in-context); not used on the scoring hot path. */
+export type HitListener = (hit: Hit, start: number, length: number, negated: boolean) => void;
+
+function isNegated(tokens: Tokens, at: number, lexicon: CompiledLexicon): boolean {
+  const stop = Math.max(0, at - lexicon.window);
+  for (let j = at - 1; j >= stop; j--) {
+    if (tokens.kind[j] === TokenKind.Punct) return false;
+    if (lexicon.negators.has(tokens.norm[j] as string)) return true;
+  }
+  return false;
+}
+
+function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon): { hit: Hit; length: number } | undefined {
+  const token = tokens.norm[i] as string;
+  const phrases = lexicon.phrases.get(token);
+  if (phrases) {
+    for (const phrase of phrases) {
+      const n = phrase.tokens.length;
+      if (i + n > tokens.norm.length) continue;
+      let ok = true;
+      for (let k = 1; k < n; k++) {
+        if (tokens.norm[i + k] !== phrase.tokens[k]) {
+          ok = false;
+          break;
+        }
+      }
+      if (ok) return { hit: phrase, length: n };
+    }
+  }
+  const exact = lexicon.single.get(token);
+  if (exact) return { hit: exact, length: 1 };
+  for (const len of lexicon.stemLengths) {
+    if (token.length < len) continue;
+    const wild = lexicon.wildcards.get(token.slice(0, len));
+    if (wild) return { hit: wild, length: 1 };
+  }
+  return undefined;
+}
+
+/**
+ * Matches one lexicon against an entry's tokens.
+ *
+ * At each position the longest pattern wins (phrase, then exact word, then the wildcard with the
+ * longest stem), and the tokens it covers are consumed, so no token is ever counted twice.
+ * A hit is negated when a negator occurs within `window` tokens before it, stopping at
+ * punctuation. Negation rules: `flip` maps each weight w to (scale low + scale high) − w
+ * (−w on a symmetric scale) for `rating` and `sum` categories and drops the hit from `count`
+ * categories (a negated "worried" is not an occurrence of worry); `drop` removes the hit;
+ * `ignore` scores it as written. Negated hits are counted either way.
+ */
+export function matchLexicon(tokens: Tokens, lexicon: CompiledLexicon, onHit?: HitListener): LexiconMatch {
+  const nc = lexicon.categories.length;
+  const sums = new Float64Array(nc);
+  const counts = new Int32Array(nc);
+  let negated = 0;
+  const n = tokens.norm.length;
+  const hasNegation = lexicon.negation !== 'ignore' || lexicon.window > 0;
+  let i = 0;
+  while (i < n) {
+    if (tokens.kind[i] === TokenKind.Punct) {
+      i++;
+      continue;
+    }
+    const found = findHit(tokens, i, lexicon);
+    if (!found) {
+      i++;
+      continue;
+    }
+    const { hit, length } = found;
+    const neg = hasNegation && isNegated(tokens, i, lexicon);
+    onHit?.(hit, i, length, neg);
+    if (neg) negated++;
+    if (!(neg && lexicon.negation === 'drop')) {
+      for (let k = 0; k < hit.categories.length; k++) {
+        const c = hit.categories[k] as number;
+        let w = hit.weights[k] as number;
+        if (neg && lexicon.negation === 'flip') {
+          if (lexicon.categories[c]?.aggregation === 'count') continue;
+          w = lexicon.reflect - w;
+        }
+        sums[c] = (sums[c] as number) + w;
+        counts[c] = (counts[c] as number) + 1;
+      }
+    }
+    i += length;
+  }
+  return { sums, counts, negated };
+}
