@@ -42,15 +42,20 @@ const IDIOM_WORDS: ReadonlySet<string> = new Set(
   [...VADER_IDIOMS.keys(), ...[...VADER_BOOSTERS.keys()].filter((k) => k.includes(' '))].flatMap((k) => k.split(' ')),
 );
 
-/** Python's `str.isupper` as the reference port defines it: some A–Z and no a–z. */
-function isAllCaps(word: string): boolean {
-  let upper = false;
+/** Shape bits of a token: ASCII upper case seen, ASCII lower case seen, non-ASCII seen. */
+const UPPER = 1;
+const LOWER = 2;
+const OTHER = 4;
+
+function shapeOf(word: string): number {
+  let bits = 0;
   for (let k = 0; k < word.length; k++) {
     const c = word.charCodeAt(k);
-    if (c >= 0x61 && c <= 0x7a) return false;
-    if (c >= 0x41 && c <= 0x5a) upper = true;
+    if (c >= 0x61 && c <= 0x7a) bits |= LOWER;
+    else if (c >= 0x41 && c <= 0x5a) bits |= UPPER;
+    else if (c >= 0x80) bits |= OTHER;
   }
-  return upper;
+  return bits;
 }
 
 /** A single token negates when it is a negator or contains "n't" (case-sensitive, as published). */
@@ -70,28 +75,30 @@ function idiomValence(valence: number, raw: readonly string[], i: number): numbe
   const w2 = raw[i - 2]!;
   const w1 = raw[i - 1]!;
   const w0 = raw[i]!;
+  const has0 = IDIOM_WORDS.has(w0);
   const has1 = IDIOM_WORDS.has(w1);
   const has2 = IDIOM_WORDS.has(w2);
   const has3 = IDIOM_WORDS.has(w3);
   let v = valence;
-  if (has1 || has2 || has3 || IDIOM_WORDS.has(w0)) {
-    const sequences = [`${w1} ${w0}`, `${w2} ${w1} ${w0}`, `${w2} ${w1}`, `${w3} ${w2} ${w1}`, `${w3} ${w2}`];
-    for (const seq of sequences) {
-      const idiom = VADER_IDIOMS.get(seq);
-      if (idiom !== undefined) {
-        v = idiom;
-        break;
-      }
-    }
-  }
+  // The reference tries these in order and keeps the first idiom found; a
+  // sequence can only be an idiom when each of its words occurs in one.
+  let idiom: number | undefined;
+  if (has1 && has0) idiom = VADER_IDIOMS.get(`${w1} ${w0}`);
+  if (idiom === undefined && has2 && has1 && has0) idiom = VADER_IDIOMS.get(`${w2} ${w1} ${w0}`);
+  if (idiom === undefined && has2 && has1) idiom = VADER_IDIOMS.get(`${w2} ${w1}`);
+  if (idiom === undefined && has3 && has2 && has1) idiom = VADER_IDIOMS.get(`${w3} ${w2} ${w1}`);
+  if (idiom === undefined && has3 && has2) idiom = VADER_IDIOMS.get(`${w3} ${w2}`);
+  if (idiom !== undefined) v = idiom;
   const n = raw.length;
-  if (n - 1 > i && IDIOM_WORDS.has(w0)) {
-    const w = raw[i + 1]!;
-    const idiom = VADER_IDIOMS.get(`${w0} ${w}`);
-    if (idiom !== undefined) v = idiom;
-    if (n - 1 > i + 1) {
-      const idiom3 = VADER_IDIOMS.get(`${w0} ${w} ${raw[i + 2]!}`);
-      if (idiom3 !== undefined) v = idiom3;
+  if (has0 && n - 1 > i) {
+    const next = raw[i + 1]!;
+    if (IDIOM_WORDS.has(next)) {
+      const two = VADER_IDIOMS.get(`${w0} ${next}`);
+      if (two !== undefined) v = two;
+      if (n - 1 > i + 1 && IDIOM_WORDS.has(raw[i + 2]!)) {
+        const three = VADER_IDIOMS.get(`${w0} ${next} ${raw[i + 2]!}`);
+        if (three !== undefined) v = three;
+      }
     }
   }
   if ((has3 && has2 && VADER_BOOSTERS.has(`${w3} ${w2}`)) || (has2 && has1 && VADER_BOOSTERS.has(`${w2} ${w1}`))) {
@@ -142,10 +149,12 @@ export function scoreVader(text: string, lexicon: VaderLexicon): VaderScores {
   let capsCount = 0;
   for (let k = 0; k < n; k++) {
     const w = raw[k]!;
-    const lw = w.toLowerCase();
+    // All caps as the reference port tests it (Python's `isupper` on A–Z): some A–Z and no a–z.
+    const bits = shapeOf(w);
+    const lw = bits & (UPPER | OTHER) ? w.toLowerCase() : w;
     lower[k] = lw;
     valenceOf[k] = lexicon.get(lw);
-    const c = isAllCaps(w);
+    const c = (bits & (UPPER | LOWER)) === UPPER;
     caps[k] = c;
     if (c) capsCount++;
   }
