@@ -5,18 +5,7 @@
  * emoticons, emoji, attached punctuation, "!" and "?" runs and odd whitespace,
  * so that every rule of VADER is exercised many times.
  */
-
-/** mulberry32: a small seeded generator of uniform numbers in [0, 1). */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { random, type RandomSource } from '../../src/stats/random.js';
 
 const FILLERS = ['the', 'it', 'was', 'today', 'my', 'a', 'I', 'we', 'and', 'day', 'work', 'felt', 'is', 'this', 'that', 'so', 'at', 'of', 'very', 'kind', 'with', 'me', 'x', 'meeting', 'weather'];
 const BOOSTERS = ['very', 'really', 'extremely', 'so', 'totally', 'quite', 'most', 'more', 'barely', 'slightly', 'somewhat', 'kinda', 'sorta', 'hardly', 'little', 'uber', 'friggin', 'incredibly', 'absolutely', 'almost'];
@@ -32,11 +21,11 @@ const PREFIXES = ['(', '"', "'", '-', '.', '!!', '#', '@'];
 const ENDINGS = ['', '.', '!', '!!', '!!!', '!!!!!', '?', '??', '???', '????', '?!', '...', ' :)', ' !'];
 const SPACES = [' ', ' ', ' ', ' ', ' ', ' ', ' ', '  ', '\t', '\u00a0', '\n'];
 
-function pick<T>(rand: () => number, items: readonly T[]): T {
+function pick<T>(rand: RandomSource, items: readonly T[]): T {
   return items[Math.floor(rand() * items.length)]!;
 }
 
-function shape(rand: () => number, word: string): string {
+function shape(rand: RandomSource, word: string): string {
   const r = rand();
   if (r < 0.1) return word.toUpperCase();
   if (r < 0.15) return word.charAt(0).toUpperCase() + word.slice(1);
@@ -50,7 +39,7 @@ function shape(rand: () => number, word: string): string {
  * @param count - how many sentences
  */
 export function vaderSentences(seed: number, lexiconWords: readonly string[], count: number): string[] {
-  const rand = seededRandom(seed);
+  const rand = random(seed);
   // Single-word lexicon entries made of letters: the usual sentiment words.
   const words = lexiconWords.filter((w) => /^[a-z][a-z'-]*$/.test(w));
   const out: string[] = [];

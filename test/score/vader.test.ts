@@ -1,5 +1,10 @@
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { compileLexicon } from '../../src/lexicon/compile-lexicon.js';
+import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
 import { scoreVader, type VaderScores } from '../../src/score/vader.js';
 import { vaderTokens } from '../../src/score/vader-tokens.js';
 import { vaderSentences } from './vader-sentences.js';
@@ -279,5 +284,17 @@ describe('scoreVader parity with npm vader-sentiment 1.1.3 on 2,000 generated se
       .map((r) => r.text);
     expect(differing.length / results.length).toBeLessThanOrEqual(0.01);
     expect(differing).toEqual(knownDifferences.map((d) => d.text));
+  });
+});
+
+describe('scoreVader with the bundled lexicon lexicons/vader.lex.tsv', () => {
+  // Source of the expected map: the VADER lexicon as shipped in npm vader-sentiment 1.1.3.
+  it('reads the same term → valence map as the npm package and scores the README example alike', () => {
+    const file = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../lexicons/vader.lex.tsv');
+    const parsed = parseLexicon(readFileSync(file, 'utf8'));
+    expect(parsed.problems).toEqual([]);
+    const bundled = compileLexicon(parsed.lexicon!).valence;
+    expect(new Map([...bundled].sort())).toEqual(new Map([...lexicon].sort()));
+    expect(rounded(scoreVader('VADER is smart, handsome, and funny.', bundled)).compound).toBe(0.8316);
   });
 });
