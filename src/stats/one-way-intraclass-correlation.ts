@@ -16,25 +16,28 @@ export interface OneWayIntraclassCorrelation {
   df1: number;
   df2: number;
   p: number;
-  /** Average group size adjusted for imbalance, n₀ = (N − Σnᵢ²/N) / (groups − 1). */
+  /** Average group size adjusted for imbalance, n₀ = (N − Σnᵢ²/N) / (groups − 1) (or N/g, see options). */
   n0: number;
   groups: number;
   n: number;
 }
 
 /**
- * One-way random-effects ICC(1) and ICC(1,k) for unbalanced groups (Shrout & Fleiss 1979 case 1;
- * the unbalanced n₀ of Snedecor & Cochran, as in R psych::statsBy `ICC1`/`ICC2`).
+ * One-way random-effects ICC(1) and ICC(1,k) for unbalanced groups (Shrout & Fleiss 1979 case 1,
+ * with the ANOVA estimator's average group size n₀ for unbalanced groups, Snedecor & Cochran,
+ * Statistical Methods, §10.14; equal to R psych::statsBy `ICC1`/`ICC2` for balanced groups).
  *
  * MSb = Σnᵢ(ȳᵢ − ȳ)²/(g − 1), MSw = ΣΣ(y − ȳᵢ)²/(N − g) (two-pass, around group means),
  * ICC(1) = (MSb − MSw)/(MSb + (n₀ − 1)MSw), ICC(1,k) = (MSb − MSw)/MSb.
- * Missing values are skipped. Not estimable with fewer than 2 groups, no within-group
+ * `groupSize: 'mean'` uses the plain mean group size N/g instead of n₀, as R psych::statsBy does
+ * (identical for balanced groups). Missing values are skipped. Not estimable with fewer than 2 groups, no within-group
  * replication, or no variation at all.
  */
 export function oneWayIntraclassCorrelation<T>(
   values: Iterable<T>,
   groupof: (d: T, i: number) => string,
   valueof: (d: T, i: number) => number | undefined | null,
+  options: { groupSize?: 'n0' | 'mean' } = {},
 ): StatResult<OneWayIntraclassCorrelation> {
   const groups = new Map<string, number[]>();
   let i = -1;
@@ -76,7 +79,7 @@ export function oneWayIntraclassCorrelation<T>(
   const msBetween = ssBetween / df1;
   const msWithin = ssWithin / df2;
   if (!(msBetween > 0) && !(msWithin > 0)) return notEstimable('zero_variance', 'the variable is constant, so no intraclass correlation can be computed');
-  const n0 = (n - sumSquaredSizes / n) / df1;
+  const n0 = options.groupSize === 'mean' ? n / g : (n - sumSquaredSizes / n) / df1;
   const f = msWithin > 0 ? msBetween / msWithin : Infinity;
   const p = Number.isFinite(f) ? 1 - fCdf(f, df1, df2) : 0;
   const icc1 = (msBetween - msWithin) / (msBetween + (n0 - 1) * msWithin);

@@ -1,0 +1,58 @@
+import { groupBy } from '../stats/group-by.js';
+import { isNumber } from '../stats/is-number.js';
+import { mean } from '../stats/mean.js';
+import { studentTTwoSidedP } from '../stats/distributions.js';
+import { fisherInterval, pearsonCorrelation, type Correlation } from '../stats/pearson-correlation.js';
+import type { StatResult } from '../stats/stat-result.js';
+import type { AlignedPair } from './aligned-pair.js';
+
+/** A person's means of x and y over their complete pairs. */
+export interface PersonMeans {
+  person: string;
+  pairs: number;
+  x: number;
+  y: number;
+}
+
+/**
+ * Person means of x and y, over each person's complete pairs only (so both means rest on the same
+ * occasions), in sorted person order. Persons without a complete pair are left out.
+ */
+export function personMeans(pairs: Iterable<AlignedPair>): PersonMeans[] {
+  const groups = groupBy(pairs, (d) => d.person);
+  const out: PersonMeans[] = [];
+  for (const person of [...groups.keys()].sort()) {
+    const complete = (groups.get(person) ?? []).filter((d) => isNumber(d.x) && isNumber(d.y));
+    if (complete.length === 0) continue;
+    out.push({ person, pairs: complete.length, x: mean(complete, (d) => d.x) as number, y: mean(complete, (d) => d.y) as number });
+  }
+  return out;
+}
+
+/** How person means are weighted in {@link betweenPersonCorrelation}. */
+export type BetweenWeighting = 'persons' | 'observations';
+
+/**
+ * Between-person correlation: Pearson's r of the person means of x and y.
+ *
+ * `persons` (default): one point per person, unweighted, as Bland & Altman's (1995) correlation
+ * of subject means. `observations`: each person mean weighted by the person's number of pairs,
+ * which is what R psych::statsBy reports as `rbg` (it correlates the group means attached to every
+ * row). Either way n, df and the Fisher-z interval (n − 3) count persons, not observations.
+ */
+export function betweenPersonCorrelation(pairs: Iterable<AlignedPair>, level = 0.95, weighting: BetweenWeighting = 'persons'): StatResult<Correlation> {
+  const means = personMeans(pairs);
+  const unweighted = pearsonCorrelation(means, (d) => d.x, (d) => d.y, { level });
+  if (weighting === 'persons' || !unweighted.ok) return unweighted;
+  const replicated = pearsonCorrelation(
+    means.flatMap((m) => Array.from({ length: m.pairs }, () => m)),
+    (d) => d.x,
+    (d) => d.y,
+  );
+  if (!replicated.ok) return replicated;
+  const r = replicated.r;
+  const [ciLow, ciHigh] = fisherInterval(r, means.length - 3, level);
+  const df = means.length - 2;
+  const p = Math.abs(r) === 1 ? 0 : studentTTwoSidedP(r * Math.sqrt(df / (1 - r * r)), df);
+  return { ...unweighted, r, p, ciLow, ciHigh };
+}
