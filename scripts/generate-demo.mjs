@@ -14,7 +14,7 @@
  * Usage: node scripts/generate-demo.mjs [--out DIR] [--seed TEXT]
  * Plain Node ESM; needs only node built-ins and luxon. Deterministic: same seed, same bytes.
  */
-import { DateTime } from 'luxon';
+import { DateTime, IANAZone } from 'luxon';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -254,16 +254,19 @@ function simulateLatent(seed, p, dates) {
   const startMs = DateTime.fromISO(`${dates[0]}T00:00`, { zone: 'UTC' }).minus({ hours: 24 }).toMillis();
   const hours = (dates.length + 3) * 24;
   const eta = new Float64Array(hours);
+  const home = p.zone;
+  const moved = p.person === MOVER.person ? MOVER.to : undefined;
+  const moveMs = moved ? DateTime.fromISO(`${MOVER.from}T00:00`, { zone: MOVER.to }).toMillis() : Infinity;
   let f = rng.normal(0, L.hourSd);
   for (let h = 0; h < hours; h++) {
     f = L.hourRho * f + Math.sqrt(1 - L.hourRho ** 2) * rng.normal(0, L.hourSd);
     const ms = startMs + h * 3600000;
-    const local0 = DateTime.fromMillis(ms, { zone: 'UTC' }).setZone(p.zone);
-    const zone = zoneFor(p.person, p.zone, local0.toISODate());
-    const local = zone === p.zone ? local0 : local0.setZone(zone);
-    const studyDay = local.minus({ hours: 4 }).toISODate();
-    const hourOfDay = local.hour + local.minute / 60;
-    const weekend = DateTime.fromISO(studyDay, { zone: 'UTC' }).weekday >= 6 ? 1 : 0;
+    const zone = moved && ms >= moveMs ? moved : home;
+    const local = new Date(ms + offsetAt(zone, ms) * 60000); // wall clock read through UTC getters
+    const study = new Date(local.getTime() - 4 * 3600000);
+    const studyDay = study.toISOString().slice(0, 10);
+    const hourOfDay = local.getUTCHours() + local.getUTCMinutes() / 60;
+    const weekend = study.getUTCDay() === 0 || study.getUTCDay() === 6 ? 1 : 0;
     eta[h] = p.mu + (dayValue.get(studyDay) ?? 0) + f
       + p.diurnalAmplitude * Math.cos((2 * Math.PI * (hourOfDay - L.diurnalPeakHour)) / 24)
       + L.weekendLift * weekend;
@@ -400,23 +403,34 @@ function diaryEntry(rng, p, eta, late) {
 }
 
 // ---------------------------------------------------------------- one person
-/** Builds a local wall-clock time; returns undefined when it does not exist or is ambiguous (DST). */
-function wallClock(isoDate, minuteOfDay, zone) {
-  let date = DateTime.fromISO(isoDate, { zone: 'UTC' });
-  let m = Math.round(minuteOfDay);
-  if (m >= 1440) { date = date.plus({ days: 1 }); m -= 1440; }
-  const hour = Math.floor(m / 60), minute = m % 60;
-  const dt = DateTime.fromObject({ year: date.year, month: date.month, day: date.day, hour, minute }, { zone });
-  if (dt.hour !== hour || dt.minute !== minute) return undefined; // spring-forward gap
-  const later = dt.plus({ hours: 1 });
-  const earlier = dt.minus({ hours: 1 });
-  if ((later.hour === hour && later.day === dt.day) || (earlier.hour === hour && earlier.day === dt.day)) return undefined; // overlap
-  return dt;
+const zoneCache = new Map();
+/** UTC offset in minutes of `zoneName` at `ms`, cached per hour (all offsets here change on whole hours). */
+function offsetAt(zoneName, ms) {
+  let zone = zoneCache.get(zoneName);
+  if (!zone) zoneCache.set(zoneName, (zone = { iana: IANAZone.create(zoneName), hours: new Map() }));
+  const hour = Math.floor(ms / 3600000);
+  let o = zone.hours.get(hour);
+  if (o === undefined) zone.hours.set(hour, (o = zone.iana.offset(hour * 3600000)));
+  return o;
 }
 
 const pad = (n) => String(n).padStart(2, '0');
-/** `YYYY-MM-DD HH:mm` local wall clock, without an offset (no locale involved). */
-const fmt = (dt) => `${dt.year}-${pad(dt.month)}-${pad(dt.day)} ${pad(dt.hour)}:${pad(dt.minute)}`;
+
+/**
+ * A local wall-clock time `minuteOfDay` minutes after midnight of `isoDate` (may pass midnight) in `zone`.
+ * Returns {ms, hour, time} with time as `YYYY-MM-DD HH:mm`, or undefined when the wall-clock time
+ * does not exist (spring-forward gap) or exists twice (autumn overlap).
+ */
+function wallClock(isoDate, minuteOfDay, zone) {
+  const [y, mo, d] = isoDate.split('-').map(Number);
+  const localMs = Date.UTC(y, mo - 1, d, 0, Math.round(minuteOfDay));
+  const candidates = new Set([offsetAt(zone, localMs - 86400000), offsetAt(zone, localMs + 86400000)]);
+  const valid = [...candidates].map((o) => localMs - o * 60000).filter((t) => localMs - offsetAt(zone, t) * 60000 === t);
+  if (valid.length !== 1) return undefined;
+  const w = new Date(localMs);
+  const time = `${w.getUTCFullYear()}-${pad(w.getUTCMonth() + 1)}-${pad(w.getUTCDate())} ${pad(w.getUTCHours())}:${pad(w.getUTCMinutes())}`;
+  return { ms: valid[0], hour: w.getUTCHours(), time };
+}
 
 function simulatePerson(seed, p, dates) {
   const latent = simulateLatent(seed, p, dates);
@@ -437,7 +451,7 @@ function simulatePerson(seed, p, dates) {
     // latent mean over the prompt window, for the realized statistics in truth.json
     for (let h = 9; h <= 21; h++) {
       const dt = wallClock(date, h * 60, zone);
-      if (dt) day.latent.push(latent.at(dt.toMillis()));
+      if (dt) day.latent.push(latent.at(dt.ms));
     }
     // prompts: promptsPerDay stratified random times between 09:00 and 21:00
     const n = p.promptsPerDay;
@@ -450,14 +464,14 @@ function simulatePerson(seed, p, dates) {
       if (!dt) continue;
       day.prompts++;
       if (!answered) {
-        ratings.push({ person: p.person, ms: dt.toMillis(), time: fmt(dt), mood: '', calm: '' });
+        ratings.push({ person: p.person, ms: dt.ms, time: dt.time, mood: '', calm: '' });
         continue;
       }
-      const eta = latent.at(dt.toMillis());
+      const eta = latent.at(dt.ms);
       const mood = Math.round(clamp(R.mood.intercept + R.mood.slopeOnLatent * eta + p.moodBias + rateRng.normal(0, R.mood.noiseSd), 0, 100));
       const calm = Math.round(clamp(R.calm.intercept + R.calm.slopeOnLatent * eta + p.calmBias + rateRng.normal(0, R.calm.noiseSd), 1, 7));
       const skipCalm = rateRng.chance(0.02);
-      ratings.push({ person: p.person, ms: dt.toMillis(), time: fmt(dt), mood: String(mood), calm: skipCalm ? '' : String(calm) });
+      ratings.push({ person: p.person, ms: dt.ms, time: dt.time, mood: String(mood), calm: skipCalm ? '' : String(calm) });
       day.answered++;
       day.moods.push(mood);
     }
@@ -473,10 +487,10 @@ function simulatePerson(seed, p, dates) {
         if (!dt) continue;
         // keep clear of 02:00–03:59, where clock changes happen in these zones
         if (dt.hour >= 2 && dt.hour < 4) continue;
-        const eta = latent.at(dt.toMillis());
+        const eta = latent.at(dt.ms);
         const late = t.minute >= 21.5 * 60;
         const m = t.kind === 'short' ? shortMessage(textRng, p, eta, late) : diaryEntry(textRng, p, eta, late);
-        messages.push({ person: p.person, ms: dt.toMillis(), time: fmt(dt), text: m.text, kind: t.kind });
+        messages.push({ person: p.person, ms: dt.ms, time: dt.time, text: m.text, kind: t.kind });
         day.signs.push(...m.signs);
       }
     }
