@@ -284,6 +284,8 @@ describe('scoreVader parity with npm vader-sentiment 1.1.3 on 2,000 generated se
       .map((r) => r.text);
     expect(differing.length / results.length).toBeLessThanOrEqual(0.01);
     expect(differing).toEqual(knownDifferences.map((d) => d.text));
+    const maxDiff = Math.max(...results.flatMap((r) => [r.ours.pos - r.npm.pos, r.ours.neu - r.npm.neu, r.ours.neg - r.npm.neg].map(Math.abs)));
+    expect(maxDiff).toBeLessThanOrEqual(0.0005 + 1e-12);
   });
 });
 
