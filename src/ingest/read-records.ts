@@ -97,96 +97,93 @@ function fieldProblem(fields: readonly string[], maxField: number): { code: stri
   return undefined;
 }
 
-/** Reads CSV/TSV rows through papaparse, yielding header, records and rejects with line numbers. */
+/** Characters a single row may span before reading stops: guards against a quote that is never closed. */
+const MAX_ROW_CHARS = 64 * 1024 * 1024;
+
+/**
+ * The line break of delimited text, judged outside quoted fields: `\r\n`, `\n` or `\r`;
+ * undefined while `text` holds no line break yet (unless `final`).
+ */
+export function guessLineBreak(text: string, final = false): '\n' | '\r' | '\r\n' | undefined {
+  const outside = text.replace(/"[^"]*"?/g, '');
+  const n = outside.indexOf('\n');
+  const r = outside.indexOf('\r');
+  if (n === -1 && (r === -1 || (r === outside.length - 1 && !final))) return final ? '\n' : undefined;
+  if (r !== -1 && (n === -1 || r < n)) return outside[r + 1] === '\n' ? '\r\n' : '\r';
+  return '\n';
+}
+
+/**
+ * Reads CSV/TSV rows with papaparse's RFC 4180 parser, yielding header, records and rejects with
+ * line numbers. The file is read chunk by chunk with `for await` (so a slow consumer pauses the
+ * file, and memory stays bounded by one row plus a chunk); each batch of complete rows is parsed
+ * synchronously and the unfinished last row is carried into the next batch. A carried row is
+ * parsed again only once the buffer has doubled, so a long quoted field costs linear time.
+ */
 async function* readDelimited(path: string, delimiter: string, maxField: number): AsyncGenerator<RecordItem> {
   const file = basename(path);
   const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: 1 << 16 });
-  type Row = { data: string[]; errors: Papa.ParseError[] };
-  const queue: Row[] = [];
-  let done = false;
-  let failure: Error | undefined;
-  let wake: (() => void) | undefined;
-  let parser: Papa.Parser | undefined;
-  let paused = false;
-  const notify = (): void => {
-    const w = wake;
-    wake = undefined;
-    w?.();
-  };
-  let first = true;
-  Papa.parse<string[]>(stream as unknown as File, {
-    delimiter,
-    header: false,
-    skipEmptyLines: false,
-    step: (results, p) => {
-      parser = p;
-      let data = results.data;
-      if (first) {
-        first = false;
-        if (data.length > 0) data = [stripBom(data[0] ?? ''), ...data.slice(1)];
-      }
-      queue.push({ data, errors: results.errors });
-      if (queue.length > 512 && !paused) {
-        paused = true;
-        p.pause();
-      }
-      notify();
-    },
-    complete: () => {
-      done = true;
-      notify();
-    },
-    error: (error: Error) => {
-      failure = error;
-      done = true;
-      notify();
-    },
-  });
-
   let header: string[] | undefined;
   let line = 1;
-  try {
-    for (;;) {
-      if (queue.length === 0) {
-        if (done) break;
-        if (paused && parser) {
-          paused = false;
-          parser.resume();
-        }
-        await new Promise<void>((resolve) => {
-          wake = resolve;
-        });
-        continue;
-      }
-      const row = queue.shift() as Row;
+  let newline: '\n' | '\r' | '\r\n' | undefined;
+  let pending = '';
+  let retryAt = 0;
+  let first = true;
+
+  function* emit(rows: string[][], errors: Papa.ParseError[]): Generator<RecordItem> {
+    const errorByRow = new Map<number, Papa.ParseError>();
+    for (const e of errors) if ((e.code === 'MissingQuotes' || e.code === 'InvalidQuotes') && typeof e.row === 'number' && !errorByRow.has(e.row)) errorByRow.set(e.row, e);
+    for (let r = 0; r < rows.length; r++) {
+      const data = rows[r] as string[];
       const start = line;
-      line += 1 + countNewlines(row.data);
-      const isBlank = row.data.length === 1 && row.data[0] === '';
-      if (isBlank && row.errors.length === 0) continue;
+      line += 1 + countNewlines(data);
+      const quoteError = errorByRow.get(r);
+      const isBlank = data.length === 1 && data[0] === '';
+      if (isBlank && !quoteError) continue;
       if (!header) {
-        header = row.data.map((h) => h.trim());
+        header = data.map((h) => h.trim());
         yield { kind: 'header', columns: header, source: { file, line: start } };
         continue;
       }
-      const quoteError = row.errors.find((e) => e.code === 'MissingQuotes' || e.code === 'InvalidQuotes');
       if (quoteError) {
         yield reject(file, start, 'unclosed_quote', `a quoted field is not closed (${quoteError.message}); the file may be truncated or a quote is unescaped (double it as "")`);
         continue;
       }
-      if (row.data.length !== header.length) {
-        yield reject(file, start, 'field_count', `the row has ${row.data.length} fields but the header has ${header.length}; check the delimiter and quoting of this row`);
+      if (data.length !== header.length) {
+        yield reject(file, start, 'field_count', `the row has ${data.length} fields but the header has ${header.length}; check the delimiter and quoting of this row`);
         continue;
       }
-      const problem = fieldProblem(row.data, maxField);
+      const problem = fieldProblem(data, maxField);
       if (problem) {
         yield reject(file, start, problem.code, problem.message);
         continue;
       }
       const record: Record<string, string> = {};
-      for (let i = 0; i < header.length; i++) record[header[i] as string] = row.data[i] as string;
+      for (let i = 0; i < header.length; i++) record[header[i] as string] = data[i] as string;
       yield { kind: 'record', record, source: { file, line: start } };
     }
-    if (failure) throw inputError(`Cannot read \`${path}\`: ${failure.message}.`);
+  }
+
+  try {
+    for await (const chunk of stream as AsyncIterable<string>) {
+      pending += first ? stripBom(chunk) : chunk;
+      first = false;
+      newline ??= guessLineBreak(pending);
+      if (newline === undefined || pending.length < retryAt) continue;
+      const parsed = new Papa.Parser({ delimiter, newline }).parse(pending, 0, true);
+      const cursor = parsed.meta.cursor;
+      pending = pending.slice(cursor);
+      retryAt = cursor === 0 ? pending.length * 2 : 0;
+      if (pending.length > MAX_ROW_CHARS) {
+        throw inputError(`Cannot read \`${path}\`: the row starting on line ${line} runs on for more than ${MAX_ROW_CHARS} characters; a quote is probably not closed (double quotes inside a field as "") or the file is not ${delimiter === '\t' ? 'tab' : `\`${delimiter}\``}-delimited text.`);
+      }
+      yield* emit(parsed.data as string[][], parsed.errors);
+    }
+    if (pending !== '') {
+      const parsed = new Papa.Parser({ delimiter, newline: newline ?? guessLineBreak(pending, true) }).parse(pending, 0, false);
+      pending = '';
+      yield* emit(parsed.data as string[][], parsed.errors);
+    }
     if (!header) throw inputError(`Cannot read \`${path}\`: the file is empty; expected a header row and at least one data row.`);
   } finally {
     stream.destroy();
