@@ -1,0 +1,17 @@
+export { alignRatingsToBins } from './align-ratings-to-bins.js';
+export { alignRatingsToWindows, type WindowOptions } from './align-ratings-to-windows.js';
+export type { AlignedPair } from './aligned-pair.js';
+export type { AlignedRow } from './aligned-row.js';
+export { analyzePair, type PairAnalysis, type PairAnalysisOptions } from './analyze-pair.js';
+export { betweenPersonCorrelation, personMeans, type BetweenWeighting, type PersonMeans } from './between-person-correlation.js';
+export { binsPerPerson, type BinsPerPerson } from './bins-per-person.js';
+export { entryScoreColumns, entryScoreFromRecord, type EntryScore } from './entry-score.js';
+export { pairVerdict, VERDICT_THRESHOLDS, type Verdict, type VerdictWarning } from './pair-verdict.js';
+export { perPersonCorrelations, type PerPersonSummary, type PersonCorrelation } from './per-person-correlations.js';
+export type { Rating } from './rating.js';
+export { ratingColumns } from './rating-columns.js';
+export { parseRatingScales, scaleOf, type RatingScale } from './rating-scale.js';
+export { ratingValues } from './rating-values.js';
+export { seriesBinFromRecord, seriesScoreColumns, type SeriesBin } from './series-bin.js';
+export { DEFAULT_VALIDATE_OPTIONS, validateSeries, type ValidateInput, type ValidateOptions, type ValidationResult } from './validate-series.js';
+export { wordCountReliability, type BandReliability, type WordCountReliability, type WordCountReliabilityOptions } from './word-count-reliability.js';

@@ -1,0 +1,37 @@
+import type { Diagnostic, SourceRef } from '../types.js';
+import { scaleOf, type RatingScale } from './rating-scale.js';
+
+/**
+ * Reads the rating columns of one self-report row against their declared scales.
+ *
+ * An empty field is a missing rating (no diagnostic). A value that is not a number becomes
+ * `rating_not_numeric`, one outside its declared scale `rating_out_of_scale`; either way the value
+ * is left out (`undefined`) and a Diagnostic with the row's source explains why, while the row's
+ * other ratings are kept.
+ */
+export function ratingValues(
+  record: Readonly<Record<string, string>>,
+  columns: readonly string[],
+  scales: ReadonlyMap<string, RatingScale>,
+  source: SourceRef,
+): { values: Record<string, number | undefined>; diagnostics: Diagnostic[] } {
+  const values: Record<string, number | undefined> = {};
+  const diagnostics: Diagnostic[] = [];
+  for (const column of columns) {
+    const text = (record[column] ?? '').trim();
+    values[column] = undefined;
+    if (text === '') continue;
+    const value = /^[-+]?(\d+(\.\d*)?|\.\d+)([eE][-+]?\d+)?$/.test(text) ? Number(text) : NaN;
+    if (!Number.isFinite(value)) {
+      diagnostics.push({ code: 'rating_not_numeric', message: `rating \`${column}\` is \`${text.slice(0, 40)}\`, not a number; the value is left out`, source, stage: 'validate' });
+      continue;
+    }
+    const scale = scaleOf(scales, column);
+    if (scale && (value < scale.min || value > scale.max)) {
+      diagnostics.push({ code: 'rating_out_of_scale', message: `rating \`${column}\` is ${text}, outside its declared scale ${scale.min} to ${scale.max}; the value is left out`, source, stage: 'validate' });
+      continue;
+    }
+    values[column] = value;
+  }
+  return { values, diagnostics };
+}
