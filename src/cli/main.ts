@@ -3,11 +3,13 @@ import { exitCodeFor, LexichronError } from '../errors.js';
 import { TOOL_VERSION } from '../version.js';
 import { registerLexicons } from './lexicons.js';
 import { registerScore } from './score.js';
+import { registerSeries } from './series.js';
+import { registerRun } from './run.js';
 
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
-const commands: Register[] = [registerScore, registerLexicons];
+const commands: Register[] = [registerRun, registerScore, registerSeries, registerLexicons];
 
 /** Builds the commander program with every command registered. */
 export function buildProgram(): Command {

@@ -1,0 +1,29 @@
+import type { Command } from 'commander';
+import { relative } from 'node:path';
+import { runStudy } from '../pipeline.js';
+import { reconciliationText } from '../report/reconciliation-text.js';
+import { inputError } from '../errors.js';
+import { parseMaxRejects, progressReporter, tooManyRejects } from './common-options.js';
+import { studyStages } from './study-stages.js';
+
+/** `lexichron run STUDY.json`: score, series and the optional stages in one command. */
+export function registerRun(program: Command): void {
+  program
+    .command('run')
+    .description('run a whole study from its study file: score, series, validation, dynamics, term audit, report')
+    .argument('<study>', 'study file (JSON; see README "Study file")')
+    .option('--seed <n>', 'seed for bootstrap and surrogate draws', '20261201')
+    .action(async (studyPath: string, opts: Record<string, unknown>) => {
+      const progress = progressReporter('scored');
+      const result = await runStudy(studyPath, { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update }).finally(progress.stop);
+      process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
+      const s = result.series;
+      process.stderr.write(`series: ${s.persons} persons, ${s.bins} bins, ${s.observed} observed\n`);
+      for (const [name, stage] of Object.entries(result.stages)) process.stderr.write(`${name}: ${stage.outputs.map((o) => o.path).join(', ')}\n`);
+      process.stdout.write(`outputs in ${relative(process.cwd(), result.outDir) || '.'}/ (manifest.json lists every file with its SHA-256)\n`);
+      const study = result.manifest.parameters.study as { maxRejects: string };
+      if (tooManyRejects(result.score.reconciliation, parseMaxRejects(study.maxRejects))) {
+        throw inputError(`Too many rejected rows (limit ${study.maxRejects}); see scores.rejects.csv in the output folder for each row's reason.`);
+      }
+    });
+}

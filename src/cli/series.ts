@@ -1,0 +1,29 @@
+import type { Command } from 'commander';
+import { dirname, join } from 'node:path';
+import { writeFileAtomic } from '../io/atomic-write.js';
+import { runSeries } from '../io/run-series.js';
+import { dataPackage } from '../report/data-dictionary.js';
+import { addSeriesOptions, parseReducers, seriesOptionsFrom } from './series-options.js';
+
+/** `lexichron series SCORES --bin DURATION --out FILE` */
+export function registerSeries(program: Command): void {
+  const command = program
+    .command('series')
+    .description('bin per-entry scores into regular per-person series in local time, with gaps explicit')
+    .argument('<scores>', 'scores CSV written by `lexichron score`')
+    .requiredOption('-o, --out <file>', 'long series CSV (wide, event-level and rejects files and datapackage.json go beside it)');
+  addSeriesOptions(command);
+  command.action(async (scores: string, opts: Record<string, unknown>) => {
+    const reducers = parseReducers(opts.aggregate as string | undefined);
+    const result = await runSeries({
+      ...seriesOptionsFrom(opts),
+      scores,
+      out: String(opts.out),
+      reducers: typeof reducers === 'string' ? undefined : reducers,
+      allReducer: typeof reducers === 'string' ? reducers : undefined,
+    });
+    await writeFileAtomic(join(dirname(String(opts.out)), 'datapackage.json'), JSON.stringify(dataPackage('lexichron-series', 'lexichron series', result.resources), null, 2) + '\n');
+    const missing = Object.entries(result.missing).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
+    process.stderr.write(`${result.persons} persons, ${result.bins} bins (${result.observed} observed; missing: ${missing}); ${result.entries} entries, ${result.excludedEntries} in excluded hours\nlong:   ${result.longPath}\nwide:   ${result.widePath}\nevents: ${result.eventsPath}\n`);
+  });
+}

@@ -1,0 +1,233 @@
+import { readFile } from 'node:fs/promises';
+import { basename, dirname } from 'node:path';
+import { inputError, usageError } from '../errors.js';
+import { readRecords } from '../ingest/read-records.js';
+import { formatLocal } from '../ingest/parse-instant.js';
+import { isValidZone, zoneOffset } from '../ingest/zone-offset.js';
+import { csvRow } from '../report/csv.js';
+import { tableResource, type TableResource } from '../report/data-dictionary.js';
+import { formatNumber } from '../report/format-number.js';
+import { seriesHeader, seriesRow, type SeriesLayout } from '../report/series-rows.js';
+import { SCORE_ID_COLUMNS } from '../report/score-rows.js';
+import type { BinReducer } from '../series/bin-accumulator.js';
+import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesOptions, type SeriesRow } from '../series/build-series.js';
+import { dateOfDayNumber } from '../series/local-day.js';
+import type { Diagnostic } from '../types.js';
+import { openAtomicLineWriter } from './atomic-write.js';
+
+/** Score column metadata from a scores sidecar (`scores.csv.meta.json`). */
+export interface ScoreColumnMeta {
+  name: string;
+  aggregation: 'count' | 'rating' | 'sum' | 'vader';
+}
+
+export interface RunSeriesOptions extends Omit<SeriesOptions, 'reducers'> {
+  scores: string;
+  /** The long series CSV; the wide and event files go beside it. */
+  out: string;
+  /** Reducer per score column name, overriding the defaults. */
+  reducers?: Record<string, BinReducer>;
+  /** One reducer for every column not named in `reducers`. */
+  allReducer?: BinReducer;
+  /** Only these score columns (default: all). */
+  columns?: string[];
+}
+
+export interface RunSeriesResult {
+  longPath: string;
+  widePath: string;
+  eventsPath: string;
+  rejectsPath: string;
+  persons: number;
+  bins: number;
+  observed: number;
+  missing: Record<string, number>;
+  entries: number;
+  excludedEntries: number;
+  rejected: Record<string, number>;
+  columns: Array<ScoreColumnMeta & { reducer: BinReducer }>;
+  resources: TableResource[];
+}
+
+/** Default reducer: word-weighted mean for `count` and `rating` categories, entry mean for `sum` and VADER. */
+export function defaultReducer(aggregation: ScoreColumnMeta['aggregation']): BinReducer {
+  return aggregation === 'count' || aggregation === 'rating' ? 'weighted' : 'mean';
+}
+
+/** Paths of the files written beside the long series file. */
+export function seriesSidecars(out: string): { wide: string; events: string; rejects: string } {
+  const stem = out.replace(/\.csv$/i, '');
+  return { wide: `${stem}.wide.csv`, events: `${stem}.events.csv`, rejects: `${stem}.rejects.csv` };
+}
+
+async function readScoreMeta(scores: string, header: readonly string[]): Promise<ScoreColumnMeta[]> {
+  try {
+    const meta = JSON.parse(await readFile(`${scores}.meta.json`, 'utf8')) as { columns?: ScoreColumnMeta[] };
+    if (Array.isArray(meta.columns)) return meta.columns.filter((c) => header.includes(c.name));
+  } catch {
+    // No sidecar: infer the score columns from the header.
+  }
+  return header
+    .filter((h) => !(SCORE_ID_COLUMNS as readonly string[]).includes(h) && h !== 'text' && !h.endsWith('.n') && !h.endsWith('.negated'))
+    .map((name) => ({ name, aggregation: 'count' as const }));
+}
+
+/**
+ * Turns a scores file into regular per-person series: streams the entries into one accumulator
+ * per (person, bin), then writes, atomically, the long series, a wide file (one row per person,
+ * one column per score and bin index), the event-level file (one row per entry with its exact
+ * time and bin) and a rejects file. Memory grows with bins, not entries.
+ */
+export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesResult> {
+  const file = basename(options.scores);
+  let header: string[] | undefined;
+  let metas: ScoreColumnMeta[] = [];
+  let idx: number[] = [];
+  let nIdx: number[] = [];
+  const sidecars = seriesSidecars(options.out);
+  const events = await openAtomicLineWriter(sidecars.events);
+  const rejects = await openAtomicLineWriter(sidecars.rejects);
+  const rejected: Record<string, number> = {};
+  let entries = 0;
+  let state: ReturnType<typeof createSeriesState> | undefined;
+  const reject = async (d: Diagnostic): Promise<void> => {
+    rejected[d.code] = (rejected[d.code] ?? 0) + 1;
+    await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, d.message]));
+  };
+  try {
+    await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
+    for await (const item of readRecords(options.scores)) {
+      if (item.kind === 'header') {
+        header = item.columns;
+        const missing = ['person', 'time_utc', 'zone', 'words'].filter((c) => !header?.includes(c));
+        if (missing.length > 0) {
+          throw usageError(`Cannot read \`${file}\` as scores: no column ${missing.map((m) => `\`${m}\``).join(', ')}. The series stage reads the output of \`lexichron score\`; score the text first.`);
+        }
+        metas = await readScoreMeta(options.scores, header);
+        if (options.columns) {
+          const unknown = options.columns.filter((c) => !metas.some((m) => m.name === c));
+          if (unknown.length > 0) throw usageError(`Unknown score column ${unknown.map((u) => `\`${u}\``).join(', ')}; the scores file has ${metas.map((m) => m.name).join(', ')}.`);
+          metas = metas.filter((m) => options.columns?.includes(m.name));
+        }
+        if (metas.length === 0) throw usageError(`\`${file}\` has no score columns; score it with at least one lexicon.`);
+        for (const name of Object.keys(options.reducers ?? {})) {
+          if (!metas.some((m) => m.name === name)) throw usageError(`--aggregate names \`${name}\`, which is not a score column; choose from ${metas.map((m) => m.name).join(', ')}.`);
+        }
+        idx = metas.map((m) => (header as string[]).indexOf(m.name));
+        nIdx = metas.map((m) => (header as string[]).indexOf(`${m.name}.n`));
+        const reducers = metas.map((m) => options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation));
+        state = createSeriesState({ ...options, reducers }, metas.length);
+        await events.write(csvRow(['entry_id', 'person', 'time_utc', 'time_local', 'zone', 'bin_start', 'local_date', 'excluded', 'words', ...metas.map((m) => m.name)]));
+        continue;
+      }
+      if (item.kind === 'reject') {
+        await reject({ ...item.diagnostic, stage: 'series' });
+        continue;
+      }
+      const r = item.record;
+      const instant = Date.parse(r.time_utc ?? '');
+      const zone = r.zone ?? '';
+      const words = Number(r.words);
+      if (!(r.person ?? '').trim() || !Number.isFinite(instant) || !isValidZone(zone) || !Number.isInteger(words) || words < 0) {
+        await reject({ code: 'bad_score_row', message: 'the row lacks a person, a valid time_utc, an IANA zone or a whole word count; was it written by lexichron score?', source: item.source, stage: 'series' });
+        continue;
+      }
+      const values = idx.map((i) => {
+        const text = r[(header as string[])[i] as string] ?? '';
+        return text === '' ? undefined : Number(text);
+      });
+      const matched = nIdx.map((i) => (i >= 0 ? Number(r[(header as string[])[i] as string] ?? 0) || 0 : 0));
+      entries++;
+      const placed = addSeriesEntry(state as NonNullable<typeof state>, { person: (r.person as string).trim(), instant, zone, words, values, matched });
+      await events.write(
+        csvRow([
+          r.entry_id ?? '',
+          r.person as string,
+          r.time_utc as string,
+          formatLocal(instant, zoneOffset(zone, instant)),
+          zone,
+          formatLocal(placed.binStart, zoneOffset(zone, placed.binStart)).replace('.000', ''),
+          dateOfDayNumber(placed.day),
+          placed.excluded ? '1' : '0',
+          String(words),
+          ...values.map((v) => formatNumber(v)),
+        ]),
+      );
+    }
+    if (!state) throw inputError(`\`${file}\` holds no rows; nothing to bin.`);
+    if (entries === 0) throw inputError(`\`${file}\` holds no scored entries; check the rejects of the score stage.`);
+    const layout: SeriesLayout = { scores: metas.map((m) => m.name), fill: options.fill !== 'none', detrend: options.detrend };
+    const long = await openAtomicLineWriter(options.out);
+    const wide = await openAtomicLineWriter(sidecars.wide);
+    const missing: Record<string, number> = {};
+    let bins = 0;
+    let observed = 0;
+    const persons = [...state.persons.keys()].sort();
+    try {
+      const longHeader = seriesHeader(layout);
+      await long.write(csvRow(longHeader));
+      const perPerson: SeriesRow[][] = [];
+      let maxT = 0;
+      for (const person of persons) {
+        const rows = buildPersonSeries(state, person);
+        maxT = Math.max(maxT, rows.length);
+        for (const row of rows) {
+          bins++;
+          if (row.missing === '') observed++;
+          else missing[row.missing] = (missing[row.missing] ?? 0) + 1;
+          await long.write(seriesRow(row, layout));
+        }
+        perPerson.push(rows.map((row) => ({ ...row, matched: [], personMean: [], within: [], lag1: [], withinLag1: [], filled: [], detrended: [] })));
+        if (perPerson.length > 0 && maxT * persons.length > 5_000_000) throw usageError(`The wide file would hold ${maxT * persons.length} cells; choose a longer --bin or use the long file.`);
+      }
+      const wideHeader = ['person', ...layout.scores.flatMap((s) => Array.from({ length: maxT }, (_, t) => `${s}@${t}`))];
+      await wide.write(csvRow(wideHeader));
+      for (const rows of perPerson) {
+        const fields = [rows[0]?.person ?? ''];
+        layout.scores.forEach((_, c) => {
+          for (let t = 0; t < maxT; t++) fields.push(formatNumber(rows[t]?.values[c]));
+        });
+        await wide.write(csvRow(fields));
+      }
+      await long.commit();
+      await wide.commit();
+      await events.commit();
+      await rejects.commit();
+      const describe = (name: string): string | undefined => {
+        const base = name.replace(/@\d+$/, '');
+        const m = metas.find((x) => x.name === base);
+        return m ? `${base}: ${options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation)} per bin of the ${m.aggregation} score${base !== name ? ` at t = ${name.split('@')[1]}` : ''}` : undefined;
+      };
+      const outDir = dirname(options.out);
+      const rel = (p: string): string => (dirname(p) === outDir ? basename(p) : p);
+      const resources = [
+        tableResource('series-long', rel(options.out), longHeader, describe, 'One row per person and bin of the observation window; empty values are missing, with the reason in `missing`.'),
+        tableResource('series-wide', rel(sidecars.wide), wideHeader, describe, 'One row per person; one column per score and within-person time index t.'),
+        tableResource('series-events', rel(sidecars.events), ['entry_id', 'person', 'time_utc', 'time_local', 'zone', 'bin_start', 'local_date', 'excluded', 'words', ...layout.scores], describe, 'One row per entry with its exact time and the bin it fell in (for continuous-time models).'),
+      ];
+      return {
+        longPath: options.out,
+        widePath: sidecars.wide,
+        eventsPath: sidecars.events,
+        rejectsPath: sidecars.rejects,
+        persons: persons.length,
+        bins,
+        observed,
+        missing,
+        entries,
+        excludedEntries: state.excludedEntries,
+        rejected,
+        columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
+        resources,
+      };
+    } catch (error) {
+      await long.abort();
+      await wide.abort();
+      throw error;
+    }
+  } catch (error) {
+    await events.abort();
+    await rejects.abort();
+    throw error;
+  }
+}

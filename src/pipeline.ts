@@ -1,0 +1,149 @@
+/**
+ * `lexichron run STUDY.json`: the whole job in one command.
+ *
+ * ```
+ * study.json ─ parseStudy ─► inputs ─ runScore ─► scores.csv ─ runSeries ─► series-long.csv (+ wide, events)
+ *                                                                  │
+ *                                  ratings ─► validate ◄──────────┤
+ *                                                      dynamics ◄─┤
+ *                                                      term audit ┘
+ *                          datapackage.json + manifest.json + report.html
+ * ```
+ *
+ * Every stage is a library function; this module only resolves paths against the study
+ * file's folder, calls the stages in order and records provenance.
+ */
+import { readFile } from 'node:fs/promises';
+import { dirname, join, resolve } from 'node:path';
+import { usageError } from './errors.js';
+import { writeFileAtomic } from './io/atomic-write.js';
+import { loadLexicons } from './io/load-lexicon.js';
+import { readZoneFile } from './io/read-zone-file.js';
+import { fileDigest, runScore, type RunScoreResult } from './io/run-score.js';
+import { runSeries, type RunSeriesResult } from './io/run-series.js';
+import { dataPackage, tableResource, type TableResource } from './report/data-dictionary.js';
+import { buildManifest, type FileRecord, type Manifest } from './report/manifest.js';
+import { parseReducers, seriesOptionsFrom } from './cli/series-options.js';
+import { parseStudy, type Study } from './study/parse-study.js';
+import { TOOL_VERSION } from './version.js';
+
+/** What a stage after the series contributes to the outputs. */
+export interface StageOutput {
+  resources: TableResource[];
+  outputs: FileRecord[];
+  summary: Record<string, unknown>;
+}
+
+/** A stage run after score and series, given the study and the files written so far. */
+export type StudyStage = (context: StudyContext) => Promise<StageOutput | undefined>;
+
+export interface StudyContext {
+  study: Study;
+  studyDir: string;
+  outDir: string;
+  score: RunScoreResult;
+  series: RunSeriesResult;
+  /** Seed for every random draw of the run (bootstrap, surrogates). */
+  seed: number;
+}
+
+export interface RunStudyResult {
+  outDir: string;
+  manifest: Manifest;
+  score: RunScoreResult;
+  series: RunSeriesResult;
+  stages: Record<string, StageOutput>;
+}
+
+/** Reads and validates a study file; throws a usage error listing every problem with its JSON path. */
+export async function readStudy(path: string): Promise<Study> {
+  let json: unknown;
+  try {
+    json = JSON.parse(await readFile(path, 'utf8'));
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code === 'ENOENT') throw usageError(`Cannot read study file \`${path}\`: no such file; check the path.`);
+    throw usageError(`Cannot read study file \`${path}\`: not valid JSON (${(error as Error).message}).`);
+  }
+  const { study, problems } = parseStudy(json);
+  if (!study) throw usageError(`Study file \`${path}\` has ${problems.length} problem${problems.length === 1 ? '' : 's'}:\n${problems.map((p) => `  ${p.path}: ${p.message}`).join('\n')}`);
+  return study;
+}
+
+/**
+ * Runs a study: score → series → the optional stages (validation, dynamics, term audit,
+ * report) → datapackage.json and manifest.json, all in the study's output folder.
+ * `now` (ISO 8601) is the run time recorded in the manifest; `stages` are called in order.
+ */
+export async function runStudy(studyPath: string, options: { now: string; stages?: Array<[string, StudyStage]>; seed?: number; onProgress?: (rows: number) => void }): Promise<RunStudyResult> {
+  const study = await readStudy(studyPath);
+  const studyDir = dirname(resolve(studyPath));
+  const at = (p: string): string => resolve(studyDir, p);
+  const outDir = at(study.out);
+  const lexicons = await loadLexicons(study.lexicons.map((l) => (l.includes('/') || l.endsWith('.tsv') ? at(l) : l)));
+  const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
+  const score = await runScore({
+    inputs: study.inputs.map((i) => ({
+      path: at(i.path),
+      format: i.format,
+      delimiter: i.delimiter,
+      columns: i.columns ? { person: i.columns.person ?? 'person', time: i.columns.time ?? 'time', text: i.columns.text ?? 'text', id: i.columns.id, zone: i.columns.zone } : undefined,
+    })),
+    lexicons,
+    zones,
+    time: { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap },
+    out: join(outDir, 'scores.csv'),
+    keepText: study.keepText,
+    onProgress: options.onProgress,
+  });
+  const reducers = parseReducers(study.series.aggregate);
+  const series = await runSeries({
+    ...seriesOptionsFrom({ ...study.series }),
+    scores: score.scoresPath,
+    out: join(outDir, 'series-long.csv'),
+    reducers: typeof reducers === 'string' ? undefined : reducers,
+    allReducer: typeof reducers === 'string' ? reducers : undefined,
+  });
+  const seed = options.seed ?? 20261201;
+  const stages: Record<string, StageOutput> = {};
+  const context: StudyContext = { study, studyDir, outDir, score, series, seed };
+  for (const [name, stage] of options.stages ?? []) {
+    const out = await stage(context);
+    if (out) stages[name] = out;
+  }
+  const scoreHeader = [...(await readFile(score.scoresPath, 'utf8').then((t) => t.slice(0, t.indexOf('\n')).split(',')))];
+  const resources: TableResource[] = [
+    tableResource('scores', 'scores.csv', scoreHeader, undefined, 'One row per scored entry; score columns are <lexicon>.<category>.'),
+    ...series.resources,
+    ...Object.values(stages).flatMap((s) => s.resources),
+  ];
+  await writeFileAtomic(join(outDir, 'datapackage.json'), JSON.stringify(dataPackage(study.name, study.name, resources), null, 2) + '\n');
+  const outputs: FileRecord[] = [];
+  for (const path of [score.scoresPath, score.rejectsPath, score.metaPath, series.longPath, series.widePath, series.eventsPath, series.rejectsPath, join(outDir, 'datapackage.json')]) {
+    const d = await fileDigest(path);
+    outputs.push({ path: path.slice(outDir.length + 1), sha256: d.sha256, bytes: d.bytes });
+  }
+  outputs.push(...Object.values(stages).flatMap((s) => s.outputs));
+  const inputs: FileRecord[] = [...score.inputs];
+  for (const extra of [study.zones]) {
+    if (!extra) continue;
+    const d = await fileDigest(at(extra));
+    inputs.push({ path: extra, sha256: d.sha256, bytes: d.bytes });
+  }
+  const manifest = buildManifest({
+    version: TOOL_VERSION,
+    created: options.now,
+    command: `lexichron run ${studyPath}`,
+    inputs,
+    lexicons: score.lexicons,
+    parameters: { study, seed },
+    reconciliation: score.reconciliation,
+    stages: {
+      series: { persons: series.persons, bins: series.bins, observed: series.observed, missing: series.missing, entries: series.entries, excludedEntries: series.excludedEntries, rejected: series.rejected, columns: series.columns },
+      ...Object.fromEntries(Object.entries(stages).map(([k, v]) => [k, v.summary])),
+    },
+    outputs,
+  });
+  await writeFileAtomic(join(outDir, 'manifest.json'), JSON.stringify(manifest, null, 2) + '\n');
+  return { outDir, manifest, score, series, stages };
+}

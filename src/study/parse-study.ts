@@ -1,0 +1,196 @@
+/**
+ * The study file of `lexichron run`: one JSON document naming inputs, zones, lexicons and the
+ * settings of every stage. This module validates it and reports each problem with its JSON path.
+ */
+
+export interface StudyInput {
+  path: string;
+  format?: 'csv' | 'tsv' | 'jsonl' | 'json';
+  columns?: Record<string, string>;
+  delimiter?: string;
+}
+
+export interface StudySeries {
+  bin: string;
+  dayStart: string;
+  minWords: number;
+  excludeHours?: string;
+  fill: 'none' | 'carry' | 'linear';
+  maxFill: number;
+  detrend: boolean;
+  aggregate?: string;
+  from?: string;
+  to?: string;
+}
+
+export interface Study {
+  name: string;
+  inputs: StudyInput[];
+  zones?: string;
+  timeZone?: string;
+  time: { format?: string; epoch: 'auto' | 's' | 'ms'; dstGap: 'reject' | 'earlier' | 'later'; dstOverlap: 'reject' | 'earlier' | 'later' };
+  lexicons: string[];
+  keepText: boolean;
+  maxRejects: string;
+  series: StudySeries;
+  /** Self-reports and validation settings (see docs/readme/validate.md). */
+  ratings?: Record<string, unknown>;
+  /** Dynamics settings (see docs/readme/dynamics.md); `false` skips the stage. */
+  dynamics?: Record<string, unknown> | false;
+  /** Term-audit settings; `false` skips it. */
+  audit?: Record<string, unknown> | false;
+  /** Report settings; `false` skips the report. */
+  report?: Record<string, unknown> | false;
+  /** Privacy settings: pseudonymization key file or environment variable, redaction names. */
+  privacy?: { keyFile?: string; keyEnv?: string; names?: string[] };
+  out: string;
+}
+
+export interface StudyProblem {
+  path: string;
+  message: string;
+}
+
+const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
+const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter'];
+const TIME_KEYS = ['format', 'epoch', 'dstGap', 'dstOverlap'];
+const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to'];
+const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names'];
+
+/** Levenshtein distance, for "did you mean" hints. */
+function distance(a: string, b: string): number {
+  const d = Array.from({ length: a.length + 1 }, (_, i) => [i, ...Array<number>(b.length).fill(0)]);
+  for (let j = 1; j <= b.length; j++) (d[0] as number[])[j] = j;
+  for (let i = 1; i <= a.length; i++) {
+    for (let j = 1; j <= b.length; j++) {
+      const row = d[i] as number[];
+      const prev = d[i - 1] as number[];
+      row[j] = Math.min((prev[j] as number) + 1, (row[j - 1] as number) + 1, (prev[j - 1] as number) + (a[i - 1] === b[j - 1] ? 0 : 1));
+    }
+  }
+  return (d[a.length] as number[])[b.length] as number;
+}
+
+function unknownKeys(value: Record<string, unknown>, known: readonly string[], path: string, problems: StudyProblem[]): void {
+  for (const key of Object.keys(value)) {
+    if (known.includes(key)) continue;
+    const near = [...known].sort((x, y) => distance(key, x) - distance(key, y))[0];
+    const hint = near && distance(key, near) <= 3 ? `; did you mean \`${near}\`?` : `; known keys are ${known.join(', ')}`;
+    problems.push({ path: `${path}.${key}`, message: `unknown key \`${key}\`${hint}` });
+  }
+}
+
+function isObject(value: unknown): value is Record<string, unknown> {
+  return value !== null && typeof value === 'object' && !Array.isArray(value);
+}
+
+/**
+ * Validates a parsed study file. Returns the study with defaults filled in, or the problems,
+ * each with its JSON path (`$.series.bin`) and what is expected there.
+ */
+export function parseStudy(json: unknown): { study?: Study; problems: StudyProblem[] } {
+  const problems: StudyProblem[] = [];
+  const need = (ok: boolean, path: string, message: string): void => {
+    if (!ok) problems.push({ path, message });
+  };
+  if (!isObject(json)) return { problems: [{ path: '$', message: 'the study file must hold one JSON object, e.g. {"inputs": [...], "out": "out"}' }] };
+  unknownKeys(json, TOP_KEYS, '$', problems);
+  const str = (v: unknown): v is string => typeof v === 'string' && v.trim() !== '';
+  need(json.name === undefined || typeof json.name === 'string', '$.name', 'expected a string');
+  const inputs: StudyInput[] = [];
+  if (!Array.isArray(json.inputs) || json.inputs.length === 0) {
+    problems.push({ path: '$.inputs', message: 'expected a non-empty array of inputs such as [{"path": "messages.csv"}]' });
+  } else {
+    json.inputs.forEach((input, i) => {
+      const p = `$.inputs[${i}]`;
+      if (typeof input === 'string') {
+        inputs.push({ path: input });
+        return;
+      }
+      if (!isObject(input)) {
+        problems.push({ path: p, message: 'expected a path string or an object {"path": …, "columns": {…}}' });
+        return;
+      }
+      unknownKeys(input, INPUT_KEYS, p, problems);
+      need(str(input.path), `${p}.path`, 'expected the path of a CSV, TSV, JSON Lines or JSON file');
+      need(input.format === undefined || ['csv', 'tsv', 'jsonl', 'json'].includes(input.format as string), `${p}.format`, 'expected one of csv, tsv, jsonl, json');
+      if (input.columns !== undefined) {
+        if (!isObject(input.columns)) problems.push({ path: `${p}.columns`, message: 'expected an object such as {"person": "participant", "time": "sent_at", "text": "body"}' });
+        else {
+          unknownKeys(input.columns, ['person', 'time', 'text', 'id', 'zone'], `${p}.columns`, problems);
+          for (const [k, v] of Object.entries(input.columns)) need(str(v), `${p}.columns.${k}`, 'expected a column name');
+        }
+      }
+      need(input.delimiter === undefined || (typeof input.delimiter === 'string' && input.delimiter.length === 1), `${p}.delimiter`, 'expected a single character');
+      inputs.push(input as unknown as StudyInput);
+    });
+  }
+  need(json.zones === undefined || str(json.zones), '$.zones', 'expected the path of a zone file (person, zone[, from])');
+  need(json.timeZone === undefined || str(json.timeZone), '$.timeZone', 'expected an IANA zone name such as Europe/Brussels');
+  need(json.zones !== undefined || json.timeZone !== undefined, '$', 'name the persons\' time zones with "zones" (a file) or "timeZone" (one IANA zone for everyone)');
+  const time = isObject(json.time) ? json.time : {};
+  if (json.time !== undefined && !isObject(json.time)) problems.push({ path: '$.time', message: 'expected an object {"format": …, "epoch": …, "dstGap": …, "dstOverlap": …}' });
+  unknownKeys(time, TIME_KEYS, '$.time', problems);
+  const policies = ['reject', 'earlier', 'later'];
+  need(time.epoch === undefined || ['auto', 's', 'ms'].includes(time.epoch as string), '$.time.epoch', 'expected auto, s or ms');
+  need(time.dstGap === undefined || policies.includes(time.dstGap as string), '$.time.dstGap', 'expected reject, earlier or later');
+  need(time.dstOverlap === undefined || policies.includes(time.dstOverlap as string), '$.time.dstOverlap', 'expected reject, earlier or later');
+  const lexicons = json.lexicons ?? ['afinn-165', 'vader'];
+  need(Array.isArray(lexicons) && lexicons.length > 0 && lexicons.every(str), '$.lexicons', 'expected a non-empty array of bundled lexicon names or .lex.tsv paths');
+  need(json.keepText === undefined || typeof json.keepText === 'boolean', '$.keepText', 'expected true or false');
+  need(json.maxRejects === undefined || (typeof json.maxRejects === 'string' && /^(\d+%?|\d+\.\d+%|none)$/.test(json.maxRejects)) || Number.isInteger(json.maxRejects), '$.maxRejects', 'expected a count (25), a percentage ("5%") or "none"');
+  const series = isObject(json.series) ? json.series : {};
+  if (json.series !== undefined && !isObject(json.series)) problems.push({ path: '$.series', message: 'expected an object such as {"bin": "1d", "dayStart": "04:00", "minWords": 10}' });
+  unknownKeys(series, SERIES_KEYS, '$.series', problems);
+  for (const key of ['bin', 'dayStart', 'excludeHours', 'aggregate', 'from', 'to']) need(series[key] === undefined || typeof series[key] === 'string', `$.series.${key}`, 'expected a string');
+  for (const key of ['minWords', 'maxFill']) need(series[key] === undefined || (Number.isInteger(series[key]) && (series[key] as number) >= 0), `$.series.${key}`, 'expected a whole number ≥ 0');
+  need(series.fill === undefined || ['none', 'carry', 'linear'].includes(series.fill as string), '$.series.fill', 'expected none, carry or linear');
+  need(series.detrend === undefined || typeof series.detrend === 'boolean', '$.series.detrend', 'expected true or false');
+  for (const key of ['ratings']) need(json[key] === undefined || isObject(json[key]), `$.${key}`, 'expected an object');
+  for (const key of ['dynamics', 'audit', 'report']) need(json[key] === undefined || json[key] === false || isObject(json[key]), `$.${key}`, 'expected an object of settings, or false to skip the stage');
+  if (json.privacy !== undefined) {
+    if (!isObject(json.privacy)) problems.push({ path: '$.privacy', message: 'expected an object {"keyFile": …} or {"keyEnv": …}' });
+    else {
+      unknownKeys(json.privacy, PRIVACY_KEYS, '$.privacy', problems);
+      need(json.privacy.names === undefined || (Array.isArray(json.privacy.names) && json.privacy.names.every(str)), '$.privacy.names', 'expected an array of names to redact');
+    }
+  }
+  need(str(json.out), '$.out', 'expected the output folder, e.g. "out"');
+  if (problems.length > 0) return { problems };
+  return {
+    problems,
+    study: {
+      name: (json.name as string | undefined) ?? 'lexichron study',
+      inputs,
+      zones: json.zones as string | undefined,
+      timeZone: json.timeZone as string | undefined,
+      time: {
+        format: time.format as string | undefined,
+        epoch: (time.epoch as 'auto' | 's' | 'ms' | undefined) ?? 'auto',
+        dstGap: (time.dstGap as 'reject' | undefined) ?? 'reject',
+        dstOverlap: (time.dstOverlap as 'reject' | undefined) ?? 'reject',
+      },
+      lexicons: lexicons as string[],
+      keepText: json.keepText === true,
+      maxRejects: json.maxRejects === undefined ? '5%' : String(json.maxRejects),
+      series: {
+        bin: (series.bin as string | undefined) ?? '1d',
+        dayStart: (series.dayStart as string | undefined) ?? '00:00',
+        minWords: (series.minWords as number | undefined) ?? 1,
+        excludeHours: series.excludeHours as string | undefined,
+        fill: (series.fill as 'none' | undefined) ?? 'none',
+        maxFill: (series.maxFill as number | undefined) ?? 1,
+        detrend: series.detrend === true,
+        aggregate: series.aggregate as string | undefined,
+        from: series.from as string | undefined,
+        to: series.to as string | undefined,
+      },
+      ratings: json.ratings as Record<string, unknown> | undefined,
+      dynamics: json.dynamics as Study['dynamics'],
+      audit: json.audit as Study['audit'],
+      report: json.report as Study['report'],
+      privacy: json.privacy as Study['privacy'],
+      out: json.out as string,
+    },
+  };
+}
