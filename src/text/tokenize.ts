@@ -65,9 +65,9 @@ function kindOf(type: string): TokenKind {
 /**
  * Tokenizes English text with wink-nlp (wink-eng-lite-web-model).
  *
- * - Words keep their contraction pieces as separate tokens (`can't` → `can`, `not`), but a
- *   piece that starts with an apostrophe or is `n't` is not counted as a word of its own, so
- *   `can't` counts one word.
+ * - Words keep their contraction pieces as separate tokens in their expanded form (`can't`,
+ *   `cant` and `cannot` → `can`, `not`; `don't`/`dont` → `do`, `not`), but a piece attached to
+ *   the one before it is not counted as a word of its own, so each contraction counts one word.
  * - Emoji stay whole as grapheme clusters: skin-tone modifiers, variation selectors, ZWJ
  *   sequences (👨‍👩‍👧) and flag pairs (🇧🇪) are joined back into one token.
  * - Emoticons (`:)`, `:-(`, `<3`) are single tokens.
@@ -81,6 +81,7 @@ export function tokenizeEnglish(text: string): Tokens {
   const values = tokens.out(its.value) as string[];
   const types = tokens.out(its.type) as string[];
   const spaces = tokens.out(its.precedingSpaces) as string[];
+  const contraction = tokens.out(its.contractionFlag) as boolean[];
   const norm: string[] = [];
   const raw: string[] = [];
   const kind: TokenKind[] = [];
@@ -101,9 +102,11 @@ export function tokenizeEnglish(text: string): Tokens {
       }
     }
     let n = value.toLowerCase();
-    const nextIsNt = values[i + 1] === "n't" || values[i + 1] === 'n’t';
-    const isPiece = attached && last >= 0 && (n.startsWith("'") || n.startsWith('’') || n === "n't" || n === 'n’t');
-    if (isPiece || nextIsNt) {
+    // wink splits contractions written with or without an apostrophe (can't, cant, cannot, I'd've)
+    // into flagged pieces; every piece after the first is attached to the one before it.
+    const isContraction = contraction[i] === true;
+    const isPiece = attached && last >= 0 && (n.startsWith("'") || n.startsWith('’') || n === "n't" || n === 'n’t' || (isContraction && contraction[i - 1] === true));
+    if (isPiece || isContraction) {
       normals ??= tokens.out(its.normal) as string[];
       n = (normals[i] as string).toLowerCase();
     }
