@@ -105,7 +105,7 @@ export function parseLexicon(text: string): ParseLexiconResult {
       problems.push({ line: lineNo, message: 'the term is empty' });
       continue;
     }
-    if (term.includes('*') && !isWildcard(term) && /^[\p{L}\p{M}\p{N}\s'’-]*\*[\p{L}\p{M}\p{N}\s'’*-]*$/u.test(term)) {
+    if (term !== '*' && term.includes('*') && !isWildcard(term) && /^[\p{L}\p{M}\p{N}\s'’-]*\*[\p{L}\p{M}\p{N}\s'’*-]*$/u.test(term)) {
       problems.push({ line: lineNo, message: `\`${term}\`: a wildcard may only end a single word, as in \`worr*\`` });
       continue;
     }
