@@ -1,0 +1,74 @@
+import type { RawEntry } from '../../types.js';
+import { createBurstMerger } from './create-burst-merger.js';
+import { createDeduplicator, type DedupeOptions } from './create-deduplicator.js';
+import type { ImportItem, ImportReconciliation } from './import-item.js';
+
+/** Steps applied to the entries of an importer, in this order. */
+export interface ImportStepOptions {
+  /** Drop exact and near duplicates (createDeduplicator); absent = keep all. */
+  dedupe?: DedupeOptions;
+  /** Merge messages within this many minutes into one entry (createBurstMerger); absent = no merging. */
+  mergeBurstMinutes?: number;
+  /** Applied to the text of every entry that leaves (redaction), after duplicates are found. */
+  redact?: (text: string) => string;
+}
+
+/**
+ * Runs the shared steps over an importer's items: duplicates are dropped (`duplicate_exact`,
+ * `duplicate_near`), bursts merged (`merged_burst`), then the text redacted. Every input unit
+ * leaves exactly one item (an entry, a reject or a drop), so `read = kept + rejected + dropped`
+ * holds when the output is tallied with tallyImportItem. Drops and rejects pass through at once;
+ * a merged entry leaves when its burst ends.
+ */
+export async function* importEntries(items: AsyncIterable<ImportItem>, options: ImportStepOptions = {}): AsyncGenerator<ImportItem> {
+  const isDuplicate = options.dedupe ? createDeduplicator(options.dedupe) : undefined;
+  const merger = options.mergeBurstMinutes !== undefined ? createBurstMerger(options.mergeBurstMinutes) : undefined;
+  const notesOf = new Map<string, ImportItem & { kind: 'entry' }>();
+  const out = (entry: RawEntry): ImportItem => {
+    const original = notesOf.get(entry.id);
+    notesOf.delete(entry.id);
+    const finished = options.redact ? { ...entry, text: options.redact(entry.text) } : entry;
+    return original?.notes ? { kind: 'entry', entry: finished, notes: original.notes } : { kind: 'entry', entry: finished };
+  };
+  for await (const item of items) {
+    if (item.kind !== 'entry') {
+      yield item;
+      continue;
+    }
+    const { entry } = item;
+    if (isDuplicate) {
+      const verdict = isDuplicate(entry.person, entry.text);
+      if (verdict !== 'unique') {
+        yield { kind: 'drop', reason: verdict, source: entry.source };
+        continue;
+      }
+    }
+    if (!merger) {
+      yield out(entry);
+      continue;
+    }
+    notesOf.set(entry.id, item);
+    const { done, merged } = merger.push(entry);
+    if (merged) {
+      notesOf.delete(entry.id);
+      yield { kind: 'drop', reason: 'merged_burst', source: entry.source };
+    }
+    if (done) yield out(done);
+  }
+  const last = merger?.flush();
+  if (last) yield out(last);
+}
+
+/** Adds one item to a reconciliation (mutating it) and returns it. */
+export function tallyImportItem(reconciliation: ImportReconciliation, item: ImportItem): ImportReconciliation {
+  reconciliation.read++;
+  if (item.kind === 'entry') {
+    reconciliation.kept++;
+    for (const note of item.notes ?? []) reconciliation.notes[note] = (reconciliation.notes[note] ?? 0) + 1;
+  } else if (item.kind === 'reject') {
+    reconciliation.rejected[item.diagnostic.code] = (reconciliation.rejected[item.diagnostic.code] ?? 0) + 1;
+  } else {
+    reconciliation.dropped[item.reason] = (reconciliation.dropped[item.reason] ?? 0) + 1;
+  }
+  return reconciliation;
+}

@@ -1,0 +1,63 @@
+/** The date and clock time at the start of a chat line, as written (the date order is settled later). */
+export interface ChatStamp {
+  /** The three numbers of the date in the order written, and the digits of the first and last. */
+  parts: [number, number, number];
+  firstDigits: number;
+  lastDigits: number;
+  hour: number;
+  minute: number;
+  second: number;
+  /** `am`/`pm` when the clock is a 12-hour one. */
+  meridiem?: 'am' | 'pm';
+}
+
+/** One physical line of a line-based chat export. */
+export type ChatLine =
+  | { kind: 'message'; stamp: ChatStamp; sender: string; text: string }
+  | { kind: 'system'; stamp: ChatStamp }
+  | { kind: 'continuation'; text: string };
+
+const S = '[\\s\\u00a0\\u202f]';
+const DATE = '(\\d{1,4})([./-])(\\d{1,2})\\2(\\d{1,4})';
+const TIME = `(\\d{1,2})[:.](\\d{2})(?:[:.](\\d{2}))?(?:${S}*([ap])\\.?${S}?m\\.?(?![a-z]))?`;
+/** `[31/12/2021, 23:59:10] Ann: …` (bracketed) or `31/12/2021, 23:59 - Ann: …` (dash). */
+const BRACKETED = new RegExp(`^\\[${DATE},?${S}+${TIME}\\]${S}*(.*)$`, 'is');
+const DASHED = new RegExp(`^${DATE},?${S}+${TIME}${S}+[-\\u2013\\u2014]${S}+(.*)$`, 'is');
+/** Marks that exports put before lines or around names: LRM/RLM, embeddings and isolates, byte-order mark. */
+const INVISIBLE = /[\u200e\u200f\u202a-\u202e\u2066-\u2069\ufeff]/g;
+const SENDER = /^([^:\n]{1,120}?):(?:[\s\u00a0]+|$)([\s\S]*)$/;
+
+/** A sender name as compared: invisible marks removed, Unicode NFC, white space folded, trimmed, lower case. */
+export function normalizeSender(name: string): string {
+  return name.replace(INVISIBLE, '').normalize('NFC').replace(/[\s\u00a0\u202f]+/g, ' ').trim().toLowerCase();
+}
+
+/**
+ * Parses one line of a line-based chat export ("chat-lines"):
+ * `date, time - sender: message` or `[date, time] sender: message`, where
+ * - the date is three numbers separated by `/`, `.` or `-` in an order settled per file (settleDateOrder);
+ * - the time is `H:mm` or `H:mm:ss` (also with dots), on a 24-hour clock or with an AM/PM marker
+ *   (`PM`, `pm`, `p.m.`, `p. m.`), which may follow a space, a no-break space U+00A0 or the narrow
+ *   no-break space U+202F that recent Unicode CLDR locale data puts before it;
+ * - a dated line without `sender: ` is a system line;
+ * - any other line continues the previous message (a message with line breaks).
+ * Direction marks and other invisible characters at the start are ignored.
+ */
+export function parseChatLine(line: string): ChatLine {
+  const text = line.replace(/^[\u200e\u200f\u202a-\u202e\u2066-\u2069\ufeff]+/, '');
+  const m = BRACKETED.exec(text) ?? DASHED.exec(text);
+  if (!m) return { kind: 'continuation', text: line };
+  const stamp: ChatStamp = {
+    parts: [Number(m[1]), Number(m[3]), Number(m[4])],
+    firstDigits: (m[1] as string).length,
+    lastDigits: (m[4] as string).length,
+    hour: Number(m[5]),
+    minute: Number(m[6]),
+    second: Number(m[7] ?? 0),
+  };
+  if (m[8]) stamp.meridiem = (m[8] as string).toLowerCase() === 'a' ? 'am' : 'pm';
+  const rest = (m[9] as string).replace(/^[\u200e\u200f]+/, '');
+  const s = SENDER.exec(rest);
+  if (!s) return { kind: 'system', stamp };
+  return { kind: 'message', stamp, sender: (s[1] as string).replace(INVISIBLE, '').trim(), text: (s[2] as string).replace(/^[\u200e\u200f]+/, '') };
+}

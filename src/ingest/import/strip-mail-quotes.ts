@@ -1,0 +1,61 @@
+/**
+ * Lines that introduce a quoted reply: "On Mon, 3 Feb 2025, Ann <a@b.example> wrote:" and its
+ * usual counterparts in French, German, Spanish, Dutch, Italian and Portuguese mail programs.
+ */
+const ATTRIBUTION =
+  /^\s*(?:on|le|am|el|op|il|em)\b.{0,300}?\b(?:wrote|a écrit|schrieb|escribió|schreef|ha scritto|escreveu)\s*:?\s*$/i;
+const ATTRIBUTION_START = /^\s*(?:on|le|am|el|op|il|em)\s/i;
+/** Separator lines that start a forwarded or an included original message. */
+const FORWARD =
+  /^\s*(?:-{2,}\s*(?:forwarded message|original message|weitergeleitete nachricht|message transféré|mensaje reenviado|doorgestuurd bericht|messaggio inoltrato)\s*-{2,}.*|begin forwarded message:?)\s*$/i;
+/** A line of underscores or dashes followed by a header block (`From: … Sent: …`), as written by some desktop programs. */
+const RULE = /^\s*(?:_{8,}|-{8,})\s*$/;
+const HEADER_LINE = /^\s*(?:from|von|de|van|da)\s*:/i;
+const HEADER_FOLLOW = /^\s*(?:sent|date|to|subject|gesendet|datum|an|betreff|envoyé|à|objet|enviado|para|asunto)\s*:/i;
+/** The signature delimiter "-- " of RFC 3676 section 4.3 (the trailing space is often lost, so "--" alone counts too). */
+const SIGNATURE = /^-- ?$/;
+const QUOTED = /^\s*>/;
+
+function isHeaderBlock(lines: readonly string[], at: number): boolean {
+  if (!HEADER_LINE.test(lines[at] ?? '')) return false;
+  for (let k = at + 1; k < Math.min(lines.length, at + 5); k++) if (HEADER_FOLLOW.test(lines[k] ?? '')) return true;
+  return false;
+}
+
+/**
+ * Keeps only the sender's own words of a plain-text mail body:
+ * - cuts at the signature delimiter (RFC 3676 section 4.3) and everything after it;
+ * - cuts at a forwarded or original-message block (`---------- Forwarded message ---------`,
+ *   `-----Original Message-----`, `Begin forwarded message:`, or a rule or blank line followed by `From:` … `Sent:`);
+ * - removes reply attributions ("On <date>, <name> wrote:", holding a digit, also when wrapped over two lines) and quoted lines
+ *   starting with `>` (RFC 3676 section 4.5); when an attribution is followed by no `>` lines
+ *   (quoting lost in an HTML conversion), the rest is taken as the quote and cut;
+ * - collapses runs of blank lines and trims.
+ * Returns the empty string when nothing of the sender's own remains.
+ */
+export function stripMailQuotes(body: string): string {
+  const lines = body.replace(/\r\n?/g, '\n').split('\n');
+  const kept: string[] = [];
+  for (let i = 0; i < lines.length; i++) {
+    const line = lines[i] as string;
+    if (SIGNATURE.test(line)) break;
+    if (FORWARD.test(line)) break;
+    if (RULE.test(line) && isHeaderBlock(lines, i + 1)) break;
+    if (isHeaderBlock(lines, i) && (i === 0 || (lines[i - 1] ?? '').trim() === '')) break;
+    let attributionEnd = -1;
+    if (ATTRIBUTION.test(line) && /\d/.test(line)) attributionEnd = i;
+    else if (ATTRIBUTION_START.test(line) && i + 1 < lines.length) {
+      const joined = `${line} ${lines[i + 1]}`;
+      if (ATTRIBUTION.test(joined) && /\d/.test(joined)) attributionEnd = i + 1;
+    }
+    if (attributionEnd >= 0) {
+      const rest = lines.slice(attributionEnd + 1);
+      if (!rest.some((l) => QUOTED.test(l))) break;
+      i = attributionEnd;
+      continue;
+    }
+    if (QUOTED.test(line)) continue;
+    kept.push(line.replace(/\s+$/, ''));
+  }
+  return kept.join('\n').replace(/\n{3,}/g, '\n\n').trim();
+}
