@@ -1,0 +1,73 @@
+import { describe, expect, it } from 'vitest';
+import { random } from '../../src/stats/random.js';
+import { analyzePair } from '../../src/validate/analyze-pair.js';
+import { buildPairs } from './build-pairs.js';
+
+describe('analyzePair', () => {
+  const pairs = buildPairs({ persons: 40, occasions: 20, withinSlope: 0.5, betweenSlope: -1, seed: 3 });
+  const result = analyzePair(pairs, { random: random(1), replicates: 300 });
+
+  it('recovers a positive within-person and a negative between-person association built into the data', () => {
+    expect(result.within.ok && result.within.r).toBeGreaterThan(0.3);
+    expect(result.between.ok && result.between.r).toBeLessThan(-0.8);
+    expect(result.within.ok && result.within.df).toBe(800 - 40 - 1);
+    expect(result.between.ok && result.between.n).toBe(40);
+  });
+  it('warns that the levels disagree in sign', () => {
+    expect(result.verdict.warnings.map((w) => w.code)).toContain('levels_disagree_sign');
+    expect(result.verdict.within).toBe('moderate');
+    expect(result.verdict.text).toMatch(/Within persons the association is moderate and positive/);
+    expect(result.verdict.text).toMatch(/not clinical assessments/);
+  });
+  it('separates the levels in the mixed model: within slope near 0.5, between slope near −1', () => {
+    if (!result.mixedModel.ok) throw new Error(result.mixedModel.reason);
+    const [, w, b] = result.mixedModel.fixed;
+    expect(w?.name).toBe('score_within');
+    expect(w?.estimate).toBeGreaterThan(0.35);
+    expect(w?.estimate).toBeLessThan(0.65);
+    expect(b?.estimate).toBeGreaterThan(-1.2);
+    expect(b?.estimate).toBeLessThan(-0.8);
+    expect(w?.df).toBe(800 - 40 - 1);
+    expect(b?.df).toBe(40 - 2);
+  });
+  it('gives bootstrap intervals around the within and between correlations', () => {
+    if (!result.bootstrapWithin.ok || !result.within.ok) throw new Error('bootstrap failed');
+    expect(result.bootstrapWithin.ciLow).toBeLessThan(result.within.r);
+    expect(result.bootstrapWithin.ciHigh).toBeGreaterThan(result.within.r);
+    expect(result.bootstrapBetween.ok && result.bootstrapBetween.ciHigh).toBeLessThan(0);
+  });
+  it('summarises per-person correlations over persons with enough pairs', () => {
+    expect(result.perPerson.personsWithR).toBe(40);
+    expect(result.perPerson.median).toBeGreaterThan(0.2);
+    expect((result.perPerson.q1 as number) <= (result.perPerson.median as number)).toBe(true);
+  });
+  it('is reproducible with the same seed', () => {
+    const again = analyzePair(pairs, { random: random(1), replicates: 300 });
+    expect(again.bootstrapWithin).toEqual(result.bootstrapWithin);
+  });
+  it('calls a clear but weak within-person association weak and says it should not be oversold', () => {
+    const weak = analyzePair(buildPairs({ persons: 60, occasions: 30, withinSlope: 0.15, betweenSlope: 0.15, seed: 5 }), { random: random(2), replicates: 200 });
+    expect(weak.within.ok && Math.abs(weak.within.r)).toBeLessThan(0.25);
+    expect(weak.verdict.warnings.map((w) => w.code)).toContain('weak_within');
+  });
+  it('says why when every person has a single observation, without NaN', () => {
+    const single = analyzePair([{ person: 'a', x: 1, y: 2 }, { person: 'b', x: 2, y: 3 }, { person: 'c', x: 3, y: 3 }, { person: 'd', x: 4, y: 5 }], { random: random(3), replicates: 50 });
+    expect(single.within.ok ? '' : single.within.code).toBe('too_few_pairs');
+    expect(single.verdict.within).toBe('not_estimable');
+    expect(single.verdict.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(['within_not_estimable', 'few_persons']));
+    expect(JSON.stringify(single)).not.toMatch(/NaN/);
+  });
+  it('says why when the rating is constant', () => {
+    const constant = analyzePair(['a', 'b', 'c'].flatMap((person) => [1, 2, 3].map((x) => ({ person, x, y: 4 }))), { random: random(4), replicates: 0 });
+    expect(constant.within.ok ? '' : constant.within.code).toBe('zero_variance');
+    expect(constant.pooled.ok ? '' : constant.pooled.code).toBe('zero_variance');
+    expect(constant.bootstrapWithin.ok ? '' : constant.bootstrapWithin.code).toBe('not_requested');
+  });
+  it('says why when every value is missing', () => {
+    const empty = analyzePair([{ person: 'a', x: undefined, y: 1 }, { person: 'b', x: 2, y: undefined }], { random: random(5), replicates: 10 });
+    expect(empty.pairs).toBe(0);
+    expect(empty.within.ok).toBe(false);
+    expect(empty.mixedModel.ok).toBe(false);
+    expect(empty.iccScore.ok).toBe(false);
+  });
+});
