@@ -5,7 +5,7 @@ import { resolveWallClock, zoneOffset, type WallClockPolicy } from './zone-offse
 export interface TimeOptions {
   /** A luxon format such as `dd/MM/yyyy HH:mm`; when absent, ISO 8601 / RFC 3339 or epoch numbers. */
   format?: string;
-  /** Unit of numeric timestamps: seconds, milliseconds, or `auto` (13 or more digits → ms). */
+  /** Unit of numeric timestamps: seconds, milliseconds, or `auto` (12 or more integer digits → ms, fewer → seconds). */
   epoch: 'auto' | 's' | 'ms';
   /** Spring-forward gap policy for times without an offset. */
   gap: WallClockPolicy;
