@@ -156,7 +156,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
     }
     if (!state) throw inputError(`\`${file}\` holds no rows; nothing to bin.`);
     if (entries === 0) throw inputError(`\`${file}\` holds no scored entries; check the rejects of the score stage.`);
-    const layout: SeriesLayout = { scores: metas.map((m) => m.name), fill: options.fill !== 'none', detrend: options.detrend };
+    const layout: SeriesLayout = { scores: metas.map((m) => m.name), matched: nIdx.map((i) => i >= 0), fill: options.fill !== 'none', detrend: options.detrend };
     const long = await openAtomicLineWriter(options.out);
     const wide = await openAtomicLineWriter(sidecars.wide);
     const missing: Record<string, number> = {};

@@ -9,6 +9,8 @@ export const SERIES_ID_COLUMNS = ['person', 't', 'bin_start', 'bin_end', 'local_
 
 export interface SeriesLayout {
   scores: readonly string[];
+  /** Per score: whether the scores file had a matched-terms (`.n`) column (VADER columns have none). */
+  matched: readonly boolean[];
   fill: boolean;
   detrend: boolean;
 }
@@ -16,11 +18,13 @@ export interface SeriesLayout {
 /** Header of the long series file. */
 export function seriesHeader(layout: SeriesLayout): string[] {
   const header: string[] = [...SERIES_ID_COLUMNS];
-  for (const s of layout.scores) {
-    header.push(s, `${s}.n`, `${s}.person_mean`, `${s}.within`, `${s}.lag1`, `${s}.within_lag1`);
+  layout.scores.forEach((s, c) => {
+    header.push(s);
+    if (layout.matched[c]) header.push(`${s}.n`);
+    header.push(`${s}.person_mean`, `${s}.within`, `${s}.lag1`, `${s}.within_lag1`);
     if (layout.fill) header.push(`${s}.filled`);
     if (layout.detrend) header.push(`${s}.detrended`);
-  }
+  });
   return header;
 }
 
@@ -42,9 +46,9 @@ export function seriesRow(row: SeriesRow, layout: SeriesLayout): string {
     row.lagValid ? '1' : '0',
   ];
   layout.scores.forEach((_, c) => {
+    fields.push(formatNumber(row.values[c]));
+    if (layout.matched[c]) fields.push(formatNumber(row.matched[c]));
     fields.push(
-      formatNumber(row.values[c]),
-      formatNumber(row.matched[c]),
       formatNumber(row.personMean[c]),
       formatNumber(row.within[c]),
       formatNumber(row.lag1[c]),

@@ -35,22 +35,24 @@ export function scoreColumns(lexicons: readonly CompiledLexicon[]): ScoreColumn[
  * Per category: `count` → 100 × (sum of weights of matched terms) / word tokens of the entry
  * (undefined when the entry has no word tokens); `rating` → mean weight of matched terms
  * (undefined when nothing matched); `sum` → sum of weights (0 when nothing matched, as for AFINN).
- * The text is tokenized once per language. The entry's text is not kept unless `keepText`.
+ * VADER columns are empty for a text with no VADER tokens. The text is tokenized once per
+ * language. The entry's text is not kept unless `keepText`.
  */
 export function scoreEntry(entry: RawEntry, lexicons: readonly CompiledLexicon[], keepText = false): ScoredEntry {
   const scores: Record<string, number | undefined> = {};
   const matched: Record<string, number> = {};
   const negated: Record<string, number> = {};
   const byLanguage = new Map<string, Tokens>();
-  let nWords: number | undefined;
   for (const lex of lexicons) {
     const name = lex.ref.name;
     if (lex.scoring === 'vader') {
       const v = scoreVader(entry.text, lex.valence);
-      scores[`${name}.compound`] = v.compound;
-      scores[`${name}.pos`] = v.pos;
-      scores[`${name}.neu`] = v.neu;
-      scores[`${name}.neg`] = v.neg;
+      // A text with no VADER tokens has no score (the reference returns zeros; empty is not neutral).
+      const has = v.tokens > 0;
+      scores[`${name}.compound`] = has ? v.compound : undefined;
+      scores[`${name}.pos`] = has ? v.pos : undefined;
+      scores[`${name}.neu`] = has ? v.neu : undefined;
+      scores[`${name}.neg`] = has ? v.neg : undefined;
       continue;
     }
     let tokens = byLanguage.get(lex.language);
@@ -71,10 +73,9 @@ export function scoreEntry(entry: RawEntry, lexicons: readonly CompiledLexicon[]
       else scores[column] = sum;
     }
   }
-  if (nWords === undefined) {
-    const english = byLanguage.get('en') ?? byLanguage.values().next().value ?? tokenize(entry.text, 'en');
-    nWords = english.nWords;
-  }
+  // Words are counted with the English tokenizer unless only other-language lexicons were used.
+  const counted = byLanguage.get('en') ?? byLanguage.values().next().value ?? tokenize(entry.text, 'en');
+  const nWords = counted.nWords;
   const scored: ScoredEntry = {
     id: entry.id,
     person: entry.person,
