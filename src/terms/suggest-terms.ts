@@ -59,8 +59,8 @@ function bestSense(s: TermSuggestion): number {
 
 /**
  * Suggests terms for a construct from seed words, each with its reasons:
- * WordNet 3.1 synonyms and related lemmas of each seed, inflected forms of the seeds and of
- * single-word WordNet suggestions (en-inflectors), and words that co-occur with the seeds in the
+ * WordNet 3.1 synonyms and related lemmas of each seed, inflected forms of the seeds for the
+ * parts of speech WordNet gives them (en-inflectors), and words that co-occur with the seeds in the
  * researcher's own corpus with positive PMI ≥ `minPmi` in at least `minCount` entries.
  *
  * Ranking (deterministic): more kinds of evidence first; then higher PMI with the seeds (terms
@@ -87,8 +87,7 @@ export function suggestTerms(options: SuggestTermsOptions): TermSuggestion[] {
       }
     }
     if (options.inflections !== false) {
-      const bases = [...seeds, ...[...byTerm.keys()].filter((t) => !t.includes(' '))];
-      for (const base of bases) {
+      for (const base of seeds) {
         const parts = wordnetPartsOfSpeech(wn, base);
         for (const f of inflectedForms(base, parts)) add(f.form, { kind: 'inflection', of: base, form: f.kind });
       }
