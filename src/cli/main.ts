@@ -5,11 +5,12 @@ import { registerLexicons } from './lexicons.js';
 import { registerScore } from './score.js';
 import { registerSeries } from './series.js';
 import { registerRun } from './run.js';
+import { registerValidate } from './validate.js';
 
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
-const commands: Register[] = [registerRun, registerScore, registerSeries, registerLexicons];
+const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons];
 
 /** Builds the commander program with every command registered. */
 export function buildProgram(): Command {

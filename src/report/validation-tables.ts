@@ -1,0 +1,129 @@
+import type { FixedEffect } from '../stats/linear-mixed-model.js';
+import type { StatResult } from '../stats/stat-result.js';
+import type { ValidationResult } from '../validate/validate-series.js';
+import { formatNumber } from './format-number.js';
+
+/** A table ready for `csvDocument`: header and rows of already-formatted fields. */
+export interface Table {
+  header: string[];
+  rows: string[][];
+}
+
+const num = formatNumber;
+const note = (r: StatResult<object>): string => (r.ok ? '' : `${r.code}: ${r.reason}`);
+
+/** Header of the tidy statistics table. */
+export const VALIDATION_STATISTICS_HEADER = ['score', 'rating', 'level', 'statistic', 'estimate', 'se', 'ci_low', 'ci_high', 'df', 'n', 'p', 'note'];
+
+/**
+ * The tidy statistics table: one row per score × rating × statistic, with estimate, standard
+ * error, interval, df, n, p and a `note` that says why a value is empty.
+ */
+export function validationStatisticsTable(result: ValidationResult): Table {
+  const rows: string[][] = [];
+  for (const { score, rating, analysis: a } of result.pairs) {
+    const row = (level: string, statistic: string, f: { estimate?: number; se?: number; ciLow?: number; ciHigh?: number; df?: number; n?: number; p?: number; note?: string }) =>
+      rows.push([score, rating, level, statistic, num(f.estimate), num(f.se), num(f.ciLow), num(f.ciHigh), num(f.df), num(f.n), num(f.p), f.note ?? '']);
+    row('all', 'pairs', { estimate: a.pairs, n: a.persons, note: 'complete pairs; n = persons' });
+    const corr = (level: string, statistic: string, r: typeof a.pooled) =>
+      r.ok ? row(level, statistic, { estimate: r.r, ciLow: r.ciLow, ciHigh: r.ciHigh, df: r.df, n: r.n, p: r.p, note: r.ciLow === undefined ? 'interval needs n > 3' : '' }) : row(level, statistic, { note: note(r) });
+    corr('pooled', 'r', a.pooled);
+    corr('between', 'r_person_means', a.between);
+    if (a.bootstrapBetween.ok) row('between', 'r_person_means_bootstrap', { estimate: a.between.ok ? a.between.r : undefined, se: a.bootstrapBetween.se, ciLow: a.bootstrapBetween.ciLow, ciHigh: a.bootstrapBetween.ciHigh, n: a.bootstrapBetween.succeeded, note: `percentile interval, ${a.bootstrapBetween.replicates} resamples of persons` });
+    else row('between', 'r_person_means_bootstrap', { note: note(a.bootstrapBetween) });
+    const w = a.within;
+    if (w.ok) row('within', 'r_rm', { estimate: w.r, ciLow: w.ciLow, ciHigh: w.ciHigh, df: w.df, n: w.n, p: w.p, note: w.personsTooFew ? `${w.personsTooFew} persons with fewer than 2 pairs left out` : '' });
+    else row('within', 'r_rm', { note: note(w) });
+    if (a.bootstrapWithin.ok) row('within', 'r_rm_bootstrap', { estimate: w.ok ? w.r : undefined, se: a.bootstrapWithin.se, ciLow: a.bootstrapWithin.ciLow, ciHigh: a.bootstrapWithin.ciHigh, n: a.bootstrapWithin.succeeded, note: `percentile interval, ${a.bootstrapWithin.replicates} resamples of persons` });
+    else row('within', 'r_rm_bootstrap', { note: note(a.bootstrapWithin) });
+    const pp = a.perPerson;
+    const ppNote = pp.personsWithR === 0 ? `no person has ${pp.minPairs} or more pairs with varying values` : `${pp.personsWithR} of ${pp.persons} persons with at least ${pp.minPairs} pairs`;
+    row('per_person', 'r_median', { estimate: pp.median, n: pp.personsWithR, note: ppNote });
+    row('per_person', 'r_q1', { estimate: pp.q1, n: pp.personsWithR, note: ppNote });
+    row('per_person', 'r_q3', { estimate: pp.q3, n: pp.personsWithR, note: ppNote });
+    row('per_person', 'r_min', { estimate: pp.min, n: pp.personsWithR, note: ppNote });
+    row('per_person', 'r_max', { estimate: pp.max, n: pp.personsWithR, note: ppNote });
+    row('per_person', 'share_positive', { estimate: pp.sharePositive, n: pp.personsWithR, note: ppNote });
+    const m = a.mixedModel;
+    if (m.ok) {
+      const inf = m.inference === 'wald-z' ? 'Wald z' : 't with between/within df';
+      for (const f of m.fixed as FixedEffect[]) row('model', f.name === '(Intercept)' ? 'intercept' : f.name, { estimate: f.estimate, se: f.se, ciLow: f.ciLow, ciHigh: f.ciHigh, df: f.df, n: m.n, p: f.p, note: `REML random-intercept model; ${inf}` });
+      row('model', 'variance_person', { estimate: m.varianceIntercept, n: m.groups, note: m.boundary ? 'estimated at its bound 0 (singular fit)' : '' });
+      row('model', 'variance_residual', { estimate: m.varianceResidual, n: m.n });
+      row('model', 'icc_conditional', { estimate: m.icc, n: m.groups, note: 'person variance share of the rating after the score' });
+      row('model', 'reml_criterion', { estimate: m.remlCriterion, n: m.n });
+    } else row('model', 'fit', { note: note(m) });
+    for (const [which, icc] of [['score', a.iccScore], ['rating', a.iccRating]] as const) {
+      if (icc.ok) {
+        row('icc', `icc1_${which}`, { estimate: icc.icc1, df: icc.df1, n: icc.groups, p: icc.p, note: `one-way ANOVA, n0 = ${num(icc.n0)}` });
+        row('icc', `icc1k_${which}`, { estimate: icc.icc1k, n: icc.groups, note: 'reliability of a person mean' });
+      } else row('icc', `icc1_${which}`, { note: note(icc) });
+    }
+  }
+  return { header: VALIDATION_STATISTICS_HEADER, rows };
+}
+
+/** The aligned pairs: one row per occasion with its text scores and ratings. */
+export function alignedPairsTable(result: ValidationResult, scoreColumns: readonly string[], ratingColumns: readonly string[]): Table {
+  const header = ['person', 'time', 'time_utc', 'entries', 'words', 'text_missing', 'reports', ...scoreColumns, ...ratingColumns];
+  const rows = result.rows.map((r) => [r.person, r.label, new Date(r.instant).toISOString(), num(r.entries), num(r.words), r.missing, num(r.reports), ...scoreColumns.map((c) => num(r.scores[c])), ...ratingColumns.map((c) => num(r.ratings[c]))]);
+  return { header, rows };
+}
+
+/** Each person's own correlation per score × rating, with why it is empty where it is. */
+export function personCorrelationsTable(result: ValidationResult): Table {
+  const rows: string[][] = [];
+  for (const { score, rating, analysis } of result.pairs) {
+    for (const c of analysis.perPerson.correlations) rows.push([score, rating, c.person, num(c.pairs), num(c.r), c.note]);
+  }
+  return { header: ['score', 'rating', 'person', 'pairs', 'r', 'note'], rows };
+}
+
+/** Word-count reliability bands per score. */
+export function wordReliabilityTable(result: ValidationResult): Table {
+  const rows: string[][] = [];
+  for (const rel of result.reliability) {
+    for (const b of rel.bands) rows.push([rel.column, num(b.low), num(b.high), num(b.bins), num(b.medianWords), num(b.halfR), num(b.reliability), num(b.withinReliability), num(b.wordsForTarget), b.note]);
+  }
+  return { header: ['score', 'words_from', 'words_below', 'bins', 'median_words', 'half_r', 'reliability', 'within_reliability', 'words_for_target', 'note'], rows };
+}
+
+/** Observed bins behind each person mean and the mean's reliability. */
+export function binsPerPersonTable(result: ValidationResult): Table {
+  const rows: string[][] = [];
+  for (const b of result.binsPerPerson) for (const p of b.perPerson) rows.push([b.column, p.person, num(p.bins), num(p.meanReliability), p.meanReliability === undefined ? (b.icc1 === undefined ? 'ICC(1) not estimable' : 'ICC(1) not positive or no bins') : '']);
+  return { header: ['score', 'person', 'bins', 'mean_reliability', 'note'], rows };
+}
+
+/** Diagnostics of the validation stage. */
+export function validationDiagnosticsTable(result: ValidationResult): Table {
+  return { header: ['code', 'message', 'file', 'line', 'stage'], rows: result.diagnostics.map((d) => [d.code, d.message, d.source?.file ?? '', num(d.source?.line), d.stage]) };
+}
+
+/**
+ * The JSON summary: options, counts, each pair's statistics and verdict, reliability and
+ * bins-per-person summaries, and diagnostic counts by code. Non-finite numbers never appear.
+ */
+export function validationJson(result: ValidationResult): string {
+  const diagnostics: Record<string, number> = {};
+  for (const d of result.diagnostics) diagnostics[d.code] = (diagnostics[d.code] ?? 0) + 1;
+  const clean = (value: unknown): unknown => {
+    if (typeof value === 'number') return Number.isFinite(value) ? value : undefined;
+    if (Array.isArray(value)) return value.map(clean);
+    if (value && typeof value === 'object') return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, clean(v)]));
+    return value;
+  };
+  const body = {
+    options: result.options,
+    counts: result.counts,
+    diagnostics,
+    pairs: result.pairs.map(({ score, rating, analysis }) => {
+      const { perPerson, ...rest } = analysis;
+      const { correlations: _omit, ...perPersonSummary } = perPerson;
+      return { score, rating, ...rest, perPerson: perPersonSummary };
+    }),
+    reliability: result.reliability,
+    binsPerPerson: result.binsPerPerson.map(({ perPerson: _p, ...summary }) => summary),
+  };
+  return JSON.stringify(clean(body), null, 2) + '\n';
+}
