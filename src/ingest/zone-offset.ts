@@ -1,19 +1,76 @@
 import { IANAZone } from 'luxon';
 
 const zones = new Map<string, IANAZone>();
-const offsetCache = new Map<string, Map<number, number>>();
+const offsetCache = new Map<string, Map<number, DaySpan>>();
 const QUARTER_HOUR = 15 * 60 * 1000;
 
-/** True when `zone` names a zone of the IANA time zone database known to this Node build. */
+const validity = new Map<string, boolean>();
+
+/**
+ * True when `zone` names a zone of the IANA time zone database known to this Node build.
+ * Answers are memoized: luxon builds an `Intl.DateTimeFormat` per check, which made checking
+ * every row of a scores file the slowest step of the series stage.
+ */
 export function isValidZone(zone: string): boolean {
-  return IANAZone.isValidZone(zone);
+  let ok = validity.get(zone);
+  if (ok === undefined) {
+    ok = IANAZone.isValidZone(zone);
+    if (validity.size > 10_000) validity.clear();
+    validity.set(zone, ok);
+  }
+  return ok;
+}
+
+const DAY = 24 * 3600 * 1000;
+
+/** A UTC day of one zone: the offset before and after `change` (Infinity when the day has none). */
+interface DaySpan {
+  change: number;
+  before: number;
+  after: number;
+}
+
+const IRREGULAR: DaySpan = { change: NaN, before: NaN, after: NaN };
+
+function ianaZone(zone: string): IANAZone {
+  let z = zones.get(zone);
+  if (!z) {
+    z = IANAZone.create(zone);
+    zones.set(zone, z);
+  }
+  return z;
+}
+
+/**
+ * The offsets of one UTC day in `zone`: luxon is asked at the day's first, middle and last
+ * quarter hour; when they differ, the quarter hour of the change is found by bisection.
+ * A day whose three samples all differ is marked irregular (per-quarter-hour lookups).
+ */
+function daySpan(z: IANAZone, start: number): DaySpan {
+  const before = z.offset(start);
+  const mid = z.offset(start + DAY / 2);
+  const after = z.offset(start + DAY - QUARTER_HOUR);
+  if (before === after && mid === before) return { change: Infinity, before, after };
+  if (before !== mid && mid !== after) return IRREGULAR;
+  // One change: bisect on quarter hours for the first one that reads `after`.
+  let lo = 0;
+  let hi = DAY / QUARTER_HOUR - 1;
+  while (hi - lo > 1) {
+    const q = (lo + hi) >> 1;
+    if (z.offset(start + q * QUARTER_HOUR) === before) lo = q;
+    else hi = q;
+  }
+  return { change: start + hi * QUARTER_HOUR, before, after };
 }
 
 /**
  * UTC offset in minutes of IANA `zone` at epoch milliseconds `instant`.
  *
- * Offsets are cached per quarter hour: every transition in the IANA database since 1970
- * falls on a quarter-hour boundary, so the cache never straddles a change.
+ * Offsets are cached per UTC day: every transition in the IANA database since 1970 falls on a
+ * quarter-hour boundary, and no zone changes its offset and back again within half a day (from
+ * memory of the tz data; a day whose samples show two changes falls back to per-quarter-hour
+ * lookups). test/ingest/zone-offset.test.ts checks the cache against luxon quarter hour by
+ * quarter hour over 2026 in several zones.
  * The caller must have checked the zone with isValidZone.
  */
 export function zoneOffset(zone: string, instant: number): number {
@@ -22,19 +79,15 @@ export function zoneOffset(zone: string, instant: number): number {
     cache = new Map();
     offsetCache.set(zone, cache);
   }
-  const key = Math.floor(instant / QUARTER_HOUR);
-  let offset = cache.get(key);
-  if (offset === undefined) {
-    let z = zones.get(zone);
-    if (!z) {
-      z = IANAZone.create(zone);
-      zones.set(zone, z);
-    }
-    offset = z.offset(key * QUARTER_HOUR);
-    if (cache.size > 200_000) cache.clear();
-    cache.set(key, offset);
+  const key = Math.floor(instant / DAY);
+  let span = cache.get(key);
+  if (span === undefined) {
+    span = daySpan(ianaZone(zone), key * DAY);
+    if (cache.size > 100_000) cache.clear();
+    cache.set(key, span);
   }
-  return offset;
+  if (span === IRREGULAR) return ianaZone(zone).offset(Math.floor(instant / QUARTER_HOUR) * QUARTER_HOUR);
+  return instant < span.change ? span.before : span.after;
 }
 
 /** How to resolve a local wall-clock time that a daylight-saving change skips or repeats. */
@@ -63,9 +116,8 @@ export function resolveWallClock(
   zone: string,
   policy: { gap: WallClockPolicy; overlap: WallClockPolicy },
 ): WallClockResult {
-  const day = 24 * 3600 * 1000;
-  const before = zoneOffset(zone, wallMs - day);
-  const after = zoneOffset(zone, wallMs + day);
+  const before = zoneOffset(zone, wallMs - DAY);
+  const after = zoneOffset(zone, wallMs + DAY);
   const candidates: Array<{ instant: number; offsetMinutes: number }> = [];
   for (const offset of before === after ? [before] : [before, after]) {
     const instant = wallMs - offset * 60000;
