@@ -4,13 +4,14 @@ import { TOOL_VERSION } from '../version.js';
 import { registerLexicons } from './lexicons.js';
 import { registerScore } from './score.js';
 import { registerSeries } from './series.js';
+import { registerDynamics } from './dynamics.js';
 import { registerRun } from './run.js';
 import { registerValidate } from './validate.js';
 
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
-const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons];
+const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons, registerDynamics];
 
 /** Builds the commander program with every command registered. */
 export function buildProgram(): Command {

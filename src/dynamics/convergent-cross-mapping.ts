@@ -85,7 +85,8 @@ export interface CcmDirection {
   surrogates: number;
 }
 
-const notEnough = (reason: string, E: number | undefined, tau: number, points: number, embeddingSkill?: DimensionSkill[]): CcmDirection => ({
+/** A {@link CcmDirection} with status `not_enough_data` and the reason. */
+export const ccmNotEnoughData = (reason: string, E: number | undefined, tau: number, points: number, embeddingSkill?: DimensionSkill[]): CcmDirection => ({
   status: 'not_enough_data',
   reason,
   E,
@@ -132,14 +133,14 @@ export function convergentCrossMapping(library: PhasedSeries, target: BinnedSeri
   let embeddingSkill: DimensionSkill[] | undefined;
   if (E === undefined) {
     const choice = chooseEmbeddingDimension(library, { maxE: options.maxE ?? 8, tau, exclusionRadius: radius });
-    if (!choice.ok) return notEnough(choice.reason, undefined, tau, 0);
+    if (!choice.ok) return ccmNotEnoughData(choice.reason, undefined, tau, 0);
     E = choice.E;
     embeddingSkill = choice.skills;
   }
   const points = delayEmbedding(library, E, tau, (t) => isNumber(target.values[t]));
   const n = points.count;
   if (n < Math.max(minPoints, E + 3)) {
-    return notEnough(`${n} usable points (embedding vectors with an observed target), fewer than the ${Math.max(minPoints, E + 3)} needed`, E, tau, n, embeddingSkill);
+    return ccmNotEnoughData(`${n} usable points (embedding vectors with an observed target), fewer than the ${Math.max(minPoints, E + 3)} needed`, E, tau, n, embeddingSkill);
   }
   const targetAt = (series: readonly (number | undefined)[]): Float64Array => {
     const out = new Float64Array(n);
@@ -192,7 +193,7 @@ export function convergentCrossMapping(library: PhasedSeries, target: BinnedSeri
     }
   }
   if (skill.length < 2 || rhoAtMax === undefined) {
-    return notEnough('the cross-map skill could not be computed at two library sizes (constant series or too few points)', E, tau, n, embeddingSkill);
+    return ccmNotEnoughData('the cross-map skill could not be computed at two library sizes (constant series or too few points)', E, tau, n, embeddingSkill);
   }
   const trend = kendallTau(
     skill.map((p) => p.librarySize),

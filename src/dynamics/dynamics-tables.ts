@@ -1,0 +1,103 @@
+import { formatNumber } from '../report/format-number.js';
+import type { DynamicsResult } from './analyse-dynamics.js';
+
+/** One tidy table: header and formatted rows. */
+export interface DynamicsTable {
+  file: string;
+  description: string;
+  header: string[];
+  rows: string[][];
+}
+
+const flag = (value: boolean | undefined): string => (value === undefined ? '' : value ? '1' : '0');
+const n = formatNumber;
+
+/**
+ * The tidy CSV tables of a {@link DynamicsResult}, numbers written with `formatNumber` so the same
+ * inputs give byte-identical files: per person × variable descriptives (`dynamics-persons.csv`),
+ * VAR(1) coefficients per person and pooled (`dynamics-var.csv`), one CCM row per person × pair ×
+ * direction (`dynamics-ccm.csv`) and the skill curve over library sizes (`dynamics-ccm-skill.csv`).
+ */
+export function dynamicsTables(result: DynamicsResult): DynamicsTable[] {
+  const persons: DynamicsTable = {
+    file: 'dynamics-persons.csv',
+    description: 'Descriptive dynamics per person and variable: level, variability, instability (MSSD) and inertia (lag-1 autocorrelation) over valid lag pairs',
+    header: ['person', 'variable', 'bins', 'observed', 'pct_missing', 'mean', 'sd', 'mssd', 'rmssd', 'lag_pairs', 'autocorr_acf', 'autocorr_pearson', 'ready', 'note'],
+    rows: result.summaries.map((s) => [
+      s.person,
+      s.variable,
+      String(s.bins),
+      String(s.observed),
+      n(s.percentMissing),
+      n(s.mean),
+      n(s.sd),
+      n(s.mssd),
+      n(s.rmssd),
+      String(s.lagPairs),
+      n(s.autocorrelationAcf),
+      n(s.autocorrelationPearson),
+      flag(s.ready),
+      s.notes.join('; '),
+    ]),
+  };
+  const varTable: DynamicsTable = {
+    file: 'dynamics-var.csv',
+    description: 'Within-person VAR(1) of each pair on person-mean-centred series (valid lag pairs only): per person with an intercept, and pooled with person fixed effects',
+    header: ['scope', 'person', 'pair', 'outcome', 'predictor', 'estimate', 'se', 't', 'p', 'df', 'lag_pairs', 'persons', 'ready', 'status', 'reason'],
+    rows: result.var.map((v) => [
+      v.scope,
+      v.person,
+      `${v.pair[0]}:${v.pair[1]}`,
+      v.outcome ?? '',
+      v.predictor === undefined ? '' : v.predictor === '(intercept)' ? v.predictor : `${v.predictor}.lag1`,
+      n(v.estimate),
+      n(v.se),
+      n(v.t),
+      n(v.p),
+      n(v.df),
+      String(v.lagPairs),
+      n(v.persons),
+      flag(v.ready),
+      v.status,
+      v.reason ?? '',
+    ]),
+  };
+  const ccm: DynamicsTable = {
+    file: 'dynamics-ccm.csv',
+    description: 'Convergent cross mapping per pair and direction: evidence that `cause` drives `effect` when the effect’s delay embedding cross-maps the cause with a skill that converges with library size and beats surrogates',
+    header: [
+      'scope', 'person', 'cause', 'effect', 'direction', 'status', 'E', 'tau', 'points', 'rho_lmin', 'rho_lmax', 'kendall_tau', 'kendall_p',
+      'delta_rho', 'delta_low', 'delta_high', 'converges', 'p_shuffle', 'p_seasonal', 'surrogates', 'reason',
+    ],
+    rows: result.ccm.map((c) => [
+      c.scope,
+      c.person,
+      c.cause,
+      c.effect,
+      `${c.cause} -> ${c.effect}`,
+      c.status,
+      n(c.E),
+      n(c.tau),
+      String(c.points),
+      n(c.rhoAtMin),
+      n(c.rhoAtMax),
+      n(c.kendallTau),
+      n(c.kendallP),
+      n(c.deltaRho),
+      n(c.deltaLow),
+      n(c.deltaHigh),
+      flag(c.converges),
+      n(c.pShuffle),
+      n(c.pSeasonal),
+      String(c.surrogates),
+      c.reason ?? '',
+    ]),
+  };
+  const skill: DynamicsTable = {
+    file: 'dynamics-ccm-skill.csv',
+    description: 'Cross-map skill over library sizes (mean and 5th/95th percentile over random libraries)',
+    header: ['scope', 'person', 'cause', 'effect', 'library_size', 'rho', 'rho_p05', 'rho_p95', 'libraries'],
+    rows: result.ccm.flatMap((c) => c.skill.map((p) => [c.scope, c.person, c.cause, c.effect, String(p.librarySize), n(p.rho), n(p.rhoLow), n(p.rhoHigh), String(p.samples)])),
+  };
+  return [persons, varTable, ccm, skill];
+}
