@@ -1,3 +1,4 @@
+import { decodeWindows1252 } from './decode-windows-1252.js';
 import { repairMojibake } from './repair-mojibake.js';
 
 /** A decoded text line, with the repair applied to it, if any. */
@@ -8,7 +9,6 @@ export interface DecodedLine {
 }
 
 const utf8 = new TextDecoder('utf-8', { fatal: true });
-const cp1252 = new TextDecoder('windows-1252');
 
 /**
  * Decodes one line of a text export (chat log, diary) from bytes.
@@ -29,7 +29,7 @@ export function decodeTextLine(bytes: Uint8Array): DecodedLine {
   try {
     text = utf8.decode(view);
   } catch {
-    return { text: cp1252.decode(view), repaired: 'windows_1252' };
+    return { text: decodeWindows1252(view), repaired: 'windows_1252' };
   }
   const fixed = repairMojibake(text);
   return fixed === text ? { text } : { text: fixed, repaired: 'mojibake' };

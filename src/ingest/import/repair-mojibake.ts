@@ -1,4 +1,5 @@
-const cp1252 = new TextDecoder('windows-1252');
+import { WINDOWS_1252_HIGH } from './decode-windows-1252.js';
+
 const utf8 = new TextDecoder('utf-8', { fatal: true });
 
 /** Character → byte under Windows-1252 and under ISO-8859-1 (C1 controls), the two usual wrong decodings. */
@@ -6,7 +7,7 @@ const BYTE_OF = (() => {
   const map = new Map<string, number>();
   for (let b = 0x80; b <= 0xff; b++) {
     map.set(String.fromCharCode(b), b);
-    map.set(cp1252.decode(Uint8Array.of(b)), b);
+    if (b <= 0x9f) map.set(String.fromCharCode(WINDOWS_1252_HIGH[b - 0x80] as number), b);
   }
   return map;
 })();

@@ -1,0 +1,65 @@
+import { describe, expect, it } from 'vitest';
+import type { ImportItem } from '../../../src/ingest/import/import-item.js';
+import { compileDiaryHeading, DEFAULT_DIARY_HEADING, readDiary } from '../../../src/ingest/import/read-diary.js';
+import { openImportSource } from '../../../src/io/open-import-source.js';
+import { collect, tempFolder } from '../../support/temp-files.js';
+
+const tmp = tempFolder();
+const lines = (text: string) => text.split('\n').map((t, i) => ({ line: i + 1, text: t }));
+const DST = { gap: 'reject', overlap: 'reject' } as const;
+const entries = (items: ImportItem[]) => items.flatMap((i) => (i.kind === 'entry' ? [{ id: i.entry.id, local: new Date(i.entry.instant + i.entry.offsetMinutes * 60000).toISOString().slice(0, 16), offset: i.entry.offsetMinutes, text: i.entry.text }] : []));
+const others = (items: ImportItem[]) => items.flatMap((i) => (i.kind === 'reject' ? [i.diagnostic.code] : i.kind === 'drop' ? [`drop:${i.reason}`] : []));
+
+describe('readDiary reads plain-text diaries with dated headings', () => {
+  const base = { file: 'diary.txt', person: 'P01', zone: 'Europe/Brussels', dst: DST };
+  it('starts an entry at each ISO 8601 heading and places a date without time at 12:00 local time', async () => {
+    const items = await collect(readDiary(lines('# 2025-03-29\nA calm day.\n\n# 2025-03-30\nClocks changed.\nTired.'), { ...base, heading: compileDiaryHeading(DEFAULT_DIARY_HEADING), dateFormat: 'yyyy-MM-dd' }));
+    expect(entries(items)).toEqual([
+      { id: 'diary.txt:1', local: '2025-03-29T12:00', offset: 60, text: 'A calm day.' },
+      { id: 'diary.txt:4', local: '2025-03-30T12:00', offset: 120, text: 'Clocks changed.\nTired.' },
+    ]);
+  });
+  it('reads a custom heading with month names in a locale and a clock time', async () => {
+    const heading = compileDiaryHeading('^== (?<date>.+) ==$');
+    const items = await collect(readDiary(lines('== lundi 3 mars 2025, 21h15 ==\nJe suis content.'), { ...base, heading, dateFormat: "cccc d MMMM yyyy', 'HH'h'mm", locale: 'fr' }));
+    expect(entries(items)).toEqual([{ id: 'diary.txt:1', local: '2025-03-03T21:15', offset: 60, text: 'Je suis content.' }]);
+  });
+  it('rejects a heading with an impossible date (30 February) with luxon\'s reason, an empty entry, and text before the first heading', async () => {
+    const items = await collect(readDiary(lines('front matter\n# 2025-02-30\nlost day\n# 2025-03-01\n\n# 2025-03-02\nfine'), { ...base, heading: compileDiaryHeading(DEFAULT_DIARY_HEADING), dateFormat: 'yyyy-MM-dd' }));
+    expect(others(items)).toEqual(['diary_bad_date', 'diary_empty_entry', 'diary_before_first_heading']);
+    const bad = items.find((i) => i.kind === 'reject');
+    expect(bad?.kind === 'reject' && bad.diagnostic).toMatchObject({ source: { line: 2 }, message: expect.stringContaining('2025-02-30') });
+    expect(entries(items).map((e) => e.text)).toEqual(['fine']);
+  });
+  it('refuses a heading pattern without a capture group, saying how to fix it', () => {
+    expect(() => compileDiaryHeading('^## \\d{4}-\\d{2}-\\d{2}$')).toThrow(/no capture group/);
+    expect(() => compileDiaryHeading('^(unclosed')).toThrow(/Cannot use the diary heading pattern/);
+  });
+});
+
+describe('chat-table reads JSON, JSON Lines and CSV with a sender field', () => {
+  const spec = (path: string, extra = {}) => ({ format: 'chat-table' as const, path, person: 'P01', zone: 'Europe/Brussels', senders: ['ann'], ...extra });
+  it('keeps the participant\'s rows of a CSV and drops the others as third_party', async () => {
+    const path = tmp.write('chat.csv', 'sender,timestamp,message\nann,2025-03-03T09:00:00+01:00,"Hello, world"\nbob,2025-03-03T09:01:00+01:00,Bob\'s secret\nAnn,2025-03-03 09:02,Ã§a va\n,2025-03-03 09:03,who?\n');
+    const items = await collect((await openImportSource(spec(path))).items);
+    expect(entries(items).map((e) => [e.id, e.local, e.text])).toEqual([
+      ['chat.csv:2', '2025-03-03T09:00', 'Hello, world'],
+      ['chat.csv:4', '2025-03-03T09:02', 'ça va'],
+    ]);
+    expect(others(items)).toEqual(['drop:third_party', 'chat_no_sender']);
+    expect(JSON.stringify(items)).not.toContain('secret');
+  });
+  it('reads JSON Lines and JSON arrays with named fields', async () => {
+    const jsonl = tmp.write('chat.jsonl', '{"from":"ann","at":1741000000,"body":"one"}\n{"from":"bob","at":1741000060,"body":"two"}\n');
+    const json = tmp.write('chat.json', JSON.stringify([{ author: 'ann', time: '2025-03-03T09:00:00Z', content: 'three' }]));
+    const a = await collect((await openImportSource(spec(jsonl, { senderField: 'from', timeField: 'at', textField: 'body' }))).items);
+    const b = await collect((await openImportSource(spec(json))).items); // a time with Z keeps its own offset 0
+    expect(entries(a).map((e) => e.text)).toEqual(['one']);
+    expect(others(a)).toEqual(['drop:third_party']);
+    expect(entries(b).map((e) => [e.local, e.text])).toEqual([['2025-03-03T09:00', 'three']]);
+  });
+  it('stops with a clear error when the file has no sender field', async () => {
+    const path = tmp.write('nosender.csv', 'timestamp,message\n2025-03-03T09:00:00+01:00,hi\n');
+    await expect(collect((await openImportSource(spec(path))).items)).rejects.toThrow(/no sender field; expected one of `sender`.*found `timestamp`, `message`; name it with --sender-field/);
+  });
+});
