@@ -1,0 +1,141 @@
+import type { Reconciliation } from '../../types.js';
+import type { AlignedPair } from '../../validate/aligned-pair.js';
+import { absent, present, type ReliabilityCurve, type ReportData, type ValidationData, type ValidationPair } from '../report-data.js';
+import { alignedFromCsv } from './aligned-from-csv.js';
+import { coverageFromRows } from './coverage-from-rows.js';
+import { dynamicsTables } from './dynamics-tables.js';
+import { parseCsvTable } from './parse-csv-table.js';
+import { parseSeriesLong } from './parse-series-long.js';
+import { personTracks, type BinRatings } from './person-tracks.js';
+import { readinessFromRows } from './readiness-from-rows.js';
+import { termsFromJson } from './terms-from-json.js';
+import { validationFromJson } from './validation-from-json.js';
+import { validationFromPairs } from './validation-from-pairs.js';
+
+/** Columns of an aligned pairs file that are neither scores nor ratings. */
+const ALIGNED_FIXED = new Set(['person', 'label', 'bin_start', 'instant', 'time_utc', 'time_local', 'entries', 'words', 'missing', 'reports', 'alignment']);
+
+/** The contents of an output folder as far as they exist (io/read-report-data.ts reads them). */
+export interface ReportInputs {
+  /** Name of the output folder (shown on the page). */
+  source: string;
+  tool: { name: string; version: string };
+  /** Text of series-long.csv. */
+  seriesCsv?: string;
+  /** Parsed manifest.json. */
+  manifest?: Record<string, unknown>;
+  /** Reconciliation from the scores sidecar, used when the manifest has none. */
+  reconciliation?: Reconciliation;
+  /** Parsed validation JSON of the validate stage (see validationFromJson). */
+  validationJson?: unknown;
+  /** Text of the validate stage's aligned pairs CSV (see alignedFromCsv). */
+  alignedCsv?: string;
+  /** Parsed term audit JSON (see termsFromJson). */
+  termsJson?: unknown;
+  /** CSV files of the dynamics stage (see dynamicsTables). */
+  dynamicsFiles?: { name: string; text: string }[];
+  /** Why an input is absent or unreadable, by section (`validation`, `lexicons`, `dynamics`, …). */
+  reasons?: Partial<Record<'series' | 'manifest' | 'validation' | 'lexicons' | 'dynamics', string>>;
+}
+
+/** Choices a user makes for the report. */
+export interface ReportOptions {
+  /** Score column drawn in the series and readiness sections (default: the first validated score, else `vader.compound`, else the first score). */
+  score?: string;
+  /** Rating drawn beside it (default: the first rating validated with that score). */
+  rating?: string;
+  /** Person of the large series view (default: the first person in id order). */
+  person?: string;
+  /** Readiness threshold on usable lag pairs (default 50). */
+  minLagPairs?: number;
+  title?: string;
+}
+
+/** Key of a score × rating pair in {@link ReportInputs.alignedPairs}. */
+export function pairKey(score: string, rating: string): string {
+  return `${score}\u0000${rating}`;
+}
+
+/**
+ * Assembles the report's data from what an output folder holds: coverage, tracks and readiness
+ * from the series file; reconciliation and provenance from the manifest; validation from its
+ * statistics JSON (or, lacking it, from the aligned pairs through the validate stage's own
+ * analysis), with the aligned pairs also giving the scatters and the self-reports per bin;
+ * term audit and dynamics as given. Every absent input becomes an absent part with its reason.
+ * Pure: no files, no clock.
+ */
+export function buildReportData(inputs: ReportInputs, options: ReportOptions = {}): ReportData {
+  const why = inputs.reasons ?? {};
+  const parsed = inputs.seriesCsv === undefined ? absent<never>(why.series ?? 'the folder has no series-long.csv; run `lexichron series` or `lexichron run` first.') : parseSeriesLong(inputs.seriesCsv);
+  // validation
+  const fromJson = inputs.validationJson === undefined ? { pairs: [], reliability: [] } : validationFromJson(inputs.validationJson);
+  let pairs: ValidationPair[] = fromJson.pairs;
+  const reliability: ReliabilityCurve[] = fromJson.reliability;
+  let alignedPairs: Map<string, AlignedPair[]> | undefined;
+  let binRatings: Map<string, BinRatings> | undefined;
+  if (inputs.alignedCsv !== undefined) {
+    const header = parseCsvTable(inputs.alignedCsv)?.header ?? [];
+    const seriesScores = parsed.ok ? parsed.value.scores : [];
+    const scoreNames = pairs.length ? [...new Set(pairs.map((p) => p.score))] : header.filter((h) => seriesScores.includes(h));
+    const ratingNames = pairs.length ? [...new Set(pairs.map((p) => p.rating))] : header.filter((h) => !seriesScores.includes(h) && !ALIGNED_FIXED.has(h) && !h.includes('.'));
+    const aligned = alignedFromCsv(inputs.alignedCsv, scoreNames, ratingNames, parsed.ok ? parsed.value.rows : []);
+    alignedPairs = aligned.pairs;
+    binRatings = aligned.binRatings;
+  }
+  if (pairs.length === 0 && alignedPairs)
+    for (const [key, list] of alignedPairs) {
+      const [score, rating] = key.split('\u0000') as [string, string];
+      pairs.push(validationFromPairs(score, rating, list));
+    }
+  else if (alignedPairs) for (const p of pairs) if (!p.points) p.points = validationFromPairs(p.score, p.rating, alignedPairs.get(pairKey(p.score, p.rating)) ?? []).points;
+  pairs = pairs.sort((a, b) => (a.score === b.score ? (a.rating < b.rating ? -1 : 1) : a.score < b.score ? -1 : 1));
+  const scores = parsed.ok ? parsed.value.scores : [];
+  const score =
+    options.score ?? (options.rating ? pairs.find((p) => p.rating === options.rating)?.score : undefined) ?? pairs[0]?.score ?? (scores.includes('vader.compound') ? 'vader.compound' : scores[0]);
+  const rating = options.rating ?? pairs.find((p) => p.score === score)?.rating ?? (binRatings ? [...binRatings.keys()][0] : undefined);
+  const shownIndex = Math.max(0, pairs.findIndex((p) => p.score === score && p.rating === rating));
+  const validation: ReportData['validation'] =
+    pairs.length || reliability.length
+      ? present<ValidationData>({ pairs, shown: shownIndex, reliability })
+      : absent(why.validation ?? 'the folder has no validation output; name self-reports in the study file (`ratings`) or run `lexichron validate`.');
+  // series-based parts
+  let coverage: ReportData['coverage'] = absent(parsed.ok ? '' : parsed.reason);
+  let series: ReportData['series'] = absent(parsed.ok ? '' : parsed.reason);
+  let readiness: ReportData['readiness'] = absent(parsed.ok ? '' : parsed.reason);
+  if (parsed.ok) {
+    const { rows } = parsed.value;
+    if (score === undefined || !scores.includes(score)) {
+      const reason = score === undefined ? 'series-long.csv has no score column.' : `the score \`${score}\` is not a column of series-long.csv; choose one of ${scores.map((s) => `\`${s}\``).join(', ')}.`;
+      series = absent(reason);
+      readiness = absent(reason);
+      coverage = present(coverageFromRows(rows));
+    } else {
+      const cov = coverageFromRows(rows);
+      coverage = present(cov);
+      const tracks = personTracks(rows, score, cov.binHours, rating ? binRatings?.get(rating) : undefined);
+      const selected = options.person !== undefined && tracks.some((t) => t.person === options.person) ? options.person : (tracks[0]?.person ?? '');
+      series = tracks.length
+        ? present({ score, scores, ...(rating && binRatings?.has(rating) ? { rating } : {}), binHours: cov.binHours, persons: tracks, selected })
+        : absent('series-long.csv has no rows.');
+      readiness = present(readinessFromRows(rows, score, options.minLagPairs));
+    }
+  }
+  const manifestReconciliation = inputs.manifest?.reconciliation as Reconciliation | undefined;
+  const reconciliation = manifestReconciliation ?? inputs.reconciliation;
+  const studyName = ((inputs.manifest?.parameters as Record<string, unknown> | undefined)?.study as Record<string, unknown> | undefined)?.name;
+  const terms = inputs.termsJson === undefined ? undefined : termsFromJson(inputs.termsJson);
+  const dynamics = inputs.dynamicsFiles ? dynamicsTables(inputs.dynamicsFiles) : undefined;
+  return {
+    title: options.title ?? (typeof studyName === 'string' ? `${studyName}: study report` : `Study report: ${inputs.source}`),
+    tool: inputs.tool,
+    source: inputs.source,
+    coverage,
+    reconciliation: reconciliation ? present(reconciliation) : absent('neither manifest.json nor scores.csv.meta.json holds a reconciliation.'),
+    series,
+    validation,
+    lexicons: terms ? present(terms) : absent(why.lexicons ?? 'the folder has no term audit; run `lexichron terms audit` or add the audit to the study file.'),
+    readiness,
+    dynamics: dynamics ? present(dynamics) : absent(why.dynamics ?? 'the dynamics stage did not run; run `lexichron dynamics` or add it to the study file.'),
+    provenance: inputs.manifest ? present({ manifest: inputs.manifest }) : absent(why.manifest ?? 'the folder has no manifest.json.'),
+  };
+}

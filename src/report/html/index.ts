@@ -1,0 +1,2 @@
+export { renderReport } from './render-report.js';
+export { CAUTIONS } from './cautions.js';
