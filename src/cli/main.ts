@@ -6,12 +6,14 @@ import { registerScore } from './score.js';
 import { registerSeries } from './series.js';
 import { registerDynamics } from './dynamics.js';
 import { registerRun } from './run.js';
+import { registerImport } from './import.js';
+import { registerForget } from './forget.js';
 import { registerValidate } from './validate.js';
 
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
-const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons, registerDynamics];
+const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons, registerDynamics, registerImport, registerForget];
 
 /** Builds the commander program with every command registered. */
 export function buildProgram(): Command {
