@@ -9,11 +9,12 @@ import { registerRun } from './run.js';
 import { registerImport } from './import.js';
 import { registerForget } from './forget.js';
 import { registerValidate } from './validate.js';
+import { registerReport } from './report.js';
 
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
-const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons, registerDynamics, registerImport, registerForget];
+const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons, registerDynamics, registerImport, registerForget, registerReport];
 
 /** Builds the commander program with every command registered. */
 export function buildProgram(): Command {
