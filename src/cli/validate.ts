@@ -75,9 +75,11 @@ export function registerValidate(program: Command): void {
     });
     await writeFileAtomic(join(String(opts.out), 'datapackage.json'), JSON.stringify(dataPackage('lexichron-validation', 'lexichron validation', result.resources), null, 2) + '\n');
     const r = result.reconciliation;
-    const rejected = Object.entries(r.rejected).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
+    const byCode: Record<string, number> = {};
+    for (const d of result.result.diagnostics) byCode[d.code] = (byCode[d.code] ?? 0) + 1;
+    const problems = Object.entries(byCode).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
     const lines = [
-      `${r.read} self-report rows read, ${r.kept} kept; left out: ${rejected}`,
+      `${r.read} self-report rows read, ${r.kept} kept; diagnostics (see validation-diagnostics.csv): ${problems}`,
       `${result.result.counts.rows} occasions paired (${result.result.counts.rowsWithText} with text) for ${result.result.counts.persons} persons`,
     ];
     for (const { score, rating, analysis } of result.result.pairs) {

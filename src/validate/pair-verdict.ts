@@ -113,7 +113,7 @@ export function pairVerdict(input: {
   }
   if (within.ok && between.ok) {
     const anyClear = excludesZero(within.ciLow, within.ciHigh) || excludesZero(between.ciLow, between.ciHigh);
-    if (Math.sign(within.r) !== Math.sign(between.r) && anyClear && Math.max(Math.abs(within.r), Math.abs(between.r)) >= VERDICT_THRESHOLDS.small)
+    if (Math.sign(within.r) !== Math.sign(between.r) && anyClear && Math.min(Math.abs(within.r), Math.abs(between.r)) >= VERDICT_THRESHOLDS.small)
       warnings.push({
         code: 'levels_disagree_sign',
         message: `The within-person (${f2(within.r)}) and between-person (${f2(between.r)}) correlations have opposite signs: what holds across people does not hold within a person here, and neither may be read as the other.`,
