@@ -10,11 +10,12 @@ import { registerImport } from './import.js';
 import { registerForget } from './forget.js';
 import { registerValidate } from './validate.js';
 import { registerReport } from './report.js';
+import { registerTerms } from './terms.js';
 
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
-const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons, registerDynamics, registerImport, registerForget, registerReport];
+const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons, registerDynamics, registerImport, registerForget, registerReport, registerTerms];
 
 /** Builds the commander program with every command registered. */
 export function buildProgram(): Command {

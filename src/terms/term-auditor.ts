@@ -4,6 +4,7 @@ import { matchLexicon } from '../score/match-lexicon.js';
 import type { RandomSource } from '../stats/random.js';
 import { tokenize } from '../text/tokenize.js';
 import type { LexiconRef } from '../types.js';
+import { kwicSnippet, tokenOffsets } from './kwic-snippet.js';
 import { dropTopTerms, type ContributionRow, type DropTopTerms } from './drop-top-terms.js';
 import { hitContributions } from './hit-contributions.js';
 import { reservoir, reservoirAdd, type Reservoir } from './reservoir-sample.js';
@@ -129,7 +130,7 @@ export function termAuditor(lexicon: CompiledLexicon, options: TermAuditOptions)
     over: options.over ?? 'entries',
   } as const;
   const redact = options.redact ?? ((s: string) => s);
-  const joiner = UNSPACED.test(lexicon.language) ? '' : ' ';
+  const spaced = !UNSPACED.test(lexicon.language);
   const categoryIndex = new Map(lexicon.categories.map((c, i) => [c.name, i]));
   const states: TermState[] = [];
   const byKey = new Map<string, number>();
@@ -156,6 +157,7 @@ export function termAuditor(lexicon: CompiledLexicon, options: TermAuditOptions)
     const tokens = tokenize(entry.text, lexicon.language);
     words += tokens.nWords;
     const hits: Array<[number, number]> = [];
+    let offsets: number[] | undefined;
     matchLexicon(tokens, lexicon, (hit, start, length, negated) => {
       const contributions = hitContributions(hit, negated, lexicon);
       for (let k = 0; k < hit.categories.length; k++) {
@@ -178,13 +180,10 @@ export function termAuditor(lexicon: CompiledLexicon, options: TermAuditOptions)
         }
         reservoirAdd(
           s.kwic,
-          () => ({
-            entryId: entry.id,
-            person: entry.person,
-            left: redact(tokens.raw.slice(Math.max(0, start - opts.context), start).join(joiner)),
-            match: tokens.raw.slice(start, start + length).join(joiner),
-            right: redact(tokens.raw.slice(start + length, start + length + opts.context).join(joiner)),
-          }),
+          () => {
+            offsets ??= tokenOffsets(entry.text, tokens.raw);
+            return { entryId: entry.id, person: entry.person, ...kwicSnippet(entry.text, offsets, tokens.raw, start, length, opts.context, redact, spaced) };
+          },
           options.random,
         );
       }
