@@ -42,7 +42,7 @@ async function* walk(dir: string): AsyncGenerator<string> {
 
 function idPattern(ids: readonly string[]): RegExp {
   const escaped = ids.map((id) => id.replace(/[.*+?^${}()|[\]\\]/g, '\\$&'));
-  return new RegExp(`(?<![\\p{L}\\p{N}_-])(?:${escaped.join('|')})(?![\\p{L}\\p{N}_])`, 'u');
+  return new RegExp(`(?<![\\p{L}\\p{N}_])(?:${escaped.join('|')})(?![\\p{L}\\p{N}_])`, 'u');
 }
 
 /** Rewrites a CSV/TSV/JSON Lines file without the person's rows; returns the rows removed (0 leaves the file untouched). */

@@ -1,0 +1,152 @@
+import dns from 'node:dns';
+import { readFileSync, existsSync } from 'node:fs';
+import http from 'node:http';
+import https from 'node:https';
+import net from 'node:net';
+import tls from 'node:tls';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { tempFolder } from '../support/temp-files.js';
+
+const tmp = tempFolder();
+const attempts: string[] = [];
+const restore: Array<() => void> = [];
+
+/** Replaces a method so that any call is recorded and fails, as a machine without network would. */
+function guard<T extends object>(target: T, name: keyof T & string, label: string): void {
+  const original = target[name];
+  (target as Record<string, unknown>)[name] = (..._args: unknown[]) => {
+    attempts.push(label);
+    throw new Error(`network use is not allowed: ${label}`);
+  };
+  restore.push(() => {
+    (target as Record<string, unknown>)[name] = original;
+  });
+}
+
+beforeAll(() => {
+  guard(net.Socket.prototype, 'connect', 'net.Socket.connect');
+  guard(net, 'connect', 'net.connect');
+  guard(net, 'createConnection', 'net.createConnection');
+  guard(tls, 'connect', 'tls.connect');
+  guard(dns, 'lookup', 'dns.lookup');
+  guard(dns, 'resolve', 'dns.resolve');
+  guard(dns.promises, 'lookup', 'dns.promises.lookup');
+  guard(http, 'request', 'http.request');
+  guard(http, 'get', 'http.get');
+  guard(https, 'request', 'https.request');
+  guard(https, 'get', 'https.get');
+  guard(globalThis, 'fetch', 'fetch');
+});
+afterAll(() => {
+  for (const undo of restore.reverse()) undo();
+});
+
+/** Runs the command line in this process (the guards above are in place) and returns the exit code and stderr. */
+async function cli(...args: string[]): Promise<{ code: number; stderr: string }> {
+  const { main } = await import('../../src/cli/main.js'); // loaded after the guards, so module start-up is covered too
+  let stderr = '';
+  const spy = vi.spyOn(process.stderr, 'write').mockImplementation((chunk: string | Uint8Array) => {
+    stderr += String(chunk);
+    return true;
+  });
+  try {
+    const code = await main(['node', 'lexichron', ...args]);
+    return { code, stderr };
+  } finally {
+    spy.mockRestore();
+    process.exitCode = undefined;
+  }
+}
+
+const MBOX = [
+  'From ann@example.org Mon Mar  3 09:00:00 2025',
+  'From: Ann <ann@example.org>',
+  'Date: Mon, 3 Mar 2025 09:00:00 +0100',
+  '',
+  'So happy today! Call me on +44 20 7946 0958 or see https://example.org/x.',
+  '',
+  'From bob@example.org Mon Mar  3 09:05:00 2025',
+  'From: Bob <bob@example.org>',
+  'Date: Mon, 3 Mar 2025 09:05:00 +0100',
+  '',
+  'Bob wrote this and it must not be kept.',
+  '',
+  'From ann@example.org Mon Mar  3 10:00:00 2025',
+  'From: Ann <ann@example.org>',
+  '',
+  'No date here, Bob.',
+  '',
+].join('\n');
+
+describe('lexichron import', () => {
+  it('has network guards that do catch a connection attempt (so their silence below means something)', async () => {
+    expect(() => net.connect(80, '192.0.2.1')).toThrow(/network use is not allowed/);
+    expect(() => dns.lookup('example.org', () => undefined)).toThrow(/network use is not allowed/);
+    await expect(async () => fetch('http://192.0.2.1/')).rejects.toThrow(/network use is not allowed/);
+    expect(attempts).toEqual(['net.connect', 'dns.lookup', 'fetch']);
+    attempts.length = 0;
+  });
+
+  it('imports an mbox: own messages kept and redacted, third-party dropped, rejects and counts written, no network used', async () => {
+    const input = tmp.write('inbox.mbox', MBOX);
+    const names = tmp.write('names.txt', '# people\nBob\n');
+    const out = tmp.path('mail/entries.jsonl');
+    const { code, stderr } = await cli('import', 'mbox', input, '--person', 'P01', '--address', 'ann@example.org', '--time-zone', 'Europe/Brussels', '--redact-names', names, '--out', out);
+    expect(code).toBe(0);
+    expect(readFileSync(out, 'utf8')).toBe('{"id":"inbox.mbox:1","person":"P01","time":"2025-03-03T09:00:00+01:00","zone":"Europe/Brussels","text":"So happy today! Call me on [phone] or see [url]."}\n');
+    expect(readFileSync(`${out}.rejects.csv`, 'utf8')).toBe('file,line,code,message\ninbox.mbox,13,mail_no_date,"the message has no Date header, so its time is unknown"\n');
+    const meta = JSON.parse(readFileSync(`${out}.meta.json`, 'utf8'));
+    expect(meta.reconciliation).toEqual({ read: 3, kept: 1, rejected: { mail_no_date: 1 }, dropped: { third_party: 1 }, notes: {} });
+    expect(stderr).toContain('read 3: kept 1');
+    expect(stderr).toContain('dropped 1: third_party 1');
+    for (const file of [out, `${out}.rejects.csv`, `${out}.meta.json`]) expect(readFileSync(file, 'utf8')).not.toMatch(/Bob wrote|must not be kept/);
+    expect(attempts).toEqual([]);
+  });
+
+  it('pseudonymizes the person id with the key from LEXICHRON_PSEUDONYM_KEY and never writes the key', async () => {
+    const input = tmp.write('chat.txt', '21/03/2025, 08:00 - Ann: Good morning\n21/03/2025, 08:01 - Ann: again\n21/03/2025, 08:30 - Bob: hi Ann\n');
+    const out = tmp.path('chat.jsonl');
+    const key = 'correct horse battery staple 42';
+    vi.stubEnv('LEXICHRON_PSEUDONYM_KEY', key);
+    try {
+      const { code, stderr } = await cli('import', 'chat-lines', input, '--person', 'P01', '--sender', 'Ann', '--time-zone', 'Europe/Brussels', '--merge-burst', '5', '--out', out);
+      expect(code).toBe(0);
+      expect(stderr).toContain('date order: dmy');
+    } finally {
+      vi.unstubAllEnvs();
+    }
+    const { pseudonymizePerson } = await import('../../src/privacy/pseudonymize-person.js');
+    const lines = readFileSync(out, 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+    expect(lines).toEqual([{ id: 'chat.txt:1', person: pseudonymizePerson('P01', new TextEncoder().encode(key)), time: '2025-03-21T08:00:00+01:00', zone: 'Europe/Brussels', text: 'Good morning\nagain' }]);
+    for (const file of [out, `${out}.rejects.csv`, `${out}.meta.json`]) {
+      const text = readFileSync(file, 'utf8');
+      expect(text).not.toContain(key);
+      expect(text).not.toContain('P01');
+    }
+    expect(attempts).toEqual([]);
+  });
+
+  it('exits with code 2 and a message naming the fix when the chat file cannot settle day and month, leaving no output', async () => {
+    const input = tmp.write('ambiguous.txt', '03/04/2025, 08:00 - Ann: hi\n');
+    const out = tmp.path('ambiguous.jsonl');
+    const { code, stderr } = await cli('import', 'chat-lines', input, '--person', 'P01', '--sender', 'Ann', '--time-zone', 'Europe/Brussels', '--out', out);
+    expect(code).toBe(2);
+    expect(stderr).toMatch(/pass --date-order dmy/);
+    expect(existsSync(out)).toBe(false);
+  });
+
+  it('exits with code 2 when mbox is imported without --address', async () => {
+    const { code, stderr } = await cli('import', 'mbox', tmp.write('x.mbox', MBOX), '--person', 'P01', '--time-zone', 'UTC', '--out', tmp.path('x.jsonl'));
+    expect(code).toBe(2);
+    expect(stderr).toMatch(/--address ADDR/);
+  });
+
+  it('imports a diary with --heading and --date-format and rejects a heading with an impossible date', async () => {
+    const input = tmp.write('diary.md', '## 3 March 2025\nA good day.\n## 30 February 2025\nNever happened.\n');
+    const out = tmp.path('diary.jsonl');
+    const { code } = await cli('import', 'diary', input, '--person', 'P02', '--time-zone', 'America/New_York', '--heading', '^## (.+)$', '--date-format', 'd MMMM yyyy', '--out', out);
+    expect(code).toBe(0);
+    expect(readFileSync(out, 'utf8')).toBe('{"id":"diary.md:1","person":"P02","time":"2025-03-03T12:00:00-05:00","zone":"America/New_York","text":"A good day."}\n');
+    expect(readFileSync(`${out}.rejects.csv`, 'utf8')).toMatch(/diary\.md,3,diary_bad_date,/);
+  });
+});
