@@ -175,7 +175,11 @@ export async function runValidate(options: RunValidateOptions): Promise<RunValid
     scoreColumns = options.scoreColumns;
   }
   if (scoreColumns.length === 0) throw inputError('There are no score columns to validate.');
-  if (ratings.ratings.length === 0) throw inputError(`\`${basename(options.ratings)}\` holds no usable self-reports; see the diagnostics for each row's reason.`);
+  if (ratings.ratings.length === 0) {
+    const first = ratings.diagnostics[0];
+    const why = first ? ` The first problem, on line ${first.source?.line ?? '?'}: ${first.message} (${ratings.diagnostics.length} rows left out).` : '';
+    throw inputError(`\`${basename(options.ratings)}\` holds no usable self-reports.${why}`);
+  }
   const entries = events?.entries;
   const result = validateSeries(
     {
