@@ -1,5 +1,5 @@
 import type { StatePoints } from './delay-embedding.js';
-import { nearestNeighbours } from './nearest-neighbours.js';
+import { nearestNeighboursInto } from './nearest-neighbours.js';
 import { simplexEstimate } from './simplex-estimate.js';
 
 /** Options of {@link simplexProjection}. */
@@ -30,10 +30,12 @@ export function simplexProjection(
   const radius = options.exclusionRadius ?? 0;
   const out: (number | undefined)[] = [];
   const values = new Float64Array(k);
+  const indices = new Int32Array(k);
+  const distances = new Float64Array(k);
   for (let p = 0; p < prediction.length; p++) {
-    const { indices, distances } = nearestNeighbours(points, prediction[p] as number, library, k, radius);
-    indices.forEach((j, m) => (values[m] = target[j] as number));
-    out.push(simplexEstimate(distances, values, indices.length));
+    const found = nearestNeighboursInto(points, prediction[p] as number, library, k, radius, indices, distances);
+    for (let m = 0; m < found; m++) values[m] = target[indices[m] as number] as number;
+    out.push(simplexEstimate(distances, values, found));
   }
   return out;
 }

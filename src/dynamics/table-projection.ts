@@ -1,6 +1,6 @@
 import type { StatePoints } from './delay-embedding.js';
 import type { NeighbourTable } from './neighbour-table.js';
-import { nearestNeighbours } from './nearest-neighbours.js';
+import { nearestNeighboursInto } from './nearest-neighbours.js';
 import { pointDistance } from './point-distance.js';
 import { simplexEstimate } from './simplex-estimate.js';
 
@@ -13,7 +13,8 @@ export interface Library {
 /**
  * Simplex projection for one library using a precomputed {@link NeighbourTable}: the nearest
  * library members of each prediction point are read off its sorted row, skipping points outside
- * the library, instead of searching. Gives exactly the estimates of {@link simplexProjection}
+ * the library, instead of searching; a small library (|L|²·(E + 2) < k·n, a measured crossover) is searched directly, which is
+ * cheaper than scanning deep into the rows. Gives exactly the estimates of {@link simplexProjection}
  * with the same exclusion radius (a test checks this against brute force). Writes estimates into
  * `out[p]` for `prediction[p]` (NaN when no library point is available) and returns `out`.
  */
@@ -30,8 +31,19 @@ export function tableProjection(
   const mask = library.mask;
   const distances = new Float64Array(neighbours);
   const values = new Float64Array(neighbours);
+  const indices = new Int32Array(neighbours);
+  const size = library.members.length;
+  // A small library is searched directly (|library| distances per point) rather than by scanning
+  // the sorted rows (about k·n/|library| entries per point); both give the same neighbours.
+  const direct = size * size * (points.E + 2) < neighbours * table.count;
   for (let p = 0; p < prediction.length; p++) {
     const i = prediction[p] as number;
+    if (direct) {
+      const found = nearestNeighboursInto(points, i, library.members, neighbours, table.exclusionRadius, indices, distances);
+      for (let m = 0; m < found; m++) values[m] = target[indices[m] as number] as number;
+      out[p] = simplexEstimate(distances, values, found) ?? Number.NaN;
+      continue;
+    }
     const start = i * width;
     const end = start + (filled[i] as number);
     let found = 0;
@@ -43,12 +55,9 @@ export function tableProjection(
       found++;
     }
     if (found < neighbours && !complete) {
-      const nn = nearestNeighbours(points, i, library.members, neighbours, table.exclusionRadius);
-      found = nn.indices.length;
-      nn.indices.forEach((j, m) => {
-        distances[m] = nn.distances[m] as number;
-        values[m] = target[j] as number;
-      });
+      // The row was cut to save memory and ran out: search this point directly.
+      found = nearestNeighboursInto(points, i, library.members, neighbours, table.exclusionRadius, indices, distances);
+      for (let m = 0; m < found; m++) values[m] = target[indices[m] as number] as number;
     }
     out[p] = simplexEstimate(distances, values, found) ?? Number.NaN;
   }
