@@ -70,3 +70,19 @@ export { createRedactor, REDACTION_TOKENS, type RedactOptions } from './privacy/
 export { keptText, type TextPolicy } from './privacy/kept-text.js';
 export { createPersonRowFilter, splitCsvRecord, type PersonRowFilter } from './privacy/create-person-row-filter.js';
 export { removePersonFromJson, type JsonRemoval } from './privacy/remove-person-from-json.js';
+
+// dynamics
+export { analyseDynamics, type DynamicsOptions, type DynamicsResult, type SummaryRow, type VarRow, type CcmRow } from './dynamics/analyse-dynamics.js';
+export { dynamicsTables, type DynamicsTable } from './dynamics/dynamics-tables.js';
+export { parseSeriesCsv, type ParsedSeriesCsv } from './dynamics/parse-series-csv.js';
+export { personVariableSummary, DEFAULT_MIN_LAG_PAIRS, type PersonVariableSummary } from './dynamics/person-variable-summary.js';
+export { mssd } from './dynamics/mssd.js';
+export { lag1AutocorrelationAcf } from './dynamics/lag1-autocorrelation-acf.js';
+export { lag1AutocorrelationPearson } from './dynamics/lag1-autocorrelation-pearson.js';
+export { var1, type Var1Fit, type Var1Coefficient } from './dynamics/var1.js';
+export { pooledVar1, type PooledVar1Fit } from './dynamics/pooled-var1.js';
+export { convergentCrossMapping, type CcmOptions, type CcmDirection } from './dynamics/convergent-cross-mapping.js';
+export { simplexForecast, type SimplexForecastOptions } from './dynamics/simplex-forecast.js';
+export { chooseEmbeddingDimension } from './dynamics/choose-embedding-dimension.js';
+export { delayEmbedding } from './dynamics/delay-embedding.js';
+export type { BinnedSeries, PersonSeriesInput } from './dynamics/types.js';
