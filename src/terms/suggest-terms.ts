@@ -1,3 +1,4 @@
+import { ENGLISH_FUNCTION_WORDS } from './function-words.js';
 import { inflectedForms, type InflectedForm } from './inflected-forms.js';
 import { positivePmi } from './positive-pmi.js';
 import type { SeedCooccurrence } from './seed-cooccurrence.js';
@@ -40,6 +41,8 @@ export interface SuggestTermsOptions {
   minPmi?: number;
   /** At most this many corpus-only suggestions, best PMI first (default 50). */
   maxCorpus?: number;
+  /** Corpus words never suggested (default: ENGLISH_FUNCTION_WORDS; pass an empty set for other languages' lists). */
+  stopWords?: ReadonlySet<string>;
 }
 
 const RELATION_ORDER: readonly WordNetRelation[] = ['synonym', 'similar', 'derived', 'pertainym', 'see-also'];
@@ -61,7 +64,7 @@ function bestSense(s: TermSuggestion): number {
  * Suggests terms for a construct from seed words, each with its reasons:
  * WordNet 3.1 synonyms and related lemmas of each seed, inflected forms of the seeds for the
  * parts of speech WordNet gives them (en-inflectors), and words that co-occur with the seeds in the
- * researcher's own corpus with positive PMI ≥ `minPmi` in at least `minCount` entries.
+ * researcher's own corpus with positive PMI ≥ `minPmi` in at least `minCount` entries (function words left out).
  *
  * Ranking (deterministic): more kinds of evidence first; then higher PMI with the seeds (terms
  * that never co-occur last); then the lowest WordNet sense number (inflections of a seed count as
@@ -97,9 +100,10 @@ export function suggestTerms(options: SuggestTermsOptions): TermSuggestion[] {
   if (corpus) {
     const minCount = options.minCount ?? 3;
     const minPmi = options.minPmi ?? 1;
+    const stop = options.stopWords ?? ENGLISH_FUNCTION_WORDS;
     const found: Array<{ word: string; pmi: number; together: number; entries: number }> = [];
     for (const [word, c] of corpus.words) {
-      if (seedSet.has(word) || c.withSeed < minCount || !/\p{L}/u.test(word)) continue;
+      if (seedSet.has(word) || c.withSeed < minCount || !/\p{L}/u.test(word) || stop.has(word)) continue;
       const pmi = positivePmi(c.withSeed, c.entries, corpus.seedEntries, corpus.entries);
       if (pmi !== undefined && pmi > 0 && pmi >= minPmi) found.push({ word, pmi, together: c.withSeed, entries: c.entries });
     }

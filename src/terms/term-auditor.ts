@@ -249,7 +249,7 @@ export function termAuditor(lexicon: CompiledLexicon, options: TermAuditOptions)
       const drop = dropTopTerms(contributionRows, cat.aggregation, withHits, opts.dropTop).map((d) => ({ ...d, droppedTerms: d.dropped.map((t) => (states[t] as TermState).term) }));
       categories.push({ category: cat.name, aggregation: cat.aggregation, terms: idxs.length, termsWithHits: withHits.length, hits: catHits, reliability, dropTopK: drop });
       const flagged = terms.filter((t) => t.category === cat.name && t.flags.includes('over_share'));
-      if (flagged.length > 0) warnings.push(`category \`${cat.name}\`: ${flagged.map((t) => `\`${t.term}\` (${Math.round((t.share ?? 0) * 100)}%)`).join(', ')} hold more than ${Math.round(opts.maxShare * 100)}% of its hits each; read their keyword-in-context samples before trusting the scores.`);
+      if (flagged.length > 0) warnings.push(`category \`${cat.name}\`: ${flagged.map((t) => `\`${t.term}\` (${Math.round((t.share ?? 0) * 100)}%)`).join(', ')} ${flagged.length === 1 ? 'holds' : 'each hold'} more than ${Math.round(opts.maxShare * 100)}% of its hits; read their keyword-in-context samples before trusting the scores.`);
     });
     if (rows.length > 0 && terms.every((t) => t.hits === 0)) {
       warnings.unshift(`none of the ${terms.length} accepted terms matched any of the ${rows.length} entries; check that the corpus text column is the right one and that the lexicon's \`## language\` (${lexicon.language}) is the corpus language.`);

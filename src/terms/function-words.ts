@@ -1,0 +1,15 @@
+/**
+ * English function words (articles, pronouns, auxiliaries, prepositions, conjunctions, common
+ * adverbs) left out of corpus co-occurrence suggestions: they co-occur with everything and say
+ * nothing about a construct. A short list of our own (common practice; no single source).
+ */
+export const ENGLISH_FUNCTION_WORDS: ReadonlySet<string> = new Set(
+  (
+    'a about above after again against all also am an and any are as at be because been before being below between both but by ' +
+    'can could did do does doing down during each few for from further had has have having he her here hers herself him himself his how ' +
+    'i if in into is it its itself just me more most my myself no nor not now of off on once only or other our ours ourselves out over own ' +
+    'same she should so some such than that the their theirs them themselves then there these they this those through to too under until up ' +
+    'very was we were what when where which while who whom why will with would you your yours yourself yourselves ' +
+    "im ive id ill youre its dont didnt cant wont isnt wasnt 's 're 've 'd 'll 'm n't s t"
+  ).split(' '),
+);
