@@ -10,7 +10,7 @@ export interface IccForm {
   df1: number;
   df2: number;
   p: number;
-  /** Confidence interval (Shrout & Fleiss 1979, eqs. for cases 1 and 3); absent for case 2. */
+  /** Confidence interval (Shrout & Fleiss 1979, p. 425: F-based for cases 1 and 3, Satterthwaite for case 2; k forms by Spearman–Brown for case 2). */
   ciLow: number | undefined;
   ciHigh: number | undefined;
 }
@@ -53,7 +53,8 @@ export interface IntraclassCorrelations {
  * - ICC(3,1) = (BMS − EMS) / (BMS + (k−1)EMS);       ICC(3,k) = (BMS − EMS) / BMS
  *
  * F tests as in R psych::ICC (F = BMS/WMS for case 1, BMS/EMS for cases 2 and 3); intervals for
- * cases 1 and 3 from the F distribution (Shrout & Fleiss 1979, p. 425), none for case 2.
+ * cases 1 and 3 from the F distribution, for case 2 by Satterthwaite's approximation (Shrout &
+ * Fleiss 1979, p. 425; as psych::ICC).
  */
 export function intraclassCorrelation(rows: Iterable<readonly (number | undefined | null)[]>, options: { level?: number } = {}): StatResult<IntraclassCorrelations> {
   const level = options.level ?? 0.95;
@@ -103,16 +104,33 @@ export function intraclassCorrelation(rows: Iterable<readonly (number | undefine
     }
     return { value, f, df1, df2, p, ciLow, ciHigh };
   };
+  // Interval of ICC(2,1): Satterthwaite approximation of Shrout & Fleiss (1979, p. 425), as psych::ICC.
+  const icc2Value = (bms - ems) / (bms + (k - 1) * ems + (k * (jms - ems)) / n);
+  const icc2Interval = (): [number, number] | undefined => {
+    const fj = jms / ems;
+    const r = icc2Value;
+    const a = n * (1 + (k - 1) * r) - k * r;
+    const vn = (k - 1) * (n - 1) * (k * r * fj + a) ** 2;
+    const vd = (n - 1) * k * k * r * r * fj * fj + a * a;
+    const v = vn / vd;
+    if (!(v > 0) || !Number.isFinite(v)) return undefined;
+    const fu = fQuantile(1 - alpha / 2, n - 1, v);
+    const fl = fQuantile(1 - alpha / 2, v, n - 1);
+    const c = k * jms + (k * n - k - n) * ems;
+    return [(n * (bms - fu * ems)) / (fu * c + n * bms), (n * (fl * bms - ems)) / (c + n * fl * bms)];
+  };
+  const interval2 = Number.isFinite(jms / ems) ? icc2Interval() : undefined;
+  const stepUp = (x: number): number => (k * x) / (1 + (k - 1) * x);
   const f1 = bms / wms;
   const f3 = bms / ems;
   const df1 = n - 1;
   return {
     ok: true,
     icc1: form((bms - wms) / (bms + (k - 1) * wms), f1, df1, n * (k - 1), (fl, fu) => [(fl - 1) / (fl + k - 1), (fu - 1) / (fu + k - 1)]),
-    icc2: form((bms - ems) / (bms + (k - 1) * ems + (k * (jms - ems)) / n), f3, df1, (n - 1) * (k - 1), undefined),
+    icc2: form(icc2Value, f3, df1, (n - 1) * (k - 1), interval2 ? () => interval2 : undefined),
     icc3: form((bms - ems) / (bms + (k - 1) * ems), f3, df1, (n - 1) * (k - 1), (fl, fu) => [(fl - 1) / (fl + k - 1), (fu - 1) / (fu + k - 1)]),
     icc1k: form((bms - wms) / bms, f1, df1, n * (k - 1), (fl, fu) => [1 - 1 / fl, 1 - 1 / fu]),
-    icc2k: form((bms - ems) / (bms + (jms - ems) / n), f3, df1, (n - 1) * (k - 1), undefined),
+    icc2k: form((bms - ems) / (bms + (jms - ems) / n), f3, df1, (n - 1) * (k - 1), interval2 ? () => [stepUp(interval2[0]), stepUp(interval2[1])] : undefined),
     icc3k: form((bms - ems) / bms, f3, df1, (n - 1) * (k - 1), (fl, fu) => [1 - 1 / fl, 1 - 1 / fu]),
     bms,
     wms,

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { intraclassCorrelation } from '../../src/stats/intraclass-correlation.js';
 import { oneWayIntraclassCorrelation } from '../../src/stats/one-way-intraclass-correlation.js';
+import { readReferenceCsv } from './reference-csv.js';
 import { readSharedReferenceCsv } from './shared/read-shared-reference.js';
 
 // Shrout, P.E. & Fleiss, J.L. (1979). Intraclass correlations: uses in assessing rater reliability.
@@ -45,5 +46,20 @@ describe.skipIf(!data)('Shrout & Fleiss (1979) Table 2, 6 targets rated by 4 jud
     expect(oneWay.icc1).toBeCloseTo(0.1657418, 6);
     expect(oneWay.icc1k).toBeCloseTo(0.4427971, 6);
     expect(oneWay.n0).toBe(4);
+  });
+  // F tests and 95% bounds of R psych::ICC 2.2.9, written by test/reference/psych/make-expected.R
+  // (expected-icc.csv) from the same shared table. psych::ICC takes its mean squares from an lme4 fit
+  // (lmer = TRUE), so it agrees with the exact ANOVA values computed here to about 1e-6.
+  const forms = { ICC1: 'icc1', ICC2: 'icc2', ICC3: 'icc3', ICC1k: 'icc1k', ICC2k: 'icc2k', ICC3k: 'icc3k' } as const;
+  const close = (actual: number | undefined, expected: string, tolerance: number) => expect(Math.abs((actual as number) - Number(expected))).toBeLessThan(tolerance);
+  it.each(readReferenceCsv('psych/expected-icc.csv').map((e) => [e.type as keyof typeof forms, e] as const))('gives the value, F test and 95 percent bounds of psych::ICC for %s', (type, e) => {
+    if (!result.ok) throw new Error(result.reason);
+    const f = result[forms[type]];
+    close(f.value, e.ICC as string, 2e-6);
+    close(f.f / Number(e.F), "1", 1e-5); // relative
+    expect([f.df1, f.df2]).toEqual([Number(e.df1), Number(e.df2)]);
+    close(f.p, e.p as string, 2e-6);
+    close(f.ciLow, e.lower as string, 1e-5);
+    close(f.ciHigh, e.upper as string, 1e-5);
   });
 });

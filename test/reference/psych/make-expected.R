@@ -42,3 +42,13 @@ al <- psych::alpha(attitude, check.keys = FALSE, warnings = FALSE)
 out <- data.frame(quantity = c("raw_alpha", "std.alpha"), value = sprintf("%.12g", c(al$total$raw_alpha, al$total$std.alpha)))
 write.csv(out, "expected-alpha.csv", row.names = FALSE, quote = FALSE)
 writeLines(c(paste("R", R.version$major, R.version$minor), paste("psych", packageVersion("psych"))), "versions.txt")
+
+# 3. psych::ICC on Shrout & Fleiss (1979) Table 2, read from the shared reference folder
+#    (../shared/reference/shrout_fleiss_1979.csv beside the repository; not copied here):
+#    writes expected-icc.csv (ICC, F, df1, df2, p, lower and upper 95% bounds of all six forms).
+sf <- read.csv(file.path("..", "..", "..", "..", "shared", "reference", "shrout_fleiss_1979.csv"))
+icc <- psych::ICC(sf[, -1])$results
+out <- data.frame(type = icc$type, ICC = icc$ICC, F = icc$F, df1 = icc$df1, df2 = icc$df2, p = icc$p,
+                  lower = icc[["lower bound"]], upper = icc[["upper bound"]])
+for (col in names(out)[-1]) out[[col]] <- sprintf("%.12g", out[[col]])
+write.csv(out, "expected-icc.csv", row.names = FALSE, quote = FALSE)
