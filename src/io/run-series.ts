@@ -166,7 +166,9 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
     try {
       const longHeader = seriesHeader(layout);
       await long.write(csvRow(longHeader));
-      const perPerson: SeriesRow[][] = [];
+      // Two passes over the accumulators, one person at a time, so that no more than one
+      // person's rows are held: the long file first (which also gives the widest t), then the
+      // wide file from the same pure, deterministic buildPersonSeries.
       let maxT = 0;
       for (const person of persons) {
         const rows = buildPersonSeries(state, person);
@@ -177,13 +179,12 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
           else missing[row.missing] = (missing[row.missing] ?? 0) + 1;
           await long.write(seriesRow(row, layout));
         }
-        perPerson.push(rows.map((row) => ({ ...row, matched: [], personMean: [], within: [], lag1: [], withinLag1: [], filled: [], detrended: [] })));
-        if (perPerson.length > 0 && maxT * persons.length > 5_000_000) throw usageError(`The wide file would hold ${maxT * persons.length} cells; choose a longer --bin or use the long file.`);
       }
       const wideHeader = ['person', ...layout.scores.flatMap((s) => Array.from({ length: maxT }, (_, t) => `${s}@${t}`))];
       await wide.write(csvRow(wideHeader));
-      for (const rows of perPerson) {
-        const fields = [rows[0]?.person ?? ''];
+      for (const person of persons) {
+        const rows: SeriesRow[] = buildPersonSeries(state, person);
+        const fields = [person];
         layout.scores.forEach((_, c) => {
           for (let t = 0; t < maxT; t++) fields.push(formatNumber(rows[t]?.values[c]));
         });

@@ -1,89 +1,113 @@
 /** How the entries of a bin are combined into one value per score column. */
 export type BinReducer = 'weighted' | 'mean' | 'sum';
 
+/** Fields per score column in a bin's slot. */
+const WSUM = 0; // Σ words·x over entries with a value
+const WTOTAL = 1; // Σ words over entries with a value
+const SUM = 2; // Σ x (Neumaier-compensated with COMP)
+const COMP = 3;
+const COUNT = 4; // entries with a value
+const MATCHED = 5; // matched terms
+const PER_COLUMN = 6;
+/** Leading fields of a slot: entries, words. */
+const HEAD = 2;
+
 /**
- * One small accumulator per (person, unit bin): memory grows with bins, never with entries.
- * Unit bins are sub-daily bins or whole local days; weekly and multi-day bins are merged later.
+ * The accumulators of every (person, unit bin), pooled in one growing Float64Array: a bin is a
+ * slot of `2 + 6·columns` numbers (entries, words, and per score column Σ words·x, Σ words,
+ * Σ x with its Neumaier compensation, count of values, matched terms). Memory grows with the
+ * number of bins that hold entries (about `16·(2 + 6·columns)` bytes each, with the key map),
+ * never with the number of entries.
  */
-export interface BinAccumulator {
-  entries: number;
-  words: number;
-  /** Zone of the last entry added (for the bin's local times). */
-  zone: string;
-  /** Per score column: Σ words·x over entries with a value. */
-  weightedSum: Float64Array;
-  /** Per score column: Σ words over entries with a value. */
-  weightTotal: Float64Array;
-  /** Per score column: Σ x over entries with a value (Neumaier-compensated via comp). */
-  sum: Float64Array;
-  comp: Float64Array;
-  /** Per score column: entries with a value. */
-  count: Int32Array;
-  /** Per score column: matched terms. */
-  matched: Float64Array;
+export interface BinStore {
+  columns: number;
+  stride: number;
+  data: Float64Array;
+  /** Slots in use. */
+  size: number;
 }
 
-/** A fresh accumulator for `columns` score columns. */
-export function createAccumulator(columns: number, zone: string): BinAccumulator {
-  return {
-    entries: 0,
-    words: 0,
-    zone,
-    weightedSum: new Float64Array(columns),
-    weightTotal: new Float64Array(columns),
-    sum: new Float64Array(columns),
-    comp: new Float64Array(columns),
-    count: new Int32Array(columns),
-    matched: new Float64Array(columns),
-  };
+/** A fresh, empty store for `columns` score columns. */
+export function createBinStore(columns: number, capacity = 1024): BinStore {
+  const stride = HEAD + PER_COLUMN * columns;
+  return { columns, stride, data: new Float64Array(stride * capacity), size: 0 };
 }
 
-/** Adds one entry: its word count, score values (undefined = no value) and matched terms. */
-export function addToAccumulator(acc: BinAccumulator, words: number, values: ReadonlyArray<number | undefined>, matched: ReadonlyArray<number>, zone: string): void {
-  acc.entries++;
-  acc.words += words;
-  acc.zone = zone;
-  for (let c = 0; c < values.length; c++) {
+/** Reserves a new zeroed slot and returns its number (the store doubles when full). */
+export function newBinSlot(store: BinStore): number {
+  if ((store.size + 1) * store.stride > store.data.length) {
+    const grown = new Float64Array(Math.max(store.data.length * 2, store.stride * 1024));
+    grown.set(store.data);
+    store.data = grown;
+  }
+  return store.size++;
+}
+
+/** Adds one entry to slot `slot`: its word count, score values (undefined = no value) and matched terms. */
+export function addToBin(store: BinStore, slot: number, words: number, values: ReadonlyArray<number | undefined>, matched: ReadonlyArray<number>): void {
+  const d = store.data;
+  const base = slot * store.stride;
+  d[base] = (d[base] as number) + 1;
+  d[base + 1] = (d[base + 1] as number) + words;
+  for (let c = 0; c < store.columns; c++) {
+    const o = base + HEAD + c * PER_COLUMN;
+    d[o + MATCHED] = (d[o + MATCHED] as number) + (matched[c] ?? 0);
     const x = values[c];
-    acc.matched[c] = (acc.matched[c] as number) + (matched[c] ?? 0);
     if (x === undefined || !Number.isFinite(x)) continue;
-    acc.weightedSum[c] = (acc.weightedSum[c] as number) + words * x;
-    acc.weightTotal[c] = (acc.weightTotal[c] as number) + words;
+    d[o + WSUM] = (d[o + WSUM] as number) + words * x;
+    d[o + WTOTAL] = (d[o + WTOTAL] as number) + words;
     // Neumaier compensated summation for the plain sum.
-    const s = acc.sum[c] as number;
+    const s = d[o + SUM] as number;
     const t = s + x;
-    acc.comp[c] = (acc.comp[c] as number) + (Math.abs(s) >= Math.abs(x) ? s - t + x : x - t + s);
-    acc.sum[c] = t;
-    acc.count[c] = (acc.count[c] as number) + 1;
+    d[o + COMP] = (d[o + COMP] as number) + (Math.abs(s) >= Math.abs(x) ? s - t + x : x - t + s);
+    d[o + SUM] = t;
+    d[o + COUNT] = (d[o + COUNT] as number) + 1;
   }
 }
 
-/** Merges `b` into `a` (for weekly and multi-day bins). */
-export function mergeAccumulators(a: BinAccumulator, b: BinAccumulator): void {
-  a.entries += b.entries;
-  a.words += b.words;
-  a.zone = b.zone;
-  for (let c = 0; c < a.sum.length; c++) {
-    a.weightedSum[c] = (a.weightedSum[c] as number) + (b.weightedSum[c] as number);
-    a.weightTotal[c] = (a.weightTotal[c] as number) + (b.weightTotal[c] as number);
-    a.sum[c] = (a.sum[c] as number) + (b.sum[c] as number);
-    a.comp[c] = (a.comp[c] as number) + (b.comp[c] as number);
-    a.count[c] = (a.count[c] as number) + (b.count[c] as number);
-    a.matched[c] = (a.matched[c] as number) + (b.matched[c] as number);
-  }
+/** Entries in the given slots (one slot for a unit bin, several for weekly and multi-day bins). */
+export function binEntries(store: BinStore, slots: readonly number[]): number {
+  let n = 0;
+  for (const s of slots) n += store.data[s * store.stride] as number;
+  return n;
+}
+
+/** Words in the given slots. */
+export function binWords(store: BinStore, slots: readonly number[]): number {
+  let n = 0;
+  for (const s of slots) n += store.data[s * store.stride + 1] as number;
+  return n;
+}
+
+/** Matched terms of score column `c` in the given slots. */
+export function binMatched(store: BinStore, slots: readonly number[], c: number): number {
+  let n = 0;
+  for (const s of slots) n += store.data[s * store.stride + HEAD + c * PER_COLUMN + MATCHED] as number;
+  return n;
 }
 
 /**
- * The bin value of column `c`: `weighted` → Σ words·x / Σ words (entries without words carry no
- * weight; undefined when the total weight is 0); `mean` → Σ x / n; `sum` → Σ x. Undefined when
- * no entry had a value.
+ * The value of score column `c` over the given slots: `weighted` → Σ words·x / Σ words (entries
+ * without words carry no weight; undefined when the total weight is 0); `mean` → Σ x / n;
+ * `sum` → Σ x. Undefined when no entry had a value (an empty bin is missing, never 0).
  */
-export function reduceAccumulator(acc: BinAccumulator, c: number, reducer: BinReducer): number | undefined {
-  const n = acc.count[c] as number;
+export function reduceBin(store: BinStore, slots: readonly number[], c: number, reducer: BinReducer): number | undefined {
+  const d = store.data;
+  let n = 0;
+  let sum = 0;
+  let comp = 0;
+  let wsum = 0;
+  let wtotal = 0;
+  for (const s of slots) {
+    const o = s * store.stride + HEAD + c * PER_COLUMN;
+    n += d[o + COUNT] as number;
+    sum += d[o + SUM] as number;
+    comp += d[o + COMP] as number;
+    wsum += d[o + WSUM] as number;
+    wtotal += d[o + WTOTAL] as number;
+  }
   if (n === 0) return undefined;
-  const sum = (acc.sum[c] as number) + (acc.comp[c] as number);
-  if (reducer === 'sum') return sum;
-  if (reducer === 'mean') return sum / n;
-  const w = acc.weightTotal[c] as number;
-  return w > 0 ? (acc.weightedSum[c] as number) / w : undefined;
+  if (reducer === 'sum') return sum + comp;
+  if (reducer === 'mean') return (sum + comp) / n;
+  return wtotal > 0 ? wsum / wtotal : undefined;
 }

@@ -1,4 +1,4 @@
-import { addToAccumulator, createAccumulator, mergeAccumulators, reduceAccumulator, type BinAccumulator, type BinReducer } from './bin-accumulator.js';
+import { addToBin, binEntries, binMatched, binWords, createBinStore, newBinSlot, reduceBin, type BinReducer, type BinStore } from './bin-accumulator.js';
 import { inExcludedHours, type BinSpec } from './bin-spec.js';
 import { dateOfDayNumber, dayStartInstant, localDayOf } from './local-day.js';
 
@@ -46,12 +46,25 @@ export interface EntryPlacement {
   excluded: boolean;
 }
 
-/** Accumulators of every person: Map person → Map unit-bin key → accumulator. */
+/** The unit bins of one person: slot of each bin key in the store, and the zone of each local day. */
+export interface PersonBins {
+  /** Unit-bin key (day · 2048 + bin index within the day) → slot in the store. */
+  slots: Map<number, number>;
+  /** Local day number → zone of the last entry on that day. */
+  dayZones: Map<number, string>;
+  firstDay: number;
+  lastDay: number;
+}
+
+/** Accumulators of every person: one pooled store, and per person the slots of its unit bins. */
 export interface SeriesState {
   options: SeriesOptions;
   columns: number;
-  persons: Map<string, Map<number, BinAccumulator>>;
+  store: BinStore;
+  persons: Map<string, PersonBins>;
   excludedEntries: number;
+  /** Memo of day-start instants: zone → local day number → instant. */
+  dayStarts: Map<string, Map<number, number>>;
 }
 
 /** One row of the long series (one bin of one person). */
@@ -84,7 +97,19 @@ const KEY_SCALE = 2048;
 
 /** A new, empty series state. */
 export function createSeriesState(options: SeriesOptions, columns: number): SeriesState {
-  return { options, columns, persons: new Map(), excludedEntries: 0 };
+  return { options, columns, store: createBinStore(columns), persons: new Map(), excludedEntries: 0, dayStarts: new Map() };
+}
+
+function memoDayStart(state: SeriesState, day: number, zone: string): number {
+  let days = state.dayStarts.get(zone);
+  if (!days) state.dayStarts.set(zone, (days = new Map()));
+  let at = days.get(day);
+  if (at === undefined) {
+    at = dayStartInstant(day, zone, state.options.dayStart);
+    if (days.size > 100_000) days.clear();
+    days.set(day, at);
+  }
+  return at;
 }
 
 /**
@@ -94,7 +119,7 @@ export function createSeriesState(options: SeriesOptions, columns: number): Seri
 export function addSeriesEntry(state: SeriesState, entry: SeriesEntry): EntryPlacement {
   const { bin, dayStart, excludeHours } = state.options;
   const { day, minuteOfDay } = localDayOf(entry.instant, entry.zone, dayStart);
-  const start = dayStartInstant(day, entry.zone, dayStart);
+  const start = memoDayStart(state, day, entry.zone);
   let index = 0;
   let binStart = start;
   if (bin.minutes > 0) {
@@ -109,23 +134,31 @@ export function addSeriesEntry(state: SeriesState, entry: SeriesEntry): EntryPla
     return { day, binStart, excluded };
   }
   let bins = state.persons.get(entry.person);
-  if (!bins) state.persons.set(entry.person, (bins = new Map()));
+  if (!bins) state.persons.set(entry.person, (bins = { slots: new Map(), dayZones: new Map(), firstDay: day, lastDay: day }));
   const key = day * KEY_SCALE + index;
-  let acc = bins.get(key);
-  if (!acc) bins.set(key, (acc = createAccumulator(state.columns, entry.zone)));
-  addToAccumulator(acc, entry.words, entry.values, entry.matched, entry.zone);
+  let slot = bins.slots.get(key);
+  if (slot === undefined) bins.slots.set(key, (slot = newBinSlot(state.store)));
+  addToBin(state.store, slot, entry.words, entry.values, entry.matched);
+  bins.dayZones.set(day, entry.zone);
+  if (day < bins.firstDay) bins.firstDay = day;
+  if (day > bins.lastDay) bins.lastDay = day;
   return { day, binStart, excluded };
 }
 
-function zoneTimeline(bins: Map<number, BinAccumulator>): (day: number) => string {
-  const days = [...bins.entries()].map(([k, acc]) => [Math.floor(k / KEY_SCALE), acc.zone] as const).sort((a, b) => a[0] - b[0]);
+/** The zone in force on each local day: that of the latest day with entries on or before it (the first day's zone before that). */
+function zoneTimeline(dayZones: ReadonlyMap<number, string>): (day: number) => string {
+  const days = [...dayZones.entries()].sort((a, b) => a[0] - b[0]);
   return (day: number) => {
-    let zone = days[0]?.[1] ?? 'UTC';
-    for (const [d, z] of days) {
-      if (d > day) break;
-      zone = z;
+    let lo = 0;
+    let hi = days.length - 1;
+    if (hi < 0) return 'UTC';
+    if (day < (days[0] as [number, string])[0]) return (days[0] as [number, string])[1];
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if ((days[mid] as [number, string])[0] <= day) lo = mid;
+      else hi = mid - 1;
     }
-    return zone;
+    return (days[lo] as [number, string])[1];
   };
 }
 
@@ -135,30 +168,31 @@ interface GridBin {
   zone: string;
   day: number;
   binOfDay: number;
-  acc?: BinAccumulator;
+  /** Slots of the unit bins that make up this bin (empty when no entries). */
+  slots: number[];
   excluded: boolean;
   outside: boolean;
 }
 
 /** Lays the person's regular grid over the window and attaches accumulators. */
-function personGrid(bins: Map<number, BinAccumulator>, options: SeriesOptions, person: string, columns: number): GridBin[] {
-  const keys = [...bins.keys()];
-  const dataFirst = Math.min(...keys.map((k) => Math.floor(k / KEY_SCALE)));
-  const dataLast = Math.max(...keys.map((k) => Math.floor(k / KEY_SCALE)));
+function personGrid(state: SeriesState, bins: PersonBins, person: string): GridBin[] {
+  const { options } = state;
+  const dataFirst = bins.firstDay;
+  const dataLast = bins.lastDay;
   const own = options.windows?.get(person);
   const window = own ?? (options.span ? undefined : { from: dataFirst, to: dataLast });
   const grid = options.span ?? window ?? { from: dataFirst, to: dataLast };
-  const zoneOn = zoneTimeline(bins);
-  const { bin, dayStart } = options;
+  const zoneOn = zoneTimeline(bins.dayZones);
+  const { bin } = options;
   const out: GridBin[] = [];
   const inWindow = (day: number): boolean => (window ? day >= window.from && day <= window.to : true);
   let from = grid.from;
   if (bin.week) from = grid.from - ((grid.from + 3) % 7);
   for (let day = from; day <= grid.to; ) {
     const zone = zoneOn(day);
-    const dayStartAt = dayStartInstant(day, zone, dayStart);
+    const dayStartAt = memoDayStart(state, day, zone);
     if (bin.minutes > 0) {
-      const dayEnd = dayStartInstant(day + 1, zone, dayStart);
+      const dayEnd = memoDayStart(state, day + 1, zone);
       const size = bin.minutes * 60000;
       for (let k = 0; dayStartAt + k * size < dayEnd; k++) {
         const start = dayStartAt + k * size;
@@ -169,7 +203,7 @@ function personGrid(bins: Map<number, BinAccumulator>, options: SeriesOptions, p
           zone,
           day,
           binOfDay: k + 1,
-          acc: bins.get(day * KEY_SCALE + k),
+          slots: slotList(bins.slots.get(day * KEY_SCALE + k)),
           excluded: inExcludedHours(wallMinute, options.excludeHours),
           outside: !inWindow(day),
         });
@@ -178,18 +212,22 @@ function personGrid(bins: Map<number, BinAccumulator>, options: SeriesOptions, p
       continue;
     }
     const length = bin.week ? 7 : bin.days;
-    const end = dayStartInstant(day + length, zoneOn(day + length - 1), dayStart);
-    let acc: BinAccumulator | undefined;
+    const end = memoDayStart(state, day + length, zoneOn(day + length - 1));
+    const slots: number[] = [];
     for (let d = day; d < day + length; d++) {
-      const part = bins.get(d * KEY_SCALE);
-      if (!part) continue;
-      if (!acc) acc = createAccumulator(columns, part.zone);
-      mergeAccumulators(acc, part);
+      const part = bins.slots.get(d * KEY_SCALE);
+      if (part !== undefined) slots.push(part);
     }
-    out.push({ start: dayStartAt, end, zone, day, binOfDay: 1, acc, excluded: false, outside: !inWindow(day) && !inWindow(day + length - 1) });
+    out.push({ start: dayStartAt, end, zone, day, binOfDay: 1, slots, excluded: false, outside: !inWindow(day) && !inWindow(day + length - 1) });
     day += length;
   }
   return out;
+}
+
+const NO_SLOTS: number[] = [];
+
+function slotList(slot: number | undefined): number[] {
+  return slot === undefined ? NO_SLOTS : [slot];
 }
 
 function fillGaps(values: Array<number | undefined>, missing: readonly boolean[], method: FillMethod, maxFill: number): Array<'' | 'carry' | 'linear'> {
@@ -258,16 +296,18 @@ function trendLine(values: ReadonlyArray<number | undefined>, observed: readonly
  */
 export function buildPersonSeries(state: SeriesState, person: string): SeriesRow[] {
   const bins = state.persons.get(person);
-  if (!bins || bins.size === 0) return [];
-  const { options, columns } = state;
-  const grid = personGrid(bins, options, person, columns);
+  if (!bins || bins.slots.size === 0) return [];
+  const { options, columns, store } = state;
+  const grid = personGrid(state, bins, person);
   const firstDay = grid[0]?.day ?? 0;
   const rows: SeriesRow[] = [];
+  let dateDay = NaN;
+  let date = '';
   let prevObservedStart: number | undefined;
   for (let t = 0; t < grid.length; t++) {
     const g = grid[t] as GridBin;
-    const entries = g.acc?.entries ?? 0;
-    const words = g.acc?.words ?? 0;
+    const entries = binEntries(store, g.slots);
+    const words = binWords(store, g.slots);
     let missing: MissingReason = '';
     if (g.excluded) missing = 'excluded_hours';
     else if (g.outside) missing = 'outside_window';
@@ -276,8 +316,8 @@ export function buildPersonSeries(state: SeriesState, person: string): SeriesRow
     const values: Array<number | undefined> = [];
     const matched: number[] = [];
     for (let c = 0; c < columns; c++) {
-      values.push(missing === '' && g.acc ? reduceAccumulator(g.acc, c, options.reducers[c] ?? 'weighted') : undefined);
-      matched.push(g.acc ? (g.acc.matched[c] as number) : 0);
+      values.push(missing === '' ? reduceBin(store, g.slots, c, options.reducers[c] ?? 'weighted') : undefined);
+      matched.push(binMatched(store, g.slots, c));
     }
     rows.push({
       person,
@@ -285,7 +325,7 @@ export function buildPersonSeries(state: SeriesState, person: string): SeriesRow
       start: g.start,
       end: g.end,
       zone: g.zone,
-      localDate: dateOfDayNumber(g.day),
+      localDate: g.day === dateDay ? date : ((dateDay = g.day), (date = dateOfDayNumber(g.day))),
       day: g.day - firstDay + 1,
       binOfDay: g.binOfDay,
       hours: (g.end - g.start) / 3_600_000,
@@ -306,6 +346,7 @@ export function buildPersonSeries(state: SeriesState, person: string): SeriesRow
     if (missing === '') prevObservedStart = g.start;
   }
   const observed = rows.map((r) => r.missing === '');
+  const missingMask = observed.map((o) => !o);
   for (let c = 0; c < columns; c++) {
     let n = 0;
     let mean = 0;
@@ -319,7 +360,7 @@ export function buildPersonSeries(state: SeriesState, person: string): SeriesRow
     const raw = rows.map((r) => r.values[c]);
     const trend = options.detrend ? trendLine(raw, observed) : undefined;
     const filledValues = [...raw];
-    const flags = fillGaps(filledValues, rows.map((r) => r.missing !== ''), options.fill, options.maxFill);
+    const flags = fillGaps(filledValues, missingMask, options.fill, options.maxFill);
     for (let t = 0; t < rows.length; t++) {
       const r = rows[t] as SeriesRow;
       const x = filledValues[t];
