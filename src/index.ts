@@ -86,3 +86,26 @@ export { simplexForecast, type SimplexForecastOptions } from './dynamics/simplex
 export { chooseEmbeddingDimension } from './dynamics/choose-embedding-dimension.js';
 export { delayEmbedding } from './dynamics/delay-embedding.js';
 export type { BinnedSeries, PersonSeriesInput } from './dynamics/types.js';
+
+// statistics (domain-free primitives)
+export {
+  mean, variance, moments, standardDeviation, quantile, isNumber, groupBy,
+  pearsonCorrelation, correlationFromMoments, fisherInterval,
+  repeatedMeasuresCorrelation, intraclassCorrelation, oneWayIntraclassCorrelation,
+  linearMixedModel, cronbachAlpha, spearmanBrown, spearmanBrownFactor, splitHalfReliability,
+  clusterBootstrap, random, randomInteger, shuffle, minimizeScalar, cholesky, notEstimable,
+  normalCdf, normalQuantile, studentTCdf, studentTQuantile, studentTTwoSidedP, normalTwoSidedP, fCdf, fQuantile,
+  type StatResult, type NotEstimable, type Correlation, type RepeatedMeasuresCorrelation, type IntraclassCorrelations, type IccForm,
+  type OneWayIntraclassCorrelation, type LinearMixedModelFit, type LinearMixedModelOptions, type FixedEffect, type FixedEffectInference,
+  type CronbachAlpha, type SplitHalfReliability, type BootstrapInterval, type RandomSource,
+} from './stats/index.js';
+
+// validation against self-reports
+export {
+  validateSeries, DEFAULT_VALIDATE_OPTIONS, analyzePair, pairVerdict, VERDICT_THRESHOLDS, betweenPersonCorrelation, personMeans,
+  perPersonCorrelations, wordCountReliability, binsPerPerson, alignRatingsToBins, alignRatingsToWindows,
+  parseRatingScales, ratingValues, ratingColumns, seriesBinFromRecord, seriesScoreColumns, entryScoreColumns, entryScoreFromRecord,
+  type ValidateInput, type ValidateOptions, type ValidationResult, type PairAnalysis, type Verdict, type VerdictWarning,
+  type AlignedPair, type AlignedRow, type Rating, type RatingScale, type SeriesBin, type EntryScore, type WordCountReliability, type BinsPerPerson,
+} from './validate/index.js';
+export { runValidate, readRatings, type RunValidateOptions, type RunValidateResult } from './io/run-validate.js';
