@@ -3,7 +3,7 @@ import type { BinRatings } from './person-tracks.js';
 import { parseCsvTable } from './parse-csv-table.js';
 import type { SeriesRow } from './series-row.js';
 
-const LABEL_COLUMNS = ['bin_start', 'label', 'time_local'];
+const LABEL_COLUMNS = ['bin_start', 'time', 'label', 'time_local'];
 
 /**
  * Aligned observations from the validate stage's pairs file (one row per occasion: `person`, a

@@ -10,10 +10,13 @@ import { personTracks, type BinRatings } from './person-tracks.js';
 import { readinessFromRows } from './readiness-from-rows.js';
 import { termsFromJson } from './terms-from-json.js';
 import { validationFromJson } from './validation-from-json.js';
-import { validationFromPairs } from './validation-from-pairs.js';
+import { completePoints, validationFromPairs } from './validation-from-pairs.js';
+
+/** The score drawn when the user names none and it exists (VADER's compound score, bounded −1 to 1). */
+const DEFAULT_SCORE = 'vader.compound';
 
 /** Columns of an aligned pairs file that are neither scores nor ratings. */
-const ALIGNED_FIXED = new Set(['person', 'label', 'bin_start', 'instant', 'time_utc', 'time_local', 'entries', 'words', 'missing', 'reports', 'alignment']);
+const ALIGNED_FIXED = new Set(['person', 'time', 'text_missing', 'label', 'bin_start', 'instant', 'time_utc', 'time_local', 'entries', 'words', 'missing', 'reports', 'alignment']);
 
 /** The contents of an output folder as far as they exist (io/read-report-data.ts reads them). */
 export interface ReportInputs {
@@ -40,7 +43,7 @@ export interface ReportInputs {
 
 /** Choices a user makes for the report. */
 export interface ReportOptions {
-  /** Score column drawn in the series and readiness sections (default: the first validated score, else `vader.compound`, else the first score). */
+  /** Score column drawn in the series and readiness sections (default: `vader.compound` when present among the validated scores, else the first validated score; without validation the same rule over the series' scores). */
   score?: string;
   /** Rating drawn beside it (default: the first rating validated with that score). */
   rating?: string;
@@ -69,7 +72,7 @@ export function buildReportData(inputs: ReportInputs, options: ReportOptions = {
   const parsed = inputs.seriesCsv === undefined ? absent<never>(why.series ?? 'the folder has no series-long.csv; run `lexichron series` or `lexichron run` first.') : parseSeriesLong(inputs.seriesCsv);
   // validation
   const fromJson = inputs.validationJson === undefined ? { pairs: [], reliability: [] } : validationFromJson(inputs.validationJson);
-  let pairs: ValidationPair[] = fromJson.pairs;
+  const pairs: ValidationPair[] = fromJson.pairs;
   const reliability: ReliabilityCurve[] = fromJson.reliability;
   let alignedPairs: Map<string, AlignedPair[]> | undefined;
   let binRatings: Map<string, BinRatings> | undefined;
@@ -87,11 +90,14 @@ export function buildReportData(inputs: ReportInputs, options: ReportOptions = {
       const [score, rating] = key.split('\u0000') as [string, string];
       pairs.push(validationFromPairs(score, rating, list));
     }
-  else if (alignedPairs) for (const p of pairs) if (!p.points) p.points = validationFromPairs(p.score, p.rating, alignedPairs.get(pairKey(p.score, p.rating)) ?? []).points;
-  pairs = pairs.sort((a, b) => (a.score === b.score ? (a.rating < b.rating ? -1 : 1) : a.score < b.score ? -1 : 1));
+  else if (alignedPairs) for (const p of pairs) if (!p.points) p.points = completePoints(alignedPairs.get(pairKey(p.score, p.rating)) ?? []);
   const scores = parsed.ok ? parsed.value.scores : [];
+  const preferred = (list: readonly string[]): string | undefined => (list.includes(DEFAULT_SCORE) ? DEFAULT_SCORE : list[0]);
   const score =
-    options.score ?? (options.rating ? pairs.find((p) => p.rating === options.rating)?.score : undefined) ?? pairs[0]?.score ?? (scores.includes('vader.compound') ? 'vader.compound' : scores[0]);
+    options.score ??
+    (options.rating ? pairs.find((p) => p.rating === options.rating)?.score : undefined) ??
+    preferred(pairs.map((p) => p.score)) ??
+    preferred(scores);
   const rating = options.rating ?? pairs.find((p) => p.score === score)?.rating ?? (binRatings ? [...binRatings.keys()][0] : undefined);
   const shownIndex = Math.max(0, pairs.findIndex((p) => p.score === score && p.rating === rating));
   const validation: ReportData['validation'] =

@@ -13,7 +13,7 @@ import { shownCorrelation } from './shown-correlation.js';
  */
 export function validationFromPairs(score: string, rating: string, pairs: readonly AlignedPair[]): ValidationPair {
   const a = analyzePair(pairs, { random: () => 0.5, replicates: 0 });
-  const points = pairs.filter((d) => isNumber(d.x) && isNumber(d.y)).map((d) => ({ person: d.person, x: d.x as number, y: d.y as number }));
+  const points = completePoints(pairs);
   return {
     score,
     rating,
@@ -26,4 +26,9 @@ export function validationFromPairs(score: string, rating: string, pairs: readon
     warnings: a.verdict.warnings.map((w) => w.message),
     points,
   };
+}
+
+/** The complete pairs (both values present) as plain points, in input order. */
+export function completePoints(pairs: readonly AlignedPair[]): { person: string; x: number; y: number }[] {
+  return pairs.filter((d) => isNumber(d.x) && isNumber(d.y)).map((d) => ({ person: d.person, x: d.x as number, y: d.y as number }));
 }

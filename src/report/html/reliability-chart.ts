@@ -44,7 +44,8 @@ export function reliabilityChart(curve: ReliabilityCurve): string {
   if (curve.recommendedMinWords !== undefined) {
     const rx = x(curve.recommendedMinWords);
     parts.push(`<line x1="${px(rx)}" x2="${px(rx)}" y1="${yTop}" y2="${yBottom}" stroke="${PALETTE.ink}" stroke-dasharray="2 3"/>`);
-    parts.push(svgText(rx + 4, yBottom - 8, `--min-words ${curve.recommendedMinWords}`, 'class="tick"'));
+    const nearRight = rx > x1 - 110;
+    parts.push(svgText(nearRight ? rx - 4 : rx + 4, yBottom - 8, `--min-words ${curve.recommendedMinWords}`, `class="tick" text-anchor="${nearRight ? 'end' : 'start'}"`));
   }
   parts.push(`<path class="mark" d="${linePath(pts.map((p) => ({ x: x(p.words), y: y(p.reliability) })))}" fill="none" stroke="${PALETTE.score}" stroke-width="2"/>`);
   for (const p of pts) parts.push(`<circle class="mark" cx="${px(x(p.words))}" cy="${px(y(p.reliability))}" r="3" fill="${PALETTE.score}"/>`);

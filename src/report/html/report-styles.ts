@@ -36,8 +36,10 @@ figure.small figcaption{font-size:12px;margin-bottom:2px}
 figure.small figcaption .chart-title{font-weight:500}
 figure.small svg{border:none}
 .multiples{display:grid;grid-template-columns:repeat(auto-fill,minmax(280px,1fr));gap:12px 16px}
-.multiples.wide{grid-template-columns:repeat(auto-fill,minmax(560px,1fr))}
+.multiples.wide{grid-template-columns:repeat(auto-fill,minmax(480px,1fr))}
+.multiples.wide figure{margin:0}
 .side-by-side{display:flex;flex-wrap:wrap;gap:16px}
+.side-by-side>figure{flex:0 1 442px;min-width:0}
 svg text{font-family:inherit;fill:var(--ink)}
 svg .tick{font-size:11px}
 svg .tick.small{font-size:8px}

@@ -77,11 +77,12 @@ export function validationSection(validation: Part<ValidationData>): string {
   } else parts.push(absentNote('Correlations are', 'the validation output lists no score × rating pair.'));
   if (v.reliability.length) {
     parts.push('<h3>How many words make a reliable score?</h3>');
-    for (const curve of v.reliability) {
-      parts.push(reliabilityChart(curve));
-      if (curve.recommendedMinWords !== undefined && curve.target !== undefined)
-        parts.push(`<p>For <code>${escapeHtml(curve.score)}</code>, bins need about ${curve.recommendedMinWords} words to reach a reliability of ${curve.target}; set <code>--min-words ${curve.recommendedMinWords}</code> in the series step to leave out thinner bins.</p>`);
-    }
+    parts.push(`<div class="multiples wide">${v.reliability.map(reliabilityChart).join('')}</div>`);
+    const advice = v.reliability.filter((c) => c.recommendedMinWords !== undefined && c.target !== undefined);
+    if (advice.length)
+      parts.push(
+        `<p>Words a bin needs to reach the target reliability: ${advice.map((c) => `<code>${escapeHtml(c.score)}</code> about ${c.recommendedMinWords} (target ${c.target})`).join('; ')}. Raise <code>--min-words</code> in the series step, or choose longer bins, to leave out thinner bins; a figure beyond the largest bins observed is a projection, not an observation.</p>`,
+      );
   } else parts.push(absentNote('The reliability-by-word-count curve is', 'the validation output holds no reliability estimates.'));
   return sectionFrame('validation', 3, 'Validation against self-reports', purpose, parts.join(''));
 }
