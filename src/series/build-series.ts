@@ -346,7 +346,9 @@ export function buildPersonSeries(state: SeriesState, person: string): SeriesRow
     if (missing === '') prevObservedStart = g.start;
   }
   const observed = rows.map((r) => r.missing === '');
-  const missingMask = observed.map((o) => !o);
+  // Only bins without (enough) text are gaps to fill: excluded hours and bins outside the
+  // window are not measured by design, so they are never filled and they end a fillable run.
+  const fillable = rows.map((r) => r.missing === 'no_text' || r.missing === 'too_few_words');
   for (let c = 0; c < columns; c++) {
     let n = 0;
     let mean = 0;
@@ -360,7 +362,7 @@ export function buildPersonSeries(state: SeriesState, person: string): SeriesRow
     const raw = rows.map((r) => r.values[c]);
     const trend = options.detrend ? trendLine(raw, observed) : undefined;
     const filledValues = [...raw];
-    const flags = fillGaps(filledValues, missingMask, options.fill, options.maxFill);
+    const flags = fillGaps(filledValues, fillable, options.fill, options.maxFill);
     for (let t = 0; t < rows.length; t++) {
       const r = rows[t] as SeriesRow;
       const x = filledValues[t];
