@@ -128,8 +128,13 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       const instant = Date.parse(r.time_utc ?? '');
       const zone = r.zone ?? '';
       const words = Number(r.words);
-      if (!(r.person ?? '').trim() || !Number.isFinite(instant) || !isValidZone(zone) || !Number.isInteger(words) || words < 0) {
-        await reject({ code: 'bad_score_row', message: 'the row lacks a person, a valid time_utc, an IANA zone or a whole word count; was it written by lexichron score?', source: item.source, stage: 'series' });
+      if (!isValidZone(zone)) {
+        await reject({ code: 'unknown_zone', message: `unknown time zone \`${zone}\`; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
+        continue;
+      }
+      if (!(r.person ?? '').trim() || !Number.isFinite(instant) || !Number.isInteger(words) || words < 0) {
+        const what = !(r.person ?? '').trim() ? 'no person' : !Number.isFinite(instant) ? `time_utc \`${r.time_utc ?? ''}\` is not an RFC 3339 instant` : `words \`${r.words ?? ''}\` is not a whole number ≥ 0`;
+        await reject({ code: 'bad_score_row', message: `${what}; the series stage reads rows written by lexichron score`, source: item.source, stage: 'series' });
         continue;
       }
       const values = idx.map((i) => {
