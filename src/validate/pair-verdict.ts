@@ -89,7 +89,7 @@ export function pairVerdict(input: {
     if (clear && Math.abs(within.r) < VERDICT_THRESHOLDS.weakWithin)
       warnings.push({
         code: 'weak_within',
-        message: `The within-person r of ${f2(within.r)} is weak, as published associations of dictionary scores with momentary self-reports usually are; it supports statements about averages over many occasions or persons, not reading one person's state from one text.`,
+        message: `The within-person r of ${f2(within.r)} is ${strength(within.r)}, as published associations of dictionary scores with momentary self-reports usually are; it supports statements about averages over many occasions or persons, not reading one person's state from one text.`,
       });
     if (within.df < VERDICT_THRESHOLDS.minWithinDf) warnings.push({ code: 'few_within_pairs', message: `Only ${within.df} within-person degrees of freedom; the within-person r is imprecise.` });
   } else {
