@@ -1,0 +1,26 @@
+// Term lists: suggest, audit, compare, override and convert (re-exports only).
+export { wordnetRelatedLemmas, wordnetPartsOfSpeech, wordnetKey, type WordNetRelated, type WordNetRelation, type WordNetRelatedOptions } from './wordnet-related-lemmas.js';
+export { parseWordnetIndexLine } from './parse-wordnet-index-line.js';
+export { parseWordnetDataLine } from './parse-wordnet-data-line.js';
+export { WORDNET_FILE_SUFFIX, type WordNetPos, type WordNetSource, type WordNetSynset, type WordNetIndexEntry, type WordNetPointer } from './wordnet-types.js';
+export { inflectedForms, type InflectedForm } from './inflected-forms.js';
+export { positivePmi } from './positive-pmi.js';
+export { seedCooccurrence, type SeedCooccurrence, type WordCounts } from './seed-cooccurrence.js';
+export { suggestTerms, suggestionReasonText, type TermSuggestion, type SuggestionReason, type SuggestTermsOptions } from './suggest-terms.js';
+export { ENGLISH_FUNCTION_WORDS } from './function-words.js';
+export { draftLexicon, type DraftLexiconOptions } from './draft-lexicon.js';
+export { termAuditor, type TermAudit, type TermAuditOptions, type AuditEntry, type AuditedTerm, type AuditedCategory, type KwicSample } from './term-auditor.js';
+export { termAuditFiles, TERM_AUDIT_FILES, TOP_TERMS_COLUMNS } from './term-audit-files.js';
+export { topTerms } from './top-terms.js';
+export { termReliability, type TermReliability } from './term-reliability.js';
+export { itemAlpha, type ItemAlpha } from './item-alpha.js';
+export { dropTopTerms, categoryScore, type DropTopTerms, type ContributionRow, type TermContribution } from './drop-top-terms.js';
+export { hitContributions } from './hit-contributions.js';
+export { kwicSnippet, tokenOffsets, type Snippet } from './kwic-snippet.js';
+export { reservoir, reservoirAdd, type Reservoir } from './reservoir-sample.js';
+export { diffLexicons, type LexiconDiff, type TermChange } from './diff-lexicons.js';
+export { parseLexiconOverrides, OVERRIDES_SIGNATURE, type LexiconOverrides, type OverrideChange } from './lexicon-overrides.js';
+export { applyLexiconOverrides } from './apply-lexicon-overrides.js';
+export { normsToLexicon, type NormsToLexiconOptions, type NormsRating, type NormsRecord } from './norms-to-lexicon.js';
+export { parseSeedFile, SEEDS_SIGNATURE, type SeedFile, type Seed } from './parse-seed-file.js';
+export { buildSeedLexicon, WORDNET_LICENSE } from './build-seed-lexicon.js';
