@@ -1,6 +1,7 @@
 import type { ReadinessData } from '../report-data.js';
 import { axisVertical } from './axis-vertical.js';
 import { chartFrame } from './chart-frame.js';
+import { escapeHtml } from './escape-html.js';
 import { groupThousands } from './format-value.js';
 import { linearScale } from './linear-scale.js';
 import { niceTicks } from './nice-ticks.js';
@@ -25,7 +26,7 @@ export function lagPairsChart(r: ReadinessData): string {
   const parts: string[] = [axisVertical({ ticks: yt.ticks.map((v) => ({ value: v, label: groupThousands(v) })), scale: y, x: x0, y0: yTop, y1: yBottom, title: 'Usable lag pairs (count)', side: 'left', gridTo: x1 })];
   persons.forEach((p, i) => {
     const h = yBottom - y(p.lagPairs);
-    parts.push(`<rect class="mark" x="${px(x0 + i * bw + (bw > 3 ? 0.5 : 0))}" y="${px(yBottom - Math.max(h, 0.8))}" width="${px(Math.max(0.6, bw - (bw > 3 ? 1 : 0)))}" height="${px(Math.max(h, 0.8))}" fill="${p.ready ? PALETTE.score : PALETTE.flag}"><title>${p.person}: ${p.lagPairs} lag pairs</title></rect>`);
+    parts.push(`<rect class="mark" x="${px(x0 + i * bw + (bw > 3 ? 0.5 : 0))}" y="${px(yBottom - Math.max(h, 0.8))}" width="${px(Math.max(0.6, bw - (bw > 3 ? 1 : 0)))}" height="${px(Math.max(h, 0.8))}" fill="${p.ready ? PALETTE.score : PALETTE.flag}"><title>${escapeHtml(`${p.person}: ${p.lagPairs} lag pairs`)}</title></rect>`);
   });
   const ty = y(r.minLagPairs);
   parts.push(`<line x1="${x0}" x2="${x1}" y1="${px(ty)}" y2="${px(ty)}" stroke="${PALETTE.ink}" stroke-dasharray="6 4"/>`, svgText(x1 - 4, ty - 5, `threshold ${r.minLagPairs}`, 'text-anchor="end" class="tick"'));
