@@ -1,7 +1,7 @@
 import type { RawEntry } from '../../types.js';
 import { createBurstMerger } from './create-burst-merger.js';
 import { createDeduplicator, type DedupeOptions } from './create-deduplicator.js';
-import type { ImportItem, ImportReconciliation } from './import-item.js';
+import type { EntryNote, ImportItem, ImportReconciliation } from './import-item.js';
 
 /** Steps applied to the entries of an importer, in this order. */
 export interface ImportStepOptions {
@@ -23,12 +23,11 @@ export interface ImportStepOptions {
 export async function* importEntries(items: AsyncIterable<ImportItem>, options: ImportStepOptions = {}): AsyncGenerator<ImportItem> {
   const isDuplicate = options.dedupe ? createDeduplicator(options.dedupe) : undefined;
   const merger = options.mergeBurstMinutes !== undefined ? createBurstMerger(options.mergeBurstMinutes) : undefined;
-  const notesOf = new Map<string, ImportItem & { kind: 'entry' }>();
-  const out = (entry: RawEntry): ImportItem => {
-    const original = notesOf.get(entry.id);
-    notesOf.delete(entry.id);
+  // notes of the entry that opened the current burst (a merged entry carries the notes of its first message)
+  let burstNotes: ImportItem & { kind: 'entry' } | undefined;
+  const out = (entry: RawEntry, notes: readonly EntryNote[] | undefined): ImportItem => {
     const finished = options.redact ? { ...entry, text: options.redact(entry.text) } : entry;
-    return original?.notes ? { kind: 'entry', entry: finished, notes: original.notes } : { kind: 'entry', entry: finished };
+    return notes && notes.length > 0 ? { kind: 'entry', entry: finished, notes: [...notes] } : { kind: 'entry', entry: finished };
   };
   for await (const item of items) {
     if (item.kind !== 'entry') {
@@ -44,19 +43,19 @@ export async function* importEntries(items: AsyncIterable<ImportItem>, options: 
       }
     }
     if (!merger) {
-      yield out(entry);
+      yield out(entry, item.notes);
       continue;
     }
-    notesOf.set(entry.id, item);
     const { done, merged } = merger.push(entry);
     if (merged) {
-      notesOf.delete(entry.id);
       yield { kind: 'drop', reason: 'merged_burst', source: entry.source };
+      continue;
     }
-    if (done) yield out(done);
+    if (done) yield out(done, burstNotes?.notes);
+    burstNotes = item;
   }
   const last = merger?.flush();
-  if (last) yield out(last);
+  if (last) yield out(last, burstNotes?.notes);
 }
 
 /** Adds one item to a reconciliation (mutating it) and returns it. */

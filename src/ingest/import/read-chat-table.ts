@@ -90,13 +90,14 @@ export async function* readChatTable(records: AsyncIterable<RecordItem>, options
       continue;
     }
     const raw = item.record[f.text] ?? '';
-    const text = repairMojibake(raw).trim();
+    const repaired = repairMojibake(raw);
+    const text = repaired.trim();
     if (text === '') {
       yield importReject(file, line, 'empty_text', `the row has no text in the field \`${f.text}\``);
       continue;
     }
     const entry: RawEntry = { id: `${file}:${line}`, person: options.person, instant: time.instant, zone: options.zone, offsetMinutes: time.offsetMinutes, text, source: item.source };
-    const notes: EntryNote[] = repairMojibake(raw) !== raw ? ['mojibake'] : [];
+    const notes: EntryNote[] = repaired !== raw ? ['mojibake'] : [];
     yield notes.length > 0 ? { kind: 'entry', entry, notes } : { kind: 'entry', entry };
   }
 }

@@ -67,3 +67,17 @@ describe('entryLine writes the entries contract of docs/architecture.md', () => 
     expect(entryLine((e as { entry: RawEntry }).entry)).toBe(`{"id":"chat.txt:${n}","person":"P01","time":"2025-03-03T09:15:00+01:00","zone":"Europe/Brussels","text":"Hi \\"there\\""}`);
   });
 });
+
+describe('importEntries keeps the notes of kept entries', () => {
+  it('passes an entry\'s notes through, with and without burst merging', async () => {
+    const noted = (minutes: number): ImportItem => {
+      const item = entry(minutes, 'Ã§a va');
+      return { ...item, notes: ['mojibake'] } as ImportItem;
+    };
+    for (const options of [{}, { mergeBurstMinutes: 5 }]) {
+      const r = emptyImportReconciliation();
+      for (const item of await collect(importEntries(from([noted(0), noted(60)]), options))) tallyImportItem(r, item);
+      expect(r.notes).toEqual({ mojibake: 2 });
+    }
+  });
+});
