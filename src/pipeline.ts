@@ -14,7 +14,7 @@
  * file's folder, calls the stages in order and records provenance.
  */
 import { readFile } from 'node:fs/promises';
-import { dirname, join, resolve } from 'node:path';
+import { dirname, join, relative, resolve } from 'node:path';
 import { usageError } from './errors.js';
 import { writeFileAtomic } from './io/atomic-write.js';
 import { loadLexicons } from './io/load-lexicon.js';
@@ -53,6 +53,15 @@ export interface RunStudyResult {
   score: RunScoreResult;
   series: RunSeriesResult;
   stages: Record<string, StageOutput>;
+}
+
+/** Columns of every rejects file (scores.rejects.csv, series-long.rejects.csv). */
+const REJECTS_HEADER = ['file', 'line', 'stage', 'code', 'message'];
+
+/** Data rows of a small CSV input (lines after the header, ignoring blank lines). */
+async function dataRows(path: string): Promise<number> {
+  const lines = (await readFile(path, 'utf8')).split(/\r?\n/).filter((l) => l.trim() !== '');
+  return Math.max(0, lines.length - 1);
 }
 
 /** Reads and validates a study file; throws a usage error listing every problem with its JSON path. */
@@ -115,6 +124,8 @@ export async function runStudy(studyPath: string, options: { now: string; stages
   const resources: TableResource[] = [
     tableResource('scores', 'scores.csv', scoreHeader, undefined, 'One row per scored entry; score columns are <lexicon>.<category>.'),
     ...series.resources,
+    tableResource('scores-rejects', 'scores.rejects.csv', REJECTS_HEADER, undefined, 'One row per input row the score stage could not use, with its file, line and reason (counted in the manifest reconciliation).'),
+    tableResource('series-rejects', relative(outDir, series.rejectsPath), REJECTS_HEADER, undefined, 'One row per scores row the series stage could not use, with its line and reason.'),
     ...Object.values(stages).flatMap((s) => s.resources),
   ];
   await writeFileAtomic(join(outDir, 'datapackage.json'), JSON.stringify(dataPackage(study.name, study.name, resources), null, 2) + '\n');
@@ -128,7 +139,7 @@ export async function runStudy(studyPath: string, options: { now: string; stages
   for (const extra of [study.zones]) {
     if (!extra) continue;
     const d = await fileDigest(at(extra));
-    inputs.push({ path: extra, sha256: d.sha256, bytes: d.bytes });
+    inputs.push({ path: extra, sha256: d.sha256, bytes: d.bytes, rows: await dataRows(at(extra)) });
   }
   const manifest = buildManifest({
     version: TOOL_VERSION,

@@ -37,6 +37,11 @@ const FIXED: Record<string, Omit<SchemaField, 'name'>> = {
   lag_valid: { type: 'integer', description: '1 when bin t-1 is observed and directly adjacent, else 0: only then are the lag columns filled' },
   text: { type: 'string', description: 'Entry text (only with --keep-text; redacted)' },
   excluded: { type: 'integer', description: '1 when the entry fell in excluded hours and was not aggregated' },
+  file: { type: 'string', description: 'Input file of the rejected row' },
+  line: { type: 'integer', description: 'Line of the rejected row in that file (1 = header)' },
+  stage: { type: 'string', description: 'Stage that rejected the row (ingest, score, series)' },
+  code: { type: 'string', description: 'Fixed code of the problem (counted in the manifest reconciliation)' },
+  message: { type: 'string', description: 'What was wrong with the row and how to fix it' },
 };
 
 const SUFFIXES: Array<[string, Omit<SchemaField, 'name'>]> = [
