@@ -27,6 +27,7 @@ export function locateReportFiles(files: readonly string[]): {
   scoresMeta?: string;
   validationJson?: string;
   alignedCsv?: string;
+  topTermsCsv?: string;
   termsJson?: string;
   dynamics: string[];
 } {
@@ -39,7 +40,8 @@ export function locateReportFiles(files: readonly string[]): {
     scoresMeta: pick((f) => name(f).endsWith('.csv.meta.json') && /score/i.test(name(f))),
     validationJson: pick((f) => inValidation(f) && f.endsWith('.json') && !/datapackage|meta\.json$/.test(f) && !/rejects|diagnostic/i.test(name(f))),
     alignedCsv: pick((f) => inValidation(f) && f.endsWith('.csv') && /pair|align/i.test(name(f))),
-    termsJson: pick((f) => /term|audit/i.test(f) && f.endsWith('.json') && !/meta\.json$|datapackage/.test(f)),
+    topTermsCsv: pick((f) => name(f) === 'top-terms.csv'),
+    termsJson: pick((f) => name(f) === 'term-audit.json') ?? pick((f) => /term|audit/i.test(f) && f.endsWith('.json') && !/meta\.json$|datapackage/.test(f)),
     dynamics: files.filter((f) => /dynamic/i.test(f) && f.endsWith('.csv') && !/rejects|diagnostic/i.test(name(f))).sort(),
   };
 }
@@ -83,7 +85,8 @@ export async function readReportData(outDir: string, options: ReportOptions = {}
     else if (v.reason) reasons.validation = v.reason;
   }
   if (found.alignedCsv) inputs.alignedCsv = await readFile(at(found.alignedCsv), 'utf8');
-  if (found.termsJson) {
+  if (found.topTermsCsv) inputs.topTermsCsv = await readFile(at(found.topTermsCsv), 'utf8');
+  if (found.termsJson && !found.topTermsCsv) {
     const t = await readJson(at(found.termsJson));
     if (t.value !== undefined) inputs.termsJson = t.value;
     else if (t.reason) reasons.lexicons = t.reason;

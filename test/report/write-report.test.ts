@@ -25,6 +25,7 @@ describe('locateReportFiles', () => {
       scoresMeta: 'scores.csv.meta.json',
       validationJson: 'validation/validation.json',
       alignedCsv: 'validation/validation-pairs.csv',
+      topTermsCsv: undefined,
       termsJson: 'terms/term-audit.json',
       dynamics: ['dynamics/dynamics-summary.csv'],
     });

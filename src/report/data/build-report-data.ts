@@ -9,6 +9,7 @@ import { parseSeriesLong } from './parse-series-long.js';
 import { personTracks, type BinRatings } from './person-tracks.js';
 import { readinessFromRows } from './readiness-from-rows.js';
 import { termsFromJson } from './terms-from-json.js';
+import { termsFromTopTerms } from './terms-from-top-terms.js';
 import { validationFromJson } from './validation-from-json.js';
 import { completePoints, validationFromPairs } from './validation-from-pairs.js';
 
@@ -33,7 +34,9 @@ export interface ReportInputs {
   validationJson?: unknown;
   /** Text of the validate stage's aligned pairs CSV (see alignedFromCsv). */
   alignedCsv?: string;
-  /** Parsed term audit JSON (see termsFromJson). */
+  /** Text of the term audit's top-terms.csv (preferred; see termsFromTopTerms). */
+  topTermsCsv?: string;
+  /** Parsed term audit JSON, used when there is no top-terms.csv (see termsFromJson). */
   termsJson?: unknown;
   /** CSV files of the dynamics stage (see dynamicsTables). */
   dynamicsFiles?: { name: string; text: string }[];
@@ -129,7 +132,7 @@ export function buildReportData(inputs: ReportInputs, options: ReportOptions = {
   const manifestReconciliation = inputs.manifest?.reconciliation as Reconciliation | undefined;
   const reconciliation = manifestReconciliation ?? inputs.reconciliation;
   const studyName = ((inputs.manifest?.parameters as Record<string, unknown> | undefined)?.study as Record<string, unknown> | undefined)?.name;
-  const terms = inputs.termsJson === undefined ? undefined : termsFromJson(inputs.termsJson);
+  const terms = (inputs.topTermsCsv === undefined ? undefined : termsFromTopTerms(inputs.topTermsCsv)) ?? (inputs.termsJson === undefined ? undefined : termsFromJson(inputs.termsJson));
   const dynamics = inputs.dynamicsFiles ? dynamicsTables(inputs.dynamicsFiles) : undefined;
   return {
     title: options.title ?? (typeof studyName === 'string' ? `${studyName}: study report` : `Study report: ${inputs.source}`),

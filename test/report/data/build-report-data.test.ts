@@ -99,3 +99,16 @@ describe('buildReportData', () => {
     expect(data.coverage.ok).toBe(true);
   });
 });
+
+describe('buildReportData with top-terms.csv (docs/architecture.md "Term audit" contract)', () => {
+  it('reads the top terms per category with shares and ;-separated flags, and recovers the category total from the top share', () => {
+    const csv = 'lexicon,lexicon_sha256,category,rank,term,hits,share,entries,persons,flags\n' + 'dc,abc,worry,1,worr*,30,0.6,20,5,over_share\n' + 'dc,abc,worry,2,nervous,10,0.2,8,2,few_persons;over_share\n' + 'dc,abc,fatigue,1,tired,4,1,4,3,\n';
+    const data = buildReportData({ source: 'out', tool, topTermsCsv: csv });
+    if (!data.lexicons.ok) throw new Error('no terms');
+    expect(data.lexicons.value.categories.map((c) => [c.category, c.totalHits, c.terms.length])).toEqual([
+      ['worry', 50, 2],
+      ['fatigue', 4, 1],
+    ]);
+    expect(data.lexicons.value.categories[0]!.terms[1]).toEqual({ term: 'nervous', hits: 10, share: 0.2, flags: ['few_persons', 'over_share'] });
+  });
+});
