@@ -12,41 +12,46 @@ const PER_COLUMN = 6;
 /** Leading fields of a slot: entries, words. */
 const HEAD = 2;
 
+/** Slots per chunk of the store (a power of two). */
+const CHUNK_BITS = 12;
+const CHUNK = 1 << CHUNK_BITS;
+
 /**
- * The accumulators of every (person, unit bin), pooled in one growing Float64Array: a bin is a
- * slot of `2 + 6·columns` numbers (entries, words, and per score column Σ words·x, Σ words,
- * Σ x with its Neumaier compensation, count of values, matched terms). Memory grows with the
- * number of bins that hold entries (about `16·(2 + 6·columns)` bytes each, with the key map),
- * never with the number of entries.
+ * The accumulators of every (person, unit bin), pooled in fixed-size Float64Array chunks of
+ * 4,096 slots (no copying or over-allocation as the store grows): a bin is a slot of
+ * `2 + 6·columns` numbers (entries, words, and per score column Σ words·x, Σ words, Σ x with
+ * its Neumaier compensation, count of values, matched terms). Memory grows with the number of
+ * bins that hold entries (`8·(2 + 6·columns)` bytes each, plus the key map), never with the
+ * number of entries.
  */
 export interface BinStore {
   columns: number;
   stride: number;
-  data: Float64Array;
+  chunks: Float64Array[];
   /** Slots in use. */
   size: number;
 }
 
 /** A fresh, empty store for `columns` score columns. */
-export function createBinStore(columns: number, capacity = 1024): BinStore {
-  const stride = HEAD + PER_COLUMN * columns;
-  return { columns, stride, data: new Float64Array(stride * capacity), size: 0 };
+export function createBinStore(columns: number): BinStore {
+  return { columns, stride: HEAD + PER_COLUMN * columns, chunks: [], size: 0 };
 }
 
-/** Reserves a new zeroed slot and returns its number (the store doubles when full). */
+/** Reserves a new zeroed slot and returns its number. */
 export function newBinSlot(store: BinStore): number {
-  if ((store.size + 1) * store.stride > store.data.length) {
-    const grown = new Float64Array(Math.max(store.data.length * 2, store.stride * 1024));
-    grown.set(store.data);
-    store.data = grown;
-  }
+  if (store.size >>> CHUNK_BITS >= store.chunks.length) store.chunks.push(new Float64Array(store.stride * CHUNK));
   return store.size++;
+}
+
+/** Bytes held by the store's chunks. */
+export function binStoreBytes(store: BinStore): number {
+  return store.chunks.length * store.stride * CHUNK * 8;
 }
 
 /** Adds one entry to slot `slot`: its word count, score values (undefined = no value) and matched terms. */
 export function addToBin(store: BinStore, slot: number, words: number, values: ReadonlyArray<number | undefined>, matched: ReadonlyArray<number>): void {
-  const d = store.data;
-  const base = slot * store.stride;
+  const d = store.chunks[slot >>> CHUNK_BITS] as Float64Array;
+  const base = (slot & (CHUNK - 1)) * store.stride;
   d[base] = (d[base] as number) + 1;
   d[base + 1] = (d[base + 1] as number) + words;
   for (let c = 0; c < store.columns; c++) {
@@ -68,21 +73,21 @@ export function addToBin(store: BinStore, slot: number, words: number, values: R
 /** Entries in the given slots (one slot for a unit bin, several for weekly and multi-day bins). */
 export function binEntries(store: BinStore, slots: readonly number[]): number {
   let n = 0;
-  for (const s of slots) n += store.data[s * store.stride] as number;
+  for (const s of slots) n += (store.chunks[s >>> CHUNK_BITS] as Float64Array)[(s & (CHUNK - 1)) * store.stride] as number;
   return n;
 }
 
 /** Words in the given slots. */
 export function binWords(store: BinStore, slots: readonly number[]): number {
   let n = 0;
-  for (const s of slots) n += store.data[s * store.stride + 1] as number;
+  for (const s of slots) n += (store.chunks[s >>> CHUNK_BITS] as Float64Array)[(s & (CHUNK - 1)) * store.stride + 1] as number;
   return n;
 }
 
 /** Matched terms of score column `c` in the given slots. */
 export function binMatched(store: BinStore, slots: readonly number[], c: number): number {
   let n = 0;
-  for (const s of slots) n += store.data[s * store.stride + HEAD + c * PER_COLUMN + MATCHED] as number;
+  for (const s of slots) n += (store.chunks[s >>> CHUNK_BITS] as Float64Array)[(s & (CHUNK - 1)) * store.stride + HEAD + c * PER_COLUMN + MATCHED] as number;
   return n;
 }
 
@@ -92,14 +97,14 @@ export function binMatched(store: BinStore, slots: readonly number[], c: number)
  * `sum` → Σ x. Undefined when no entry had a value (an empty bin is missing, never 0).
  */
 export function reduceBin(store: BinStore, slots: readonly number[], c: number, reducer: BinReducer): number | undefined {
-  const d = store.data;
   let n = 0;
   let sum = 0;
   let comp = 0;
   let wsum = 0;
   let wtotal = 0;
   for (const s of slots) {
-    const o = s * store.stride + HEAD + c * PER_COLUMN;
+    const d = store.chunks[s >>> CHUNK_BITS] as Float64Array;
+    const o = (s & (CHUNK - 1)) * store.stride + HEAD + c * PER_COLUMN;
     n += d[o + COUNT] as number;
     sum += d[o + SUM] as number;
     comp += d[o + COMP] as number;
