@@ -36,10 +36,11 @@ export function readinessSection(readiness: Part<ReadinessData>, dynamics: Part<
     );
   } else parts.push(absentNote('Readiness figures are', readiness.reason));
   parts.push('<h3>Dynamics results</h3>');
+  if (dynamics.ok) parts.push('<p class="note">One table per output file of the dynamics stage; open a table to read it (the CSV files hold the same rows).</p>');
   if (dynamics.ok) {
     for (const t of dynamics.value.tables) {
-      parts.push(htmlTable(t.columns.map((c) => ({ label: c })), t.rows, t.title));
-      if (t.omitted) parts.push(`<p class="note">${t.omitted} more rows are in the output file; ${escapeHtml(t.title)} is cut here to keep the page light.</p>`);
+      const omitted = t.omitted ? `<p class="note">${t.omitted} more rows are in the output file; ${escapeHtml(t.title)} is cut here to keep the page light.</p>` : '';
+      parts.push(`<details class="results"><summary>${escapeHtml(t.title)} (${t.rows.length + (t.omitted ?? 0)} rows)</summary>${htmlTable(t.columns.map((c) => ({ label: c })), t.rows)}${omitted}</details>`);
     }
   } else parts.push(absentNote('Dynamics results are', dynamics.reason));
   return sectionFrame('dynamics', 5, 'Dynamics readiness', 'Whether each person\'s series is long and complete enough for inertia, instability and cross-lagged models.', parts.join(''));

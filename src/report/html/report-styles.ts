@@ -72,6 +72,8 @@ dl.json dd{margin:0;min-width:0}
 table.json{margin:2px 0;font-size:12px}
 code{font-family:ui-monospace,"DejaVu Sans Mono",Menlo,Consolas,monospace;font-size:.92em;overflow-wrap:anywhere}
 .muted{color:var(--muted)}
+details.results{margin:6px 0;overflow-x:auto}
+details.results summary{cursor:pointer;font-weight:600}
 ul.cautions li{margin:6px 0;max-width:80ch}
 footer{margin-top:40px;color:var(--muted);font-size:13px;border-top:1px solid var(--rule);padding-top:10px}
 @media (max-width:900px){.page{grid-template-columns:1fr}nav.toc{position:static}}
