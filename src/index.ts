@@ -109,3 +109,11 @@ export {
   type AlignedPair, type AlignedRow, type Rating, type RatingScale, type SeriesBin, type EntryScore, type WordCountReliability, type BinsPerPerson,
 } from './validate/index.js';
 export { runValidate, readRatings, type RunValidateOptions, type RunValidateResult } from './io/run-validate.js';
+
+// HTML report
+export { writeReport, type WriteReportResult } from './io/write-report.js';
+export { readReportData, locateReportFiles } from './io/read-report-data.js';
+export { buildReportData, type ReportInputs, type ReportOptions } from './report/data/build-report-data.js';
+export { renderReport } from './report/html/render-report.js';
+export { REPORT_CAUTIONS } from './report/html/cautions.js';
+export type { ReportData, Part, CoverageData, SeriesData, ValidationData, ValidationPair, LexiconAuditData, ReadinessData, DynamicsData, ProvenanceData } from './report/report-data.js';

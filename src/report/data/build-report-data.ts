@@ -3,7 +3,7 @@ import type { AlignedPair } from '../../validate/aligned-pair.js';
 import { absent, present, type ReliabilityCurve, type ReportData, type ValidationData, type ValidationPair } from '../report-data.js';
 import { alignedFromCsv } from './aligned-from-csv.js';
 import { coverageFromRows } from './coverage-from-rows.js';
-import { dynamicsTables } from './dynamics-tables.js';
+import { dynamicsResultTables } from './dynamics-result-tables.js';
 import { parseCsvTable } from './parse-csv-table.js';
 import { parseSeriesLong } from './parse-series-long.js';
 import { personTracks, type BinRatings } from './person-tracks.js';
@@ -38,7 +38,7 @@ export interface ReportInputs {
   topTermsCsv?: string;
   /** Parsed term audit JSON, used when there is no top-terms.csv (see termsFromJson). */
   termsJson?: unknown;
-  /** CSV files of the dynamics stage (see dynamicsTables). */
+  /** CSV files of the dynamics stage (see dynamicsResultTables). */
   dynamicsFiles?: { name: string; text: string }[];
   /** Why an input is absent or unreadable, by section (`validation`, `lexicons`, `dynamics`, …). */
   reasons?: Partial<Record<'series' | 'manifest' | 'validation' | 'lexicons' | 'dynamics', string>>;
@@ -133,7 +133,7 @@ export function buildReportData(inputs: ReportInputs, options: ReportOptions = {
   const reconciliation = manifestReconciliation ?? inputs.reconciliation;
   const studyName = ((inputs.manifest?.parameters as Record<string, unknown> | undefined)?.study as Record<string, unknown> | undefined)?.name;
   const terms = (inputs.topTermsCsv === undefined ? undefined : termsFromTopTerms(inputs.topTermsCsv)) ?? (inputs.termsJson === undefined ? undefined : termsFromJson(inputs.termsJson));
-  const dynamics = inputs.dynamicsFiles ? dynamicsTables(inputs.dynamicsFiles) : undefined;
+  const dynamics = inputs.dynamicsFiles ? dynamicsResultTables(inputs.dynamicsFiles) : undefined;
   return {
     title: options.title ?? (typeof studyName === 'string' ? `${studyName}: study report` : `Study report: ${inputs.source}`),
     tool: inputs.tool,

@@ -1,2 +1,2 @@
 export { renderReport } from './render-report.js';
-export { CAUTIONS } from './cautions.js';
+export { REPORT_CAUTIONS } from './cautions.js';

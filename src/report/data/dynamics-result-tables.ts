@@ -9,7 +9,7 @@ export const MAX_TABLE_ROWS = 200;
  * name, shown as the table title), cut to {@link MAX_TABLE_ROWS} rows with the rest counted.
  * Numbers are shown as written in the file. Returns undefined when no file has rows.
  */
-export function dynamicsTables(files: readonly { name: string; text: string }[]): DynamicsData | undefined {
+export function dynamicsResultTables(files: readonly { name: string; text: string }[]): DynamicsData | undefined {
   const tables: ResultTable[] = [];
   for (const f of files) {
     const t = parseCsvTable(f.text);
