@@ -2,7 +2,7 @@ import { tokenize } from '../text/tokenize.js';
 import type { LexiconRef } from '../types.js';
 import { lexiconHash } from './lexicon-hash.js';
 import type { Aggregation, Lexicon, NegationRule } from './lexicon-types.js';
-import { isWildcard } from './parse-lexicon.js';
+import { isWildcard, MIN_WILDCARD_STEM } from './parse-lexicon.js';
 
 /** What one pattern contributes: a weight to each of its categories (by index). */
 export interface Hit {
@@ -32,6 +32,8 @@ export interface CompiledLexicon {
   wildcards: ReadonlyMap<string, Hit>;
   /** Distinct stem lengths, longest first. */
   stemLengths: number[];
+  /** The first MIN_WILDCARD_STEM characters of every stem: a token whose start is not here matches no wildcard. */
+  stemPrefixes: ReadonlySet<string>;
   negation: NegationRule;
   negators: ReadonlySet<string>;
   window: number;
@@ -92,6 +94,7 @@ export function compileLexicon(lexicon: Lexicon): CompiledLexicon {
   const phrases = new Map<string, Phrase[]>();
   for (const [first, byText] of phraseMap) phrases.set(first, [...byText.values()].sort((a, b) => b.tokens.length - a.tokens.length));
   const stemLengths = [...new Set([...wildcards.keys()].map((k) => k.length))].sort((a, b) => b - a);
+  const stemPrefixes = new Set([...wildcards.keys()].map((k) => k.slice(0, MIN_WILDCARD_STEM)));
   return {
     ref: { name: lexicon.name, version: lexicon.version, sha256: lexiconHash(lexicon), license: lexicon.license, source: lexicon.source },
     lexicon,
@@ -102,6 +105,7 @@ export function compileLexicon(lexicon: Lexicon): CompiledLexicon {
     phrases,
     wildcards,
     stemLengths,
+    stemPrefixes,
     negation: lexicon.negation,
     negators: new Set(lexicon.negators),
     window: lexicon.window,

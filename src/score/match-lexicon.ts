@@ -1,4 +1,5 @@
 import type { CompiledLexicon, Hit } from '../lexicon/compile-lexicon.js';
+import { MIN_WILDCARD_STEM } from '../lexicon/parse-lexicon.js';
 import { TokenKind, type Tokens } from '../text/tokenize.js';
 
 /** Per-category totals of one lexicon over one entry. */
@@ -42,6 +43,9 @@ function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon): { hit: Hi
   }
   const exact = lexicon.single.get(token);
   if (exact) return { hit: exact, length: 1 };
+  // Most tokens match no wildcard: one look-up of their first three characters rules that out
+  // before a substring is cut for every stem length.
+  if (lexicon.stemLengths.length === 0 || !lexicon.stemPrefixes.has(token.slice(0, MIN_WILDCARD_STEM))) return undefined;
   for (const len of lexicon.stemLengths) {
     if (token.length < len) continue;
     const wild = lexicon.wildcards.get(token.slice(0, len));
