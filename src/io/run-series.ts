@@ -10,7 +10,7 @@ import { formatNumber } from '../report/format-number.js';
 import { seriesHeader, seriesRow, type SeriesLayout } from '../report/series-rows.js';
 import { SCORE_ID_COLUMNS } from '../report/score-rows.js';
 import type { BinReducer } from '../series/bin-accumulator.js';
-import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesOptions, type SeriesRow } from '../series/build-series.js';
+import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesOptions } from '../series/build-series.js';
 import { dateOfDayNumber } from '../series/local-day.js';
 import type { Diagnostic } from '../types.js';
 import { openAtomicLineWriter } from './atomic-write.js';
@@ -171,13 +171,20 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
     try {
       const longHeader = seriesHeader(layout);
       await long.write(csvRow(longHeader));
-      // Two passes over the accumulators, one person at a time, so that no more than one
-      // person's rows are held: the long file first (which also gives the widest t), then the
-      // wide file from the same pure, deterministic buildPersonSeries.
+      // One person's rows at a time: the long file is written as they are built, and only the
+      // values are kept for the wide file (8 bytes per bin and score, NaN for missing), so memory
+      // stays bounded by bins.
       let maxT = 0;
+      const columns = layout.scores.length;
+      const wideValues: Float64Array[] = [];
       for (const person of persons) {
         const rows = buildPersonSeries(state, person);
         maxT = Math.max(maxT, rows.length);
+        const values = new Float64Array(rows.length * columns).fill(NaN);
+        rows.forEach((row, t) => {
+          for (let c = 0; c < columns; c++) values[c * rows.length + t] = row.values[c] ?? NaN;
+        });
+        wideValues.push(values);
         for (const row of rows) {
           bins++;
           if (row.missing === '') observed++;
@@ -187,12 +194,16 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       }
       const wideHeader = ['person', ...layout.scores.flatMap((s) => Array.from({ length: maxT }, (_, t) => `${s}@${t}`))];
       await wide.write(csvRow(wideHeader));
-      for (const person of persons) {
-        const rows: SeriesRow[] = buildPersonSeries(state, person);
-        const fields = [person];
-        layout.scores.forEach((_, c) => {
-          for (let t = 0; t < maxT; t++) fields.push(formatNumber(rows[t]?.values[c]));
-        });
+      for (let p = 0; p < persons.length; p++) {
+        const values = wideValues[p] as Float64Array;
+        const length = values.length / Math.max(1, columns);
+        const fields = [persons[p] as string];
+        for (let c = 0; c < columns; c++) {
+          for (let t = 0; t < maxT; t++) {
+            const x = t < length ? (values[c * length + t] as number) : NaN;
+            fields.push(Number.isNaN(x) ? '' : formatNumber(x));
+          }
+        }
         await wide.write(csvRow(fields));
       }
       await long.commit();
