@@ -25,6 +25,18 @@ import { dataPackage, tableResource, type TableResource } from './report/data-di
 import { buildManifest, type FileRecord, type Manifest } from './report/manifest.js';
 import { parseReducers, seriesOptionsFrom } from './cli/series-options.js';
 import { parseStudy, type Study } from './study/parse-study.js';
+import type { AuditSettings } from './study/stage-settings.js';
+import type { TimeOptions } from './ingest/parse-instant.js';
+import type { ZoneTable } from './ingest/zone-table.js';
+import { readPseudonymKey, PSEUDONYM_KEY_ENV } from './io/read-pseudonym-key.js';
+import { pseudonymizePerson } from './privacy/pseudonymize-person.js';
+import { createRedactor } from './privacy/create-redactor.js';
+import { termAuditor } from './terms/term-auditor.js';
+import { random } from './stats/random.js';
+import { parseClockTime } from './series/bin-spec.js';
+import { dateOfDayNumber, localDayOf } from './series/local-day.js';
+import { writeStudyAudit } from './io/write-study-audit.js';
+import { writeReport, type WriteReportResult } from './io/write-report.js';
 import { TOOL_VERSION } from './version.js';
 
 /** What a stage after the series contributes to the outputs. */
@@ -41,10 +53,18 @@ export interface StudyContext {
   study: Study;
   studyDir: string;
   outDir: string;
+  /** Resolves a path of the study file against its folder. */
+  at: (path: string) => string;
+  zones: ZoneTable;
+  time: TimeOptions;
+  /** Maps raw person ids to the ids written in outputs (pseudonyms when a key is given). */
+  person: (id: string) => string;
   score: RunScoreResult;
   series: RunSeriesResult;
   /** Seed for every random draw of the run (bootstrap, surrogates). */
   seed: number;
+  /** What one stage leaves for a later one (e.g. self-reports per bin for dynamics). */
+  shared: Record<string, unknown>;
 }
 
 export interface RunStudyResult {
@@ -53,7 +73,11 @@ export interface RunStudyResult {
   score: RunScoreResult;
   series: RunSeriesResult;
   stages: Record<string, StageOutput>;
+  report?: WriteReportResult;
 }
+
+/** Seed of a run's random draws when none is given. */
+export const DEFAULT_SEED = 20261201;
 
 /** Columns of every rejects file (scores.rejects.csv, series-long.rejects.csv). */
 const REJECTS_HEADER = ['file', 'line', 'stage', 'code', 'message'];
@@ -84,13 +108,39 @@ export async function readStudy(path: string): Promise<Study> {
  * report) → datapackage.json and manifest.json, all in the study's output folder.
  * `now` (ISO 8601) is the run time recorded in the manifest; `stages` are called in order.
  */
-export async function runStudy(studyPath: string, options: { now: string; stages?: Array<[string, StudyStage]>; seed?: number; onProgress?: (rows: number) => void }): Promise<RunStudyResult> {
+export async function runStudy(
+  studyPath: string,
+  options: {
+    now: string;
+    stages?: Array<[string, StudyStage]>;
+    seed?: number;
+    onProgress?: (rows: number) => void;
+    /** Environment variables the study may name (`privacy.keyEnv`), passed in by the caller. */
+    env?: Readonly<Record<string, string | undefined>>;
+  },
+): Promise<RunStudyResult> {
   const study = await readStudy(studyPath);
   const studyDir = dirname(resolve(studyPath));
   const at = (p: string): string => resolve(studyDir, p);
   const outDir = at(study.out);
   const lexicons = await loadLexicons(study.lexicons.map((l) => (l.includes('/') || l.endsWith('.tsv') ? at(l) : l)));
   const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
+  const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap };
+  const privacy = study.privacy ?? {};
+  const keyEnv = privacy.keyEnv ?? PSEUDONYM_KEY_ENV;
+  const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, options.env?.[keyEnv]);
+  if (privacy.keyEnv && !key) throw usageError(`The study names the key variable \`${privacy.keyEnv}\` ($.privacy.keyEnv), but it is not set; set it or remove the key from the study file.`);
+  const pseudonyms = new Map<string, string>();
+  const person = key
+    ? (id: string): string => {
+        let p = pseudonyms.get(id);
+        if (p === undefined) pseudonyms.set(id, (p = pseudonymizePerson(id, key)));
+        return p;
+      }
+    : (id: string): string => id;
+  const redact = createRedactor({ names: privacy.names });
+  const auditors = study.audit === false ? [] : lexicons.filter((l) => l.scoring === 'rules').map((l) => ({ lexicon: l, auditor: termAuditor(l, { random: random(options.seed ?? DEFAULT_SEED), redact, maxShare: (study.audit as AuditSettings).maxShare, minPersons: (study.audit as AuditSettings).minPersons }) }));
+  const dayStart = parseClockTime(study.series.dayStart);
   const score = await runScore({
     inputs: study.inputs.map((i) => ({
       path: at(i.path),
@@ -100,10 +150,16 @@ export async function runStudy(studyPath: string, options: { now: string; stages
     })),
     lexicons,
     zones,
-    time: { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap },
+    time,
     out: join(outDir, 'scores.csv'),
     keepText: study.keepText,
+    redact,
+    person,
     onProgress: options.onProgress,
+    onRawEntry: auditors.length === 0 ? undefined : (entry) => {
+      const bin = dateOfDayNumber(localDayOf(entry.instant, entry.zone, dayStart).day);
+      for (const a of auditors) a.auditor.add({ id: entry.id, person: entry.person, text: entry.text, bin });
+    },
   });
   const reducers = parseReducers(study.series.aggregate);
   const series = await runSeries({
@@ -113,9 +169,10 @@ export async function runStudy(studyPath: string, options: { now: string; stages
     reducers: typeof reducers === 'string' ? undefined : reducers,
     allReducer: typeof reducers === 'string' ? reducers : undefined,
   });
-  const seed = options.seed ?? 20261201;
+  const seed = options.seed ?? DEFAULT_SEED;
   const stages: Record<string, StageOutput> = {};
-  const context: StudyContext = { study, studyDir, outDir, score, series, seed };
+  if (auditors.length > 0) stages.audit = await writeStudyAudit(outDir, auditors.map((a) => a.auditor.finish()), (study.audit as AuditSettings).top, study.keepText);
+  const context: StudyContext = { study, studyDir, outDir, at, zones, time, person, score, series, seed, shared: {} };
   for (const [name, stage] of options.stages ?? []) {
     const out = await stage(context);
     if (out) stages[name] = out;
@@ -155,6 +212,12 @@ export async function runStudy(studyPath: string, options: { now: string; stages
     },
     outputs,
   });
+  if (study.report !== false) {
+    manifest.outputs.push({ path: 'report.html' });
+    manifest.stages.report = { note: 'report.html is written after this manifest and shows it; its hash is not recorded here' };
+  }
   await writeFileAtomic(join(outDir, 'manifest.json'), JSON.stringify(manifest, null, 2) + '\n');
-  return { outDir, manifest, score, series, stages };
+  let report: WriteReportResult | undefined;
+  if (study.report !== false) report = await writeReport(outDir, { ...study.report, ...(study.report.title ? {} : { title: study.name }) });
+  return { outDir, manifest, score, series, stages, report };
 }

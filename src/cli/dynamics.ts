@@ -1,14 +1,10 @@
 import type { Command } from 'commander';
-import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { analyseDynamics, type DynamicsOptions } from '../dynamics/analyse-dynamics.js';
-import { dynamicsColumn } from '../dynamics/dynamics-column.js';
-import { dynamicsTables } from '../dynamics/dynamics-tables.js';
-import { parseSeriesCsv } from '../dynamics/parse-series-csv.js';
-import { inputError, usageError } from '../errors.js';
+import type { DynamicsOptions } from '../dynamics/analyse-dynamics.js';
+import { usageError } from '../errors.js';
 import { writeFileAtomic } from '../io/atomic-write.js';
-import { csvDocument } from '../report/csv.js';
-import { dataPackage, tableResource, type TableResource } from '../report/data-dictionary.js';
+import { runDynamics } from '../io/run-dynamics.js';
+import { dataPackage } from '../report/data-dictionary.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
 
@@ -42,25 +38,13 @@ export function registerDynamics(program: Command): void {
     .option('--no-cross-mapping', 'skip convergent cross mapping')
     .option('--seed <seed>', 'seed of every random step', '1')
     .action(async (seriesPath: string, opts: Record<string, unknown>) => {
-      let text: string;
-      try {
-        text = await readFile(seriesPath, 'utf8');
-      } catch {
-        throw inputError(`Cannot read \`${seriesPath}\`: no such file or it is not readable; give the long series CSV written by \`lexichron series\``);
-      }
-      const parsed = parseSeriesCsv(text, seriesPath);
-      const variables = opts.variables === undefined ? parsed.scores : String(opts.variables).split(',').map((s) => s.trim()).filter(Boolean);
-      const known = new Set(parsed.scores);
-      for (const v of variables) if (!known.has(v)) throw usageError(`--variables names \`${v}\`, which is not a score column of \`${seriesPath}\`; the columns are ${parsed.scores.map((s) => `\`${s}\``).join(', ')}`);
       const pairs = (opts.pair as string[] | undefined)?.map((p): [string, string] => {
         const parts = p.split(':');
         if (parts.length !== 2 || !parts[0] || !parts[1]) throw usageError(`--pair \`${p}\` is not of the form A:B, e.g. --pair vader.compound:mood`);
-        for (const v of parts) if (!known.has(v)) throw usageError(`--pair \`${p}\` names \`${v}\`, which is not a score column of \`${seriesPath}\`; the columns are ${parsed.scores.map((s) => `\`${s}\``).join(', ')}`);
-        if (parts[0] === parts[1]) throw usageError(`--pair \`${p}\` pairs a column with itself; name two different columns`);
         return [parts[0], parts[1]];
       });
-      const options: DynamicsOptions = {
-        variables,
+      const options: Omit<DynamicsOptions, 'variables'> & { variables?: string[] } = {
+        ...(opts.variables === undefined ? {} : { variables: String(opts.variables).split(',').map((s) => s.trim()).filter(Boolean) }),
         ...(pairs ? { pairs } : {}),
         minLagPairs: opts.minPairs as number,
         ccm: {
@@ -77,23 +61,15 @@ export function registerDynamics(program: Command): void {
         ...(opts.season !== undefined ? { seasonPeriod: opts.season as number } : {}),
         seed: /^\d+$/.test(String(opts.seed)) ? Number(opts.seed) : String(opts.seed),
       };
-      const result = analyseDynamics(parsed.persons, options);
       const out = String(opts.out);
-      const tables = dynamicsTables(result);
-      const resources: TableResource[] = [];
-      for (const table of tables) {
-        await writeFileAtomic(join(out, table.file), csvDocument(table.header, table.rows));
-        const resource = tableResource(table.file.replace(/\.csv$/, ''), table.file, table.header, undefined, table.description);
-        resources.push({ ...resource, schema: { fields: table.header.map(dynamicsColumn), missingValues: [''] } });
-      }
-      await writeFileAtomic(join(out, 'dynamics.json'), JSON.stringify({ tool: 'lexichron dynamics', input: seriesPath, diagnostics: parsed.diagnostics, ...result }, null, 2) + '\n');
+      const { result, persons, variables, diagnostics, resources } = await runDynamics(seriesPath, out, options);
       await writeFileAtomic(join(out, 'datapackage.json'), JSON.stringify(dataPackage('lexichron-dynamics', 'lexichron dynamics', resources), null, 2) + '\n');
       const ready = result.summaries.filter((s) => s.ready).length;
       const converging = result.ccm.filter((c) => c.converges).length;
       process.stderr.write(
-        `${parsed.persons.length} persons × ${variables.length} variables: ${ready} of ${result.summaries.length} series ready (≥ ${options.minLagPairs} lag pairs); ` +
+        `${persons} persons × ${variables.length} variables: ${ready} of ${result.summaries.length} series ready (≥ ${options.minLagPairs ?? 50} lag pairs); ` +
           `${result.options.pairs.length} pairs; CCM directions converging: ${converging} of ${result.ccm.length}` +
-          (parsed.diagnostics.length > 0 ? `; ${parsed.diagnostics.length} row problems (see dynamics.json)` : '') +
+          (diagnostics.length > 0 ? `; ${diagnostics.length} row problems (see dynamics.json)` : '') +
           `\nout: ${out}\n`,
       );
     });

@@ -15,11 +15,12 @@ export function registerRun(program: Command): void {
     .option('--seed <n>', 'seed for bootstrap and surrogate draws', '20261201')
     .action(async (studyPath: string, opts: Record<string, unknown>) => {
       const progress = progressReporter('scored');
-      const result = await runStudy(studyPath, { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update }).finally(progress.stop);
+      const result = await runStudy(studyPath, { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, env: process.env }).finally(progress.stop);
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;
       process.stderr.write(`series: ${s.persons} persons, ${s.bins} bins, ${s.observed} observed\n`);
-      for (const [name, stage] of Object.entries(result.stages)) process.stderr.write(`${name}: ${stage.outputs.map((o) => o.path).join(', ')}\n`);
+      for (const [name, stage] of Object.entries(result.stages)) process.stderr.write(`${name}: ${stage.outputs.length} files\n`);
+      if (result.report) process.stderr.write(`report: ${relative(process.cwd(), result.report.path)}\n`);
       process.stdout.write(`outputs in ${relative(process.cwd(), result.outDir) || '.'}/ (manifest.json lists every file with its SHA-256)\n`);
       const study = result.manifest.parameters.study as { maxRejects: string };
       if (tooManyRejects(result.score.reconciliation, parseMaxRejects(study.maxRejects))) {

@@ -39,7 +39,7 @@ export function parseSeriesCsv(text: string, file = 'series-long.csv'): ParsedSe
   };
   interface Building {
     person: string;
-    rows: Map<number, { values: (number | undefined)[]; lagValid: boolean; missing: string; binOfDay: number | undefined }>;
+    rows: Map<number, { values: (number | undefined)[]; lagValid: boolean; missing: string; binOfDay: number | undefined; binStart: string }>;
   }
   const byPerson = new Map<string, Building>();
   table.rows.forEach((row, r) => {
@@ -65,7 +65,7 @@ export function parseSeriesCsv(text: string, file = 'series-long.csv'): ParsedSe
     if (building.rows.has(t)) {
       diagnostics.push({ code: 'duplicate_bin', message: `person \`${person}\` has bin t = ${t} twice; the later row is kept`, source: { file, line }, stage: 'dynamics' });
     }
-    building.rows.set(t, { values, lagValid: cell(row, 'lag_valid') === '1', missing: cell(row, 'missing'), binOfDay: Number.isInteger(binOfDay) && binOfDay > 0 ? binOfDay : undefined });
+    building.rows.set(t, { values, lagValid: cell(row, 'lag_valid') === '1', missing: cell(row, 'missing'), binOfDay: Number.isInteger(binOfDay) && binOfDay > 0 ? binOfDay : undefined, binStart: cell(row, 'bin_start') });
     byPerson.set(person, building);
   });
   const persons: PersonSeriesInput[] = [...byPerson.values()].map(({ person, rows }) => {
@@ -74,6 +74,7 @@ export function parseSeriesCsv(text: string, file = 'series-long.csv'): ParsedSe
     const lagValid = new Array<boolean>(length).fill(false);
     const missing = new Array<string>(length).fill('absent');
     const binOfDay: number[] = new Array<number>(length).fill(0);
+    const binStart: string[] = new Array<string>(length).fill('');
     let allBinOfDay = true;
     for (let t = 0; t < length; t++) {
       const row = rows.get(t);
@@ -84,10 +85,11 @@ export function parseSeriesCsv(text: string, file = 'series-long.csv'): ParsedSe
       scores.forEach((s, c) => ((values[s] as (number | undefined)[])[t] = row.values[c]));
       lagValid[t] = row.lagValid && t > 0 && rows.has(t - 1);
       missing[t] = row.missing;
+      binStart[t] = row.binStart;
       if (row.binOfDay === undefined) allBinOfDay = false;
       else binOfDay[t] = row.binOfDay;
     }
-    return { person, t: Array.from({ length }, (_, t) => t), values, lagValid, missing, ...(allBinOfDay ? { binOfDay } : {}) };
+    return { person, t: Array.from({ length }, (_, t) => t), values, lagValid, missing, binStart, ...(allBinOfDay ? { binOfDay } : {}) };
   });
   return { persons, scores, diagnostics };
 }

@@ -26,4 +26,6 @@ export interface PersonSeriesInput {
   missing?: readonly string[];
   /** 1-based bin number within the local day, when known (used for seasonal surrogates). */
   binOfDay?: readonly number[];
+  /** Local start of each bin as written in the series file (`bin_start`), when known. */
+  binStart?: readonly string[];
 }

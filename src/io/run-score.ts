@@ -11,7 +11,7 @@ import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { csvRow } from '../report/csv.js';
 import { scoreRow, scoresHeader } from '../report/score-rows.js';
 import { scoreColumns, scoreEntry, type ScoreColumn } from '../score/score-entry.js';
-import type { Diagnostic, LexiconRef, Reconciliation, ScoredEntry } from '../types.js';
+import type { Diagnostic, LexiconRef, RawEntry, Reconciliation, ScoredEntry } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
 
@@ -36,8 +36,10 @@ export interface RunScoreOptions {
   person?: (id: string) => string;
   /** Called every 1,000 rows with the rows read so far. */
   onProgress?: (rows: number) => void;
-  /** Also receives each scored entry (for the series stage of `run`). */
+  /** Also receives each scored entry. */
   onEntry?: (entry: ScoredEntry) => void;
+  /** Also receives each entry with its text, after pseudonymization and before scoring (for the term audit of `run`). */
+  onRawEntry?: (entry: RawEntry) => void;
 }
 
 /** Description of an input file for the manifest. */
@@ -105,6 +107,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
         }
         const entry = item.entry;
         entry.person = mapPerson(entry.person);
+        options.onRawEntry?.(entry);
         const scored = scoreEntry(entry, options.lexicons, keepText);
         if (keepText && scored.text !== undefined && options.redact) scored.text = options.redact(scored.text);
         reconciliation.scored++;

@@ -50,6 +50,8 @@ export interface RunValidateOptions {
   /** Output folder. */
   out: string;
   validate?: Partial<ValidateOptions>;
+  /** Maps self-report person ids as the text's were mapped (pseudonymization), so both sides match. */
+  person?: (id: string) => string;
 }
 
 /** What {@link runValidate} wrote. */
@@ -66,7 +68,7 @@ export interface RunValidateResult {
 }
 
 /** Reads the self-report file into ratings and diagnostics (row rejects and value rejects). */
-export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number }> {
+export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales' | 'person'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number }> {
   const scales = typeof options.scales === 'string' ? parseRatingScales(options.scales) : options.scales;
   const mapping = typeof options.columns === 'string' || options.columns === undefined ? parseColumnMapping(options.columns) : options.columns;
   const time = options.time ?? DEFAULT_TIME_OPTIONS;
@@ -101,7 +103,7 @@ export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 
     const { values, diagnostics: valueProblems } = ratingValues(item.record, ratingCols, scales, item.source);
     diagnostics.push(...valueProblems);
     const e = parsed.entry;
-    ratings.push({ person: e.person, instant: e.instant, zone: e.zone, offsetMinutes: e.offsetMinutes, values, source: item.source });
+    ratings.push({ person: options.person ? options.person(e.person) : e.person, instant: e.instant, zone: e.zone, offsetMinutes: e.offsetMinutes, values, source: item.source });
   }
   if (!columns) throw inputError(`Cannot read \`${file}\`: it holds no self-reports.`);
   return { ratings, columns: ratingCols, diagnostics, read };

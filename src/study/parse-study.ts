@@ -1,3 +1,5 @@
+import { auditSettings, dynamicsSettings, ratingsSettings, reportSettings, type AuditSettings, type DynamicsSettings, type RatingsSettings, type ReportSettings } from './stage-settings.js';
+
 /**
  * The study file of `lexichron run`: one JSON document naming inputs, zones, lexicons and the
  * settings of every stage. This module validates it and reports each problem with its JSON path.
@@ -33,14 +35,14 @@ export interface Study {
   keepText: boolean;
   maxRejects: string;
   series: StudySeries;
-  /** Self-reports and validation settings (see docs/readme/validate.md). */
-  ratings?: Record<string, unknown>;
+  /** Self-reports and validation settings (see docs/readme/validate.md); absent: no validation. */
+  ratings?: RatingsSettings;
   /** Dynamics settings (see docs/readme/dynamics.md); `false` skips the stage. */
-  dynamics?: Record<string, unknown> | false;
+  dynamics: DynamicsSettings | false;
   /** Term-audit settings; `false` skips it. */
-  audit?: Record<string, unknown> | false;
+  audit: AuditSettings | false;
   /** Report settings; `false` skips the report. */
-  report?: Record<string, unknown> | false;
+  report: ReportSettings | false;
   /** Privacy settings: pseudonymization key file or environment variable, redaction names. */
   privacy?: { keyFile?: string; keyEnv?: string; names?: string[] };
   out: string;
@@ -146,8 +148,13 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   for (const key of ['minWords', 'maxFill']) need(series[key] === undefined || (Number.isInteger(series[key]) && (series[key] as number) >= 0), `$.series.${key}`, 'expected a whole number ≥ 0');
   need(series.fill === undefined || ['none', 'carry', 'linear'].includes(series.fill as string), '$.series.fill', 'expected none, carry or linear');
   need(series.detrend === undefined || typeof series.detrend === 'boolean', '$.series.detrend', 'expected true or false');
-  for (const key of ['ratings']) need(json[key] === undefined || isObject(json[key]), `$.${key}`, 'expected an object');
+  need(json.ratings === undefined || isObject(json.ratings), '$.ratings', 'expected an object such as {"path": "ratings.csv", "scales": {"mood": [0, 100]}}');
   for (const key of ['dynamics', 'audit', 'report']) need(json[key] === undefined || json[key] === false || isObject(json[key]), `$.${key}`, 'expected an object of settings, or false to skip the stage');
+  const ratings = isObject(json.ratings) ? ratingsSettings(json.ratings, problems) : undefined;
+  const stage = <T>(value: unknown, settings: (v: Record<string, unknown>, p: StudyProblem[]) => T): T | false => (value === false ? false : settings(isObject(value) ? value : {}, problems));
+  const dynamics = stage(json.dynamics, dynamicsSettings);
+  const audit = stage(json.audit, auditSettings);
+  const report = stage(json.report, reportSettings);
   if (json.privacy !== undefined) {
     if (!isObject(json.privacy)) problems.push({ path: '$.privacy', message: 'expected an object {"keyFile": …} or {"keyEnv": …}' });
     else {
@@ -185,10 +192,10 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
         from: series.from as string | undefined,
         to: series.to as string | undefined,
       },
-      ratings: json.ratings as Record<string, unknown> | undefined,
-      dynamics: json.dynamics as Study['dynamics'],
-      audit: json.audit as Study['audit'],
-      report: json.report as Study['report'],
+      ratings,
+      dynamics,
+      audit,
+      report,
       privacy: json.privacy as Study['privacy'],
       out: json.out as string,
     },
