@@ -37,6 +37,7 @@ import { parseClockTime } from './series/bin-spec.js';
 import { dateOfDayNumber, localDayOf } from './series/local-day.js';
 import { writeStudyAudit } from './io/write-study-audit.js';
 import { writeReport, type WriteReportResult } from './io/write-report.js';
+import { studyInput } from './io/study-input.js';
 import { TOOL_VERSION } from './version.js';
 
 /** What a stage after the series contributes to the outputs. */
@@ -142,12 +143,7 @@ export async function runStudy(
   const auditors = study.audit === false ? [] : lexicons.filter((l) => l.scoring === 'rules').map((l) => ({ lexicon: l, auditor: termAuditor(l, { random: random(options.seed ?? DEFAULT_SEED), redact, maxShare: (study.audit as AuditSettings).maxShare, minPersons: (study.audit as AuditSettings).minPersons }) }));
   const dayStart = parseClockTime(study.series.dayStart);
   const score = await runScore({
-    inputs: study.inputs.map((i) => ({
-      path: at(i.path),
-      format: i.format,
-      delimiter: i.delimiter,
-      columns: i.columns ? { person: i.columns.person ?? 'person', time: i.columns.time ?? 'time', text: i.columns.text ?? 'text', id: i.columns.id, zone: i.columns.zone } : undefined,
-    })),
+    inputs: study.inputs.map((i, n) => studyInput(i, at(i.path), zones, time, `$.inputs[${n}]`)),
     lexicons,
     zones,
     time,

@@ -11,7 +11,7 @@ import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { csvRow } from '../report/csv.js';
 import { scoreRow, scoresHeader } from '../report/score-rows.js';
 import { scoreColumns, scoreEntry, type ScoreColumn } from '../score/score-entry.js';
-import type { Diagnostic, LexiconRef, RawEntry, Reconciliation, ScoredEntry } from '../types.js';
+import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
 
@@ -21,6 +21,11 @@ export interface ScoreInput {
   columns?: ColumnMapping | string;
   format?: TableFormat;
   delimiter?: string;
+  /**
+   * A source of items other than a table (a donated export through an importer): entries,
+   * rejects, and drops (third-party messages, duplicates) that are counted but never scored.
+   */
+  items?: () => Promise<AsyncIterable<ReadItem | { kind: 'drop'; reason: string; source: SourceRef }>>;
 }
 
 export interface RunScoreOptions {
@@ -97,10 +102,15 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     };
     for (const input of options.inputs) {
       let rows = 0;
-      for await (const item of readEntries(input.path, { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: options.zones, time: options.time })) {
+      const items = input.items ? await input.items() : readEntries(input.path, { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: options.zones, time: options.time });
+      for await (const item of items) {
         rows++;
         reconciliation.read++;
         if (reconciliation.read % 1000 === 0) options.onProgress?.(reconciliation.read);
+        if (item.kind === 'drop') {
+          reconciliation.dropped[item.reason] = (reconciliation.dropped[item.reason] ?? 0) + 1;
+          continue;
+        }
         if (item.kind === 'reject') {
           await addReject(item.diagnostic);
           continue;

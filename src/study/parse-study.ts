@@ -5,11 +5,32 @@ import { auditSettings, dynamicsSettings, ratingsSettings, reportSettings, type 
  * settings of every stage. This module validates it and reports each problem with its JSON path.
  */
 
+/** Formats read through an importer (donated exports) rather than as a table. */
+export const STUDY_IMPORT_FORMATS = ['mbox', 'diary', 'chat-lines', 'chat-table'] as const;
+
 export interface StudyInput {
   path: string;
-  format?: 'csv' | 'tsv' | 'jsonl' | 'json';
+  format?: 'csv' | 'tsv' | 'jsonl' | 'json' | (typeof STUDY_IMPORT_FORMATS)[number];
   columns?: Record<string, string>;
   delimiter?: string;
+  /** Donated exports: the participant the file belongs to. */
+  person?: string;
+  /** mbox: the participant's addresses. */
+  addresses?: string[];
+  /** chat-lines, chat-table: the participant's sender names (everyone else's messages are dropped). */
+  senders?: string[];
+  dateOrder?: 'dmy' | 'mdy';
+  heading?: string;
+  dateFormat?: string;
+  locale?: string;
+  senderField?: string;
+  timeField?: string;
+  textField?: string;
+  timeFormat?: string;
+  /** Drop exact and near-duplicate entries. */
+  dedupe?: boolean;
+  /** Merge messages within this many minutes into one entry. */
+  mergeBurstMinutes?: number;
 }
 
 export interface StudySeries {
@@ -54,7 +75,7 @@ export interface StudyProblem {
 }
 
 const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
-const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter'];
+const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
 const TIME_KEYS = ['format', 'epoch', 'dstGap', 'dstOverlap'];
 const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to'];
 const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names'];
@@ -115,7 +136,18 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
       }
       unknownKeys(input, INPUT_KEYS, p, problems);
       need(str(input.path), `${p}.path`, 'expected the path of a CSV, TSV, JSON Lines or JSON file');
-      need(input.format === undefined || ['csv', 'tsv', 'jsonl', 'json'].includes(input.format as string), `${p}.format`, 'expected one of csv, tsv, jsonl, json');
+      const formats = ['csv', 'tsv', 'jsonl', 'json', ...STUDY_IMPORT_FORMATS];
+      need(input.format === undefined || formats.includes(input.format as string), `${p}.format`, `expected one of ${formats.join(', ')}`);
+      const imported = (STUDY_IMPORT_FORMATS as readonly string[]).includes(input.format as string);
+      if (imported) {
+        need(str(input.person), `${p}.person`, `a ${String(input.format)} export belongs to one participant: name them with "person"`);
+        if (input.format === 'mbox') need(Array.isArray(input.addresses) && input.addresses.length > 0 && input.addresses.every(str), `${p}.addresses`, 'expected the participant\'s e-mail addresses, e.g. ["ana@example.org"]');
+        if (input.format === 'chat-lines' || input.format === 'chat-table') need(Array.isArray(input.senders) && input.senders.length > 0 && input.senders.every(str), `${p}.senders`, 'expected the participant\'s sender names as they appear in the export, e.g. ["Ana"]');
+      }
+      for (const key of ['person', 'heading', 'dateFormat', 'locale', 'senderField', 'timeField', 'textField', 'timeFormat']) need(input[key] === undefined || str(input[key]), `${p}.${key}`, 'expected a string');
+      need(input.dateOrder === undefined || input.dateOrder === 'dmy' || input.dateOrder === 'mdy', `${p}.dateOrder`, 'expected dmy or mdy');
+      need(input.dedupe === undefined || typeof input.dedupe === 'boolean', `${p}.dedupe`, 'expected true or false');
+      need(input.mergeBurstMinutes === undefined || (typeof input.mergeBurstMinutes === 'number' && input.mergeBurstMinutes > 0), `${p}.mergeBurstMinutes`, 'expected a number of minutes > 0');
       if (input.columns !== undefined) {
         if (!isObject(input.columns)) problems.push({ path: `${p}.columns`, message: 'expected an object such as {"person": "participant", "time": "sent_at", "text": "body"}' });
         else {
