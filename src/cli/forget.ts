@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import type { Command } from 'commander';
 import { forgetPerson } from '../io/forget-person.js';
+import { writeReport } from '../io/write-report.js';
 import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
 import { pseudonymizePerson } from '../privacy/pseudonymize-person.js';
 
@@ -23,7 +24,18 @@ export function registerForget(program: Command): void {
       for (const c of result.changed) lines.push(`removed ${c.removed} row(s) from ${c.file}`);
       for (const d of result.deleted) lines.push(`deleted ${d}`);
       if (result.changed.length === 0 && result.deleted.length === 0) lines.push('no output held this person');
-      for (const s of result.stale) lines.push(`STILL MENTIONS THE PERSON (regenerate or delete it): ${s}`);
+      // The report is rebuilt from the cleaned files; other stale files are named for the researcher.
+      const stale = [];
+      for (const s of result.stale) {
+        if (s === 'report.html') {
+          await writeReport(String(opts.study));
+          lines.push('rebuilt report.html from the remaining outputs');
+        } else stale.push(s);
+      }
+      for (const s of stale) lines.push(`STILL MENTIONS THE PERSON (regenerate or delete it): ${s}`);
+      if (result.changed.length > 0 || result.deleted.length > 0) {
+        lines.push('note: statistics pooled over persons (validation statistics, pooled VAR, term-audit counts) still include this person; remove their input and run the study again to recompute them.');
+      }
       process.stderr.write(`${lines.join('\n')}\n`);
     });
 }

@@ -6,6 +6,7 @@ import { usageError } from '../errors.js';
 import { createPersonRowFilter } from '../privacy/create-person-row-filter.js';
 import { removePersonFromJson } from '../privacy/remove-person-from-json.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
+import { fileDigest } from './run-score.js';
 
 /** What to forget and how to record it. */
 export interface ForgetOptions {
@@ -139,6 +140,20 @@ export async function forgetPerson(dir: string, options: ForgetOptions): Promise
     }
   } catch {
     // no manifest yet: start one that holds the record
+  }
+  // Outputs listed in the manifest: fresh hashes for rewritten files, deleted files dropped.
+  if (Array.isArray(manifest.outputs)) {
+    const changed = new Set(result.changed.map((c) => c.file));
+    const deleted = new Set(result.deleted);
+    const outputs: unknown[] = [];
+    for (const output of manifest.outputs as Array<{ path?: string; sha256?: string; bytes?: number }>) {
+      if (typeof output?.path !== 'string' || deleted.has(output.path)) continue;
+      if (changed.has(output.path) && output.sha256 !== undefined) {
+        const d = await fileDigest(join(dir, output.path));
+        outputs.push({ ...output, sha256: d.sha256, bytes: d.bytes });
+      } else outputs.push(output);
+    }
+    manifest.outputs = outputs;
   }
   const forgotten = Array.isArray(manifest.forgotten) ? (manifest.forgotten as unknown[]) : [];
   forgotten.push({ person: options.record, at: options.at, files: [...result.changed.map((c) => c.file), ...result.deleted].sort() });

@@ -20,8 +20,8 @@ export interface Manifest {
   reconciliation?: Reconciliation;
   stages: Record<string, unknown>;
   outputs: FileRecord[];
-  /** Persons removed after the run (withdrawal of consent): pseudonymous id and time. */
-  removals: Array<{ person: string; at: string; files: string[] }>;
+  /** Persons removed after the run by `lexichron forget` (withdrawal of consent): pseudonymous record, time, files changed. */
+  forgotten: Array<{ person: string; at: string; files: string[] }>;
   cautions: string[];
 }
 
@@ -34,7 +34,7 @@ export const CAUTIONS: readonly string[] = [
 ];
 
 /** Builds a manifest; `created` comes from the caller (the clock is read only at the edge). */
-export function buildManifest(fields: Omit<Manifest, 'tool' | 'removals' | 'cautions'> & { version: string }): Manifest {
+export function buildManifest(fields: Omit<Manifest, 'tool' | 'forgotten' | 'cautions'> & { version: string }): Manifest {
   const { version, ...rest } = fields;
-  return { tool: { name: 'lexichron', version }, ...rest, removals: [], cautions: [...CAUTIONS] };
+  return { tool: { name: 'lexichron', version }, ...rest, forgotten: [], cautions: [...CAUTIONS] };
 }
