@@ -4,6 +4,7 @@ import { usageError } from '../errors.js';
 import type { DedupeOptions } from '../ingest/import/create-deduplicator.js';
 import { IMPORT_FORMATS, type ImportFormat } from '../io/open-import-source.js';
 import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
+import { readNamesFile } from '../io/read-names-file.js';
 import { runImport } from '../io/run-import.js';
 import { createRedactor } from '../privacy/create-redactor.js';
 import { pseudonymizePerson } from '../privacy/pseudonymize-person.js';
@@ -17,18 +18,6 @@ function positiveNumber(name: string, value: unknown): number | undefined {
   const n = Number(value);
   if (!Number.isFinite(n) || n < 0) throw usageError(`${name} \`${String(value)}\` is not a number of 0 or more`);
   return n;
-}
-
-/** Reads a names file for redaction: one name per line, `#` starts a comment line. */
-async function readNames(path: string | undefined): Promise<string[]> {
-  if (path === undefined) return [];
-  let text: string;
-  try {
-    text = await readFile(path, 'utf8');
-  } catch (error) {
-    throw usageError(`Cannot read the names file \`${path}\`: ${(error as Error).message}; pass a text file with one name per line to --redact-names.`);
-  }
-  return text.split(/\r?\n/).map((l) => l.trim()).filter((l) => l !== '' && !l.startsWith('#'));
 }
 
 /** `lexichron import FORMAT INPUT --person ID --time-zone ZONE --out entries.jsonl` */
@@ -63,7 +52,7 @@ export function registerImport(program: Command): void {
     .action(async (format: ImportFormat, input: string, opts: Record<string, unknown>) => {
       const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
       const person = key ? pseudonymizePerson(String(opts.person), key) : String(opts.person);
-      const names = await readNames(opts.redactNames as string | undefined);
+      const names = await readNamesFile(opts.redactNames as string | undefined);
       const redactor = createRedactor({ names });
       const nameOnly = createRedactor({ emails: false, phones: false, urls: false, handles: false, names });
       const redact = opts.redact === false ? (names.length > 0 ? nameOnly : undefined) : redactor;

@@ -3,6 +3,10 @@ import { inputError, usageError } from '../errors.js';
 import { loadLexicons } from '../io/load-lexicon.js';
 import { readZoneFile } from '../io/read-zone-file.js';
 import { runScore } from '../io/run-score.js';
+import { readNamesFile } from '../io/read-names-file.js';
+import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
+import { createRedactor } from '../privacy/create-redactor.js';
+import { pseudonymizePerson } from '../privacy/pseudonymize-person.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { addTimeOptions, delimiterFrom, parseMaxRejects, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
 
@@ -16,7 +20,10 @@ export function registerScore(program: Command): void {
     .argument('<input...>', 'CSV, TSV, JSON Lines or JSON files with person, time and text')
     .option('-l, --lexicon <name-or-path>', 'a bundled lexicon name or a .lex.tsv file (repeatable; default afinn-165 and vader)', collect)
     .requiredOption('-o, --out <file>', 'scores CSV to write (rejects go to <file>.rejects.csv, provenance to <file>.meta.json)')
-    .option('--keep-text', 'also write each entry\'s text (off by default: outputs hold no raw text)')
+    .option('--keep-text', 'also write each entry\'s text, redacted (off by default: outputs hold no raw text)')
+    .option('--redact-names <file>', 'names (one per line) replaced by [name] in kept text; emails, phone numbers, URLs and @handles are always redacted')
+    .option('--aggregates-only', 'write no participant text at all (refuses --keep-text)')
+    .option('--pseudonym-key-file <file>', `pseudonymize person ids with a keyed hash (default key: the ${PSEUDONYM_KEY_ENV} environment variable, when set)`)
     .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%');
   addTimeOptions(command);
   command.addOption(new Option('--strict', 'exit with code 3 on the first rejected row\'s count (same as --max-rejects 0)'));
@@ -24,6 +31,9 @@ export function registerScore(program: Command): void {
     if (!opts.timeZone && !opts.zones) {
       throw usageError('No time zone given: times without an offset need the person\'s zone; pass --time-zone ZONE (e.g. Europe/Brussels) or --zones FILE.');
     }
+    if (opts.aggregatesOnly && opts.keepText) throw usageError('--aggregates-only and --keep-text contradict each other: drop one.');
+    const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
+    const redact = createRedactor({ names: await readNamesFile(opts.redactNames as string | undefined) });
     const limit = opts.strict ? { count: 0 } : parseMaxRejects(String(opts.maxRejects));
     const lexicons = await loadLexicons((opts.lexicon as string[] | undefined) ?? ['afinn-165', 'vader']);
     const zones = await readZoneFile(opts.zones as string | undefined, opts.timeZone as string | undefined);
@@ -34,7 +44,9 @@ export function registerScore(program: Command): void {
       zones,
       time: timeOptionsFrom(opts),
       out: String(opts.out),
-      keepText: opts.keepText === true,
+      keepText: opts.keepText === true && opts.aggregatesOnly !== true,
+      redact,
+      ...(key ? { person: (id: string) => pseudonymizePerson(id, key) } : {}),
       onProgress: progress.update,
     }).finally(progress.stop);
     process.stderr.write(`${reconciliationText(result.reconciliation)}\n`);

@@ -65,7 +65,7 @@ export interface Study {
   /** Report settings; `false` skips the report. */
   report: ReportSettings | false;
   /** Privacy settings: pseudonymization key file or environment variable, redaction names. */
-  privacy?: { keyFile?: string; keyEnv?: string; names?: string[] };
+  privacy?: { keyFile?: string; keyEnv?: string; names?: string[]; aggregatesOnly?: boolean };
   out: string;
 }
 
@@ -78,7 +78,7 @@ const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'ke
 const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
 const TIME_KEYS = ['format', 'epoch', 'dstGap', 'dstOverlap'];
 const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to'];
-const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names'];
+const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names', 'aggregatesOnly'];
 
 /** Levenshtein distance, for "did you mean" hints. */
 function distance(a: string, b: string): number {
@@ -192,6 +192,8 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
     else {
       unknownKeys(json.privacy, PRIVACY_KEYS, '$.privacy', problems);
       need(json.privacy.names === undefined || (Array.isArray(json.privacy.names) && json.privacy.names.every(str)), '$.privacy.names', 'expected an array of names to redact');
+      need(json.privacy.aggregatesOnly === undefined || typeof json.privacy.aggregatesOnly === 'boolean', '$.privacy.aggregatesOnly', 'expected true or false');
+      need(!(json.privacy.aggregatesOnly === true && json.keepText === true), '$.privacy.aggregatesOnly', 'aggregatesOnly forbids keepText: drop one of them');
     }
   }
   need(str(json.out), '$.out', 'expected the output folder, e.g. "out"');

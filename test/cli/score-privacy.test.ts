@@ -1,0 +1,57 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it, vi } from 'vitest';
+import { main } from '../../src/cli/main.js';
+import { pseudonymizePerson } from '../../src/privacy/pseudonymize-person.js';
+import { tempFolder } from '../support/temp-files.js';
+
+const tmp = tempFolder();
+
+async function cli(...args: string[]): Promise<{ code: number; stderr: string }> {
+  let stderr = '';
+  const spy = vi.spyOn(process.stderr, 'write').mockImplementation((chunk: string | Uint8Array) => {
+    stderr += String(chunk);
+    return true;
+  });
+  try {
+    return { code: await main(['node', 'lexichron', ...args]), stderr };
+  } finally {
+    spy.mockRestore();
+    process.exitCode = undefined;
+  }
+}
+
+const input = [
+  'person,time,text',
+  'p1,2026-03-02T09:00:00+01:00,"Great day with Marta, mail me at marta.v@example.org or call +32 470 12 34 56"',
+  'p1,2026-03-02T12:00:00+01:00,see https://example.org/x and ping @marta_v',
+  '',
+].join('\n');
+
+describe('privacy of score outputs', () => {
+  it('redacts e-mail addresses, phone numbers, URLs, handles and listed names from --keep-text', async () => {
+    tmp.write('in.csv', input);
+    tmp.write('names.txt', '# people to redact\nMarta\n');
+    const { code } = await cli('score', tmp.path('in.csv'), '--time-zone', 'Europe/Brussels', '-l', 'afinn-165', '--keep-text', '--redact-names', tmp.path('names.txt'), '-o', tmp.path('kept.csv'));
+    expect(code).toBe(0);
+    const out = readFileSync(tmp.path('kept.csv'), 'utf8');
+    expect(out).not.toMatch(/Marta|marta|example\.org|470/);
+    expect(out).toContain('[name]');
+    expect(out).toContain('[email]');
+    expect(out).toContain('[phone]');
+    expect(out).toContain('[url]');
+    expect(out).toContain('[handle]');
+  });
+
+  it('writes HMAC-SHA256 pseudonyms instead of person ids when a key is given, and refuses --aggregates-only with --keep-text', async () => {
+    tmp.write('in.csv', input);
+    tmp.write('key.txt', 'a-long-study-key-kept-apart-from-data');
+    const { code } = await cli('score', tmp.path('in.csv'), '--time-zone', 'Europe/Brussels', '-l', 'afinn-165', '--pseudonym-key-file', tmp.path('key.txt'), '-o', tmp.path('p.csv'));
+    expect(code).toBe(0);
+    const rows = readFileSync(tmp.path('p.csv'), 'utf8').trim().split('\n').slice(1);
+    const expected = pseudonymizePerson('p1', Buffer.from('a-long-study-key-kept-apart-from-data'));
+    expect(rows.map((r) => r.split(',')[1])).toEqual([expected, expected]);
+    const refused = await cli('score', tmp.path('in.csv'), '--time-zone', 'UTC', '--keep-text', '--aggregates-only', '-o', tmp.path('x.csv'));
+    expect(refused.code).toBe(2);
+    expect(refused.stderr).toContain('--aggregates-only and --keep-text');
+  });
+});
