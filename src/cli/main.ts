@@ -1,36 +1,41 @@
 import { Command, CommanderError } from 'commander';
 import { exitCodeFor, LexichronError } from '../errors.js';
 import { TOOL_VERSION } from '../version.js';
-import { registerLexicons } from './lexicons.js';
-import { registerScore } from './score.js';
-import { registerSeries } from './series.js';
-import { registerDynamics } from './dynamics.js';
-import { registerRun } from './run.js';
-import { registerImport } from './import.js';
-import { registerForget } from './forget.js';
-import { registerValidate } from './validate.js';
-import { registerReport } from './report.js';
-import { registerTerms } from './terms.js';
-
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
-const commands: Register[] = [registerRun, registerScore, registerSeries, registerValidate, registerLexicons, registerDynamics, registerImport, registerForget, registerReport, registerTerms];
+/**
+ * The commands, in help order, each loaded only when needed: a run of one command imports
+ * that command's code alone (start-up stays short), while help and unknown commands load all.
+ */
+const COMMANDS: ReadonlyArray<[string, () => Promise<Register>]> = [
+  ['run', async () => (await import('./run.js')).registerRun],
+  ['score', async () => (await import('./score.js')).registerScore],
+  ['series', async () => (await import('./series.js')).registerSeries],
+  ['validate', async () => (await import('./validate.js')).registerValidate],
+  ['dynamics', async () => (await import('./dynamics.js')).registerDynamics],
+  ['terms', async () => (await import('./terms.js')).registerTerms],
+  ['import', async () => (await import('./import.js')).registerImport],
+  ['forget', async () => (await import('./forget.js')).registerForget],
+  ['report', async () => (await import('./report.js')).registerReport],
+  ['lexicons', async () => (await import('./lexicons.js')).registerLexicons],
+];
 
-/** Builds the commander program with every command registered. */
-export function buildProgram(): Command {
+/** Builds the commander program; with `only`, registers just that command when it exists. */
+export async function buildProgram(only?: string): Promise<Command> {
   const program = new Command('lexichron')
     .description('Per-person affect time series from timestamped text, validated against self-reports.')
     .version(TOOL_VERSION)
     .showHelpAfterError('(run with --help for the options)')
     .exitOverride();
-  for (const register of commands) register(program);
+  const chosen = COMMANDS.filter(([name]) => name === only);
+  for (const [, load] of chosen.length > 0 ? chosen : COMMANDS) (await load())(program);
   return program;
 }
 
 /** Runs the command line; returns the exit code (0 ok, 1 internal, 2 usage, 3 bad input data). */
 export async function main(argv: string[]): Promise<number> {
-  const program = buildProgram();
+  const program = await buildProgram(argv[2]);
   try {
     await program.parseAsync(argv);
     return typeof process.exitCode === 'number' ? process.exitCode : 0;

@@ -12,6 +12,13 @@ import { addTimeOptions, delimiterFrom, parseMaxRejects, progressReporter, timeO
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
 
+/** `--workers`: `auto` or a whole number from 0 to 16. */
+function parseWorkers(value: string): number | 'auto' {
+  if (value === 'auto') return 'auto';
+  if (!/^\d+$/.test(value) || Number(value) > 16) throw usageError(`--workers \`${value}\` must be auto or a whole number from 0 to 16.`);
+  return Number(value);
+}
+
 /** `lexichron score INPUT... --lexicon NAME_OR_PATH... --out FILE` */
 export function registerScore(program: Command): void {
   const command = program
@@ -24,6 +31,7 @@ export function registerScore(program: Command): void {
     .option('--redact-names <file>', 'names (one per line) replaced by [name] in kept text; emails, phone numbers, URLs and @handles are always redacted')
     .option('--aggregates-only', 'write no participant text at all (refuses --keep-text)')
     .option('--pseudonym-key-file <file>', `pseudonymize person ids with a keyed hash (default key: the ${PSEUDONYM_KEY_ENV} environment variable, when set)`)
+    .option('--workers <n>', 'scoring threads besides the one that reads and writes: a number (0 = none) or auto (by input size and cores)', 'auto')
     .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%');
   addTimeOptions(command);
   command.addOption(new Option('--strict', 'exit with code 3 on the first rejected row\'s count (same as --max-rejects 0)'));
@@ -47,6 +55,7 @@ export function registerScore(program: Command): void {
       keepText: opts.keepText === true && opts.aggregatesOnly !== true,
       redact,
       ...(key ? { person: (id: string) => pseudonymizePerson(id, key) } : {}),
+      workers: parseWorkers(String(opts.workers)),
       onProgress: progress.update,
     }).finally(progress.stop);
     process.stderr.write(`${reconciliationText(result.reconciliation)}\n`);

@@ -25,7 +25,8 @@ export async function writeFileAtomic(path: string, content: string | Uint8Array
 
 /** A line writer that streams to a temporary file; `commit` renames it into place, `abort` removes it. */
 export interface AtomicLineWriter {
-  write(line: string): Promise<void>;
+  /** Appends a line; returns a promise only when the buffer was flushed and the stream needs draining. */
+  write(line: string): Promise<void> | undefined;
   commit(): Promise<void>;
   abort(): Promise<void>;
 }
@@ -45,10 +46,10 @@ export async function openAtomicLineWriter(path: string): Promise<AtomicLineWrit
     if (!stream.write(chunk)) await new Promise<void>((resolve) => stream.once('drain', () => resolve()));
   };
   return {
-    async write(line: string) {
+    write(line: string) {
       buffer.push(line, '\n');
       size += line.length + 1;
-      if (size > 1 << 16) await flush();
+      return size > 1 << 18 ? flush() : undefined;
     },
     async commit() {
       await flush();

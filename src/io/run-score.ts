@@ -9,8 +9,10 @@ import type { TableFormat } from '../ingest/read-records.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { csvRow } from '../report/csv.js';
-import { scoreRow, scoresHeader } from '../report/score-rows.js';
-import { scoreColumns, scoreEntry, type ScoreColumn } from '../score/score-entry.js';
+import { scoreRowWriter, scoresHeader } from '../report/score-rows.js';
+import { scoreColumns, scoredEntryFrom, type ScoreColumn } from '../score/score-entry.js';
+import { scoreTexts, type BatchScores } from '../score/score-text.js';
+import { autoWorkers, createScorePool, type ScorePool } from './score-pool.js';
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
@@ -41,6 +43,8 @@ export interface RunScoreOptions {
   person?: (id: string) => string;
   /** Called every 1,000 rows with the rows read so far. */
   onProgress?: (rows: number) => void;
+  /** Scoring workers: a number (0 = score in this thread) or `auto` (the default: by input size and cores). */
+  workers?: number | 'auto';
   /** Also receives each scored entry. */
   onEntry?: (entry: ScoredEntry) => void;
   /** Also receives each entry with its text, after pseudonymization and before scoring (for the term audit of `run`). */
@@ -64,6 +68,9 @@ export interface RunScoreResult {
   rejectsPath: string;
   metaPath: string;
 }
+
+/** Entries per scoring batch. */
+const BATCH_SIZE = 256;
 
 /** Where the rejects and the sidecar of a scores file go. */
 export function scoreSidecars(out: string): { rejects: string; meta: string } {
@@ -93,12 +100,52 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
   const reconciliation: Reconciliation = { read: 0, scored: 0, rejected: {}, dropped: {} };
   const inputs: InputRecord[] = [];
   const mapPerson = options.person ?? ((id: string) => id);
+  const formatRow = scoreRowWriter(columns, options.lexicons, keepText);
+  let pool: ScorePool | undefined;
   try {
     await scores.write(csvRow(scoresHeader(columns, options.lexicons, keepText)));
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
     const addReject = async (d: Diagnostic): Promise<void> => {
       reconciliation.rejected[d.code] = (reconciliation.rejected[d.code] ?? 0) + 1;
       await rejects.write(csvRow([d.source?.file ?? '', String(d.source?.line ?? ''), d.stage, d.code, d.message]));
+    };
+    let workers = options.workers ?? 0;
+    if (options.workers === undefined || options.workers === 'auto') {
+      let bytes = 0;
+      for (const input of options.inputs) bytes += await stat(input.path).then((s) => s.size, () => 0);
+      workers = autoWorkers(bytes);
+    }
+    pool = createScorePool(options.lexicons, workers as number);
+    // Entries are scored in batches and written in input order. With workers, each takes up to two
+    // batches at a time and this thread scores the batches in between instead of waiting, so both
+    // cores stay busy; at most a few batches are in flight, so memory stays bounded.
+    const inflight: Array<{ entries: RawEntry[]; scores: Promise<BatchScores> }> = [];
+    let batch: RawEntry[] = [];
+    let atWorkers = 0;
+    const maxInflight = pool ? 4 * pool.size + 4 : 0;
+    const submit = (): void => {
+      if (batch.length === 0) return;
+      const entries = batch;
+      batch = [];
+      const texts = entries.map((e) => e.text);
+      if (pool) {
+        atWorkers++;
+        inflight.push({ entries, scores: pool.score(texts).finally(() => atWorkers--) });
+      } else inflight.push({ entries, scores: Promise.resolve(scoreTexts(texts, options.lexicons, columns.length)) });
+    };
+    const drain = async (keep: number): Promise<void> => {
+      while (inflight.length > keep) {
+        const { entries, scores: pendingScores } = inflight.shift() as (typeof inflight)[number];
+        const scored = await pendingScores;
+        for (let i = 0; i < entries.length; i++) {
+          const entry = scoredEntryFrom(entries[i] as RawEntry, scored, i, columns, options.lexicons, keepText);
+          if (keepText && entry.text !== undefined && options.redact) entry.text = options.redact(entry.text);
+          reconciliation.scored++;
+          options.onEntry?.(entry);
+          const pending = scores.write(formatRow(entry));
+          if (pending) await pending;
+        }
+      }
     };
     for (const input of options.inputs) {
       let rows = 0;
@@ -118,12 +165,14 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
         const entry = item.entry;
         entry.person = mapPerson(entry.person);
         options.onRawEntry?.(entry);
-        const scored = scoreEntry(entry, options.lexicons, keepText);
-        if (keepText && scored.text !== undefined && options.redact) scored.text = options.redact(scored.text);
-        reconciliation.scored++;
-        options.onEntry?.(scored);
-        await scores.write(scoreRow(scored, columns, options.lexicons, keepText));
+        batch.push(entry);
+        if (batch.length >= BATCH_SIZE) {
+          submit();
+          await drain(maxInflight);
+        }
       }
+      submit();
+      await drain(0);
       const digest = await fileDigest(input.path);
       inputs.push({ path: basename(input.path), bytes: digest.bytes, sha256: digest.sha256, rows });
     }
@@ -143,6 +192,8 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     await scores.abort();
     await rejects.abort();
     throw error;
+  } finally {
+    await pool?.close();
   }
   return {
     reconciliation,

@@ -34,6 +34,8 @@ export interface CompiledLexicon {
   stemLengths: number[];
   /** The first MIN_WILDCARD_STEM characters of every stem: a token whose start is not here matches no wildcard. */
   stemPrefixes: ReadonlySet<string>;
+  /** Single words and phrases by their (first) token, for one look-up per token when matching. */
+  starts: ReadonlyMap<string, { exact?: Hit; phrases?: Phrase[] }>;
   negation: NegationRule;
   negators: ReadonlySet<string>;
   window: number;
@@ -95,6 +97,9 @@ export function compileLexicon(lexicon: Lexicon): CompiledLexicon {
   for (const [first, byText] of phraseMap) phrases.set(first, [...byText.values()].sort((a, b) => b.tokens.length - a.tokens.length));
   const stemLengths = [...new Set([...wildcards.keys()].map((k) => k.length))].sort((a, b) => b - a);
   const stemPrefixes = new Set([...wildcards.keys()].map((k) => k.slice(0, MIN_WILDCARD_STEM)));
+  const starts = new Map<string, { exact?: Hit; phrases?: Phrase[] }>();
+  for (const [token, hit] of single) starts.set(token, { exact: hit });
+  for (const [token, list] of phrases) starts.set(token, { ...starts.get(token), phrases: list });
   return {
     ref: { name: lexicon.name, version: lexicon.version, sha256: lexiconHash(lexicon), license: lexicon.license, source: lexicon.source },
     lexicon,
@@ -106,6 +111,7 @@ export function compileLexicon(lexicon: Lexicon): CompiledLexicon {
     wildcards,
     stemLengths,
     stemPrefixes,
+    starts,
     negation: lexicon.negation,
     negators: new Set(lexicon.negators),
     window: lexicon.window,

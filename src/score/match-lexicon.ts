@@ -24,32 +24,45 @@ function isNegated(tokens: Tokens, at: number, lexicon: CompiledLexicon): boolea
   return false;
 }
 
-function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon): { hit: Hit; length: number } | undefined {
+/** Length in tokens of the last hit found by findHit (saves an allocation per hit on the hot path). */
+let hitLength = 1;
+
+function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon): Hit | undefined {
   const token = tokens.norm[i] as string;
-  const phrases = lexicon.phrases.get(token);
-  if (phrases) {
-    for (const phrase of phrases) {
-      const n = phrase.tokens.length;
-      if (i + n > tokens.norm.length) continue;
-      let ok = true;
-      for (let k = 1; k < n; k++) {
-        if (tokens.norm[i + k] !== phrase.tokens[k]) {
-          ok = false;
-          break;
+  const start = lexicon.starts.get(token);
+  if (start) {
+    if (start.phrases) {
+      for (const phrase of start.phrases) {
+        const n = phrase.tokens.length;
+        if (i + n > tokens.norm.length) continue;
+        let ok = true;
+        for (let k = 1; k < n; k++) {
+          if (tokens.norm[i + k] !== phrase.tokens[k]) {
+            ok = false;
+            break;
+          }
+        }
+        if (ok) {
+          hitLength = n;
+          return phrase;
         }
       }
-      if (ok) return { hit: phrase, length: n };
+    }
+    if (start.exact) {
+      hitLength = 1;
+      return start.exact;
     }
   }
-  const exact = lexicon.single.get(token);
-  if (exact) return { hit: exact, length: 1 };
   // Most tokens match no wildcard: one look-up of their first three characters rules that out
   // before a substring is cut for every stem length.
-  if (lexicon.stemLengths.length === 0 || !lexicon.stemPrefixes.has(token.slice(0, MIN_WILDCARD_STEM))) return undefined;
+  if (lexicon.stemLengths.length === 0 || token.length < MIN_WILDCARD_STEM || !lexicon.stemPrefixes.has(token.slice(0, MIN_WILDCARD_STEM))) return undefined;
   for (const len of lexicon.stemLengths) {
     if (token.length < len) continue;
     const wild = lexicon.wildcards.get(token.slice(0, len));
-    if (wild) return { hit: wild, length: 1 };
+    if (wild) {
+      hitLength = 1;
+      return wild;
+    }
   }
   return undefined;
 }
@@ -78,12 +91,12 @@ export function matchLexicon(tokens: Tokens, lexicon: CompiledLexicon, onHit?: H
       i++;
       continue;
     }
-    const found = findHit(tokens, i, lexicon);
-    if (!found) {
+    const hit = findHit(tokens, i, lexicon);
+    if (!hit) {
       i++;
       continue;
     }
-    const { hit, length } = found;
+    const length = hitLength;
     const neg = hasNegation && isNegated(tokens, i, lexicon);
     onHit?.(hit, i, length, neg);
     if (neg) negated++;

@@ -1,0 +1,66 @@
+import { existsSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { fileURLToPath } from 'node:url';
+import { Worker } from 'node:worker_threads';
+import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
+import type { BatchScores } from '../score/score-text.js';
+
+/** Scoring workers that score batches of texts in parallel, results in submission order per call. */
+export interface ScorePool {
+  size: number;
+  score(texts: string[]): Promise<BatchScores>;
+  close(): Promise<void>;
+}
+
+/** Input size (bytes) from which `auto` starts workers: below it, their start-up costs more than they save. */
+export const AUTO_WORKERS_MIN_BYTES = 4 * 1024 * 1024;
+
+/** Workers for `auto`: one per core beyond the one that reads and writes, at most 4; none for small inputs or a single core. */
+export function autoWorkers(inputBytes: number, cores = availableParallelism()): number {
+  if (inputBytes < AUTO_WORKERS_MIN_BYTES || cores < 2) return 0;
+  return Math.min(cores - 1, 4);
+}
+
+/**
+ * Starts `size` scoring workers for these lexicons (each compiles them once). Returns undefined
+ * when `size` is 0 or the compiled worker script is not there (running from TypeScript sources,
+ * as in unit tests): the caller then scores in process, with identical results.
+ */
+export function createScorePool(lexicons: readonly CompiledLexicon[], size: number): ScorePool | undefined {
+  const script = new URL('./score-worker.js', import.meta.url);
+  if (size <= 0 || !existsSync(fileURLToPath(script))) return undefined;
+  const data = { lexicons: lexicons.map((l) => l.lexicon) };
+  const workers = Array.from({ length: size }, () => new Worker(script, { workerData: data }));
+  const pending = workers.map(() => new Map<number, { resolve: (b: BatchScores) => void; reject: (e: Error) => void }>());
+  let failure: Error | undefined;
+  workers.forEach((worker, w) => {
+    worker.on('message', (m: BatchScores & { id: number }) => {
+      const p = pending[w]?.get(m.id);
+      pending[w]?.delete(m.id);
+      p?.resolve({ values: m.values, matched: m.matched, negated: m.negated, words: m.words });
+    });
+    worker.on('error', (error) => {
+      failure = error;
+      for (const p of pending[w]?.values() ?? []) p.reject(error);
+      pending[w]?.clear();
+    });
+  });
+  let next = 0;
+  return {
+    size,
+    score(texts) {
+      if (failure) return Promise.reject(failure);
+      // the least busy worker takes the batch
+      let w = 0;
+      for (let k = 1; k < workers.length; k++) if ((pending[k]?.size ?? 0) < (pending[w]?.size ?? 0)) w = k;
+      const id = next++;
+      return new Promise<BatchScores>((resolve, reject) => {
+        pending[w]?.set(id, { resolve, reject });
+        workers[w]?.postMessage({ id, texts });
+      });
+    },
+    async close() {
+      await Promise.all(workers.map((worker) => worker.terminate()));
+    },
+  };
+}

@@ -1,0 +1,79 @@
+import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
+import { tokenize, type Tokens } from '../text/tokenize.js';
+import { matchLexicon } from './match-lexicon.js';
+import { scoreVader } from './vader.js';
+
+/**
+ * Scores of a batch of texts as flat typed arrays (row-major), the form the scoring workers send
+ * back. For `columns` score columns (scoreColumns order) and `lexicons` lexicons:
+ * `values[i·columns + c]` (NaN = no score), `matched[i·columns + c]` (0 for VADER columns),
+ * `negated[i·lexicons + l]`, `words[i]`.
+ */
+export interface BatchScores {
+  values: Float64Array;
+  matched: Int32Array;
+  negated: Int32Array;
+  words: Int32Array;
+}
+
+/** Empty batch arrays for `n` texts. */
+export function createBatchScores(n: number, columns: number, lexicons: number): BatchScores {
+  return { values: new Float64Array(n * columns), matched: new Int32Array(n * columns), negated: new Int32Array(n * lexicons), words: new Int32Array(n) };
+}
+
+/**
+ * Scores text `i` of a batch into `out`, each text on its own (a saturating score such as VADER's
+ * compound is never computed over concatenated text).
+ *
+ * Per category: `count` → 100 × (sum of weights of matched terms) / word tokens of the text
+ * (NaN when it has no word tokens); `rating` → mean weight of matched terms (NaN when nothing
+ * matched); `sum` → sum of weights (0 when nothing matched, as for AFINN). VADER columns are NaN
+ * for a text with no VADER tokens (the reference returns zeros, but empty is not neutral).
+ * The text is tokenized once per language; words are counted with the English tokenizer unless
+ * only other-language lexicons are used.
+ */
+export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number): void {
+  let byLanguage: Map<string, Tokens> | undefined;
+  let english: Tokens | undefined;
+  const tokensFor = (language: string): Tokens => {
+    if (language === 'en') return (english ??= tokenize(text, 'en'));
+    byLanguage ??= new Map();
+    let t = byLanguage.get(language);
+    if (!t) byLanguage.set(language, (t = tokenize(text, language)));
+    return t;
+  };
+  let c = i * columns;
+  for (let l = 0; l < lexicons.length; l++) {
+    const lex = lexicons[l] as CompiledLexicon;
+    if (lex.scoring === 'vader') {
+      const v = scoreVader(text, lex.valence);
+      const has = v.tokens > 0;
+      out.values[c++] = has ? v.compound : NaN;
+      out.values[c++] = has ? v.pos : NaN;
+      out.values[c++] = has ? v.neu : NaN;
+      out.values[c++] = has ? v.neg : NaN;
+      continue;
+    }
+    const tokens = tokensFor(lex.language);
+    const m = matchLexicon(tokens, lex);
+    out.negated[i * lexicons.length + l] = m.negated;
+    for (let k = 0; k < lex.categories.length; k++, c++) {
+      const aggregation = (lex.categories[k] as { aggregation: string }).aggregation;
+      const sum = m.sums[k] as number;
+      const count = m.counts[k] as number;
+      out.matched[c] = count;
+      if (aggregation === 'count') out.values[c] = tokens.nWords > 0 ? (100 * sum) / tokens.nWords : NaN;
+      else if (aggregation === 'rating') out.values[c] = count > 0 ? sum / count : NaN;
+      else out.values[c] = sum;
+    }
+  }
+  const counted = english ?? (byLanguage ? (byLanguage.values().next().value as Tokens) : tokenize(text, 'en'));
+  out.words[i] = counted.nWords;
+}
+
+/** Scores a batch of texts (see scoreTextInto). */
+export function scoreTexts(texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number): BatchScores {
+  const out = createBatchScores(texts.length, columns, lexicons.length);
+  for (let i = 0; i < texts.length; i++) scoreTextInto(texts[i] as string, lexicons, out, i, columns);
+  return out;
+}

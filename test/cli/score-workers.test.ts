@@ -1,0 +1,44 @@
+import { execFileSync, spawnSync } from 'node:child_process';
+import { existsSync, readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { tempFolder } from '../support/temp-files.js';
+
+const root = resolve(__dirname, '../..');
+const bin = resolve(root, 'bin/lexichron.js');
+const tmp = tempFolder();
+
+beforeAll(() => {
+  // The workers run the compiled code in dist/ (npm test builds it first).
+  if (!existsSync(resolve(root, 'dist/io/score-worker.js'))) execFileSync('npx', ['tsc', '-p', 'tsconfig.json'], { cwd: root, stdio: 'inherit' });
+});
+
+function score(workers: string, out: string): void {
+  const r = spawnSync(process.execPath, [bin, 'score', tmp.path('in.csv'), '--time-zone', 'Europe/Brussels', '-l', 'afinn-165', '-l', 'vader', '-l', 'daily-constructs', '--workers', workers, '-o', tmp.path(out)], { encoding: 'utf8' });
+  expect(r.status, r.stderr).toBe(0);
+}
+
+describe('scoring threads', () => {
+  it('give byte-identical scores, in input order, with 0, 1 and 3 worker threads', () => {
+    const words = ['great', 'awful', 'not', 'happy', 'worried', 'tired', 'friends', 'the', 'day', 'SO', 'good', '!', ':)', 'but', 'kind of', 'sad'];
+    const rows = ['id,person,time,text'];
+    for (let i = 0; i < 3000; i++) {
+      const text = Array.from({ length: 4 + (i % 9) }, (_, k) => words[(i * 7 + k * 5) % words.length]).join(' ');
+      rows.push(`e${i},p${i % 17},2026-03-${String(1 + (i % 28)).padStart(2, '0')}T${String(8 + (i % 12)).padStart(2, '0')}:00:00+01:00,"${text}"`);
+    }
+    tmp.write('in.csv', rows.join('\n') + '\n');
+    score('0', 'w0.csv');
+    score('1', 'w1.csv');
+    score('3', 'w3.csv');
+    const w0 = readFileSync(tmp.path('w0.csv'), 'utf8');
+    expect(w0.trim().split('\n')).toHaveLength(3001);
+    expect(readFileSync(tmp.path('w1.csv'), 'utf8')).toBe(w0);
+    expect(readFileSync(tmp.path('w3.csv'), 'utf8')).toBe(w0);
+  });
+
+  it('rejects a --workers value that is not auto or a small whole number', () => {
+    const r = spawnSync(process.execPath, [bin, 'score', 'x.csv', '--time-zone', 'UTC', '--workers', 'many', '-o', tmp.path('x.csv')], { encoding: 'utf8' });
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('--workers `many` must be auto or a whole number');
+  });
+});
