@@ -117,3 +117,24 @@ export { buildReportData, type ReportInputs, type ReportOptions } from './report
 export { renderReport } from './report/html/render-report.js';
 export { REPORT_CAUTIONS } from './report/html/cautions.js';
 export type { ReportData, Part, CoverageData, SeriesData, ValidationData, ValidationPair, LexiconAuditData, ReadinessData, DynamicsData, ProvenanceData } from './report/report-data.js';
+
+// term lists
+export * from './terms/index.js';
+export { writeTermAudit } from './io/write-term-audit.js';
+export { openWordNet, wordnetDictDir } from './io/open-wordnet.js';
+export { readCorpus, type ReadCorpusOptions, type CorpusItem } from './io/read-corpus.js';
+export { LEXICON_EXTENSION, OVERRIDES_EXTENSION } from './io/load-lexicon.js';
+
+// batch scoring and worker threads
+export { scoreTexts, scoreTextInto, createBatchScores, type BatchScores } from './score/score-text.js';
+export { scoredEntryFrom } from './score/score-entry.js';
+export { createScorePool, autoWorkers, type ScorePool } from './io/score-pool.js';
+
+// study runner stages
+export { runDynamics, type RunDynamicsResult, type RatingsByBin } from './io/run-dynamics.js';
+export { defaultStudyStages, validateStage, dynamicsStage } from './io/study-stages.js';
+export { studyInput } from './io/study-input.js';
+export { writeStudyAudit } from './io/write-study-audit.js';
+export { inferTableResource } from './report/infer-table-resource.js';
+export { readNamesFile } from './io/read-names-file.js';
+export { DEFAULT_SEED, type StudyContext, type StudyStage, type StageOutput, type RunStudyResult } from './pipeline.js';
