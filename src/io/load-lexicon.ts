@@ -11,7 +11,7 @@ import { parseLexiconOverrides } from '../terms/lexicon-overrides.js';
 /** Extension of lexicon files. */
 export const LEXICON_EXTENSION = '.lex.tsv';
 
-/** Extension of override files (changes to a base lexicon applied at load; see docs/readme/terms.md). */
+/** Extension of override files (changes to a base lexicon applied at load; see README.md, "Term lists"). */
 export const OVERRIDES_EXTENSION = '.over.tsv';
 
 /** The folder of bundled lexicons (lexicons/ at the package root). */

@@ -20,7 +20,7 @@ async function listFiles(dir: string, depth = 2, prefix = ''): Promise<string[]>
 /** Shallower paths first, then by name: the top-level file wins over one in a subfolder. */
 const byDepth = (a: string, b: string): number => a.split('/').length - b.split('/').length || (a < b ? -1 : 1);
 
-/** Finds the files of each stage in an output folder by name (see docs/readme/report.md). */
+/** Finds the files of each stage in an output folder by name (see README.md, "The HTML report"). */
 export function locateReportFiles(files: readonly string[]): {
   series?: string;
   manifest?: string;

@@ -34,7 +34,7 @@ export async function writeStudyAudit(outDir: string, audits: readonly TermAudit
       const rel = `${audit.lexicon.name}/${name}`;
       await writeFileAtomic(join(dir, rel), content);
       written.push(rel);
-      if (name.endsWith('.csv')) resources.push(inferTableResource(`terms-${audit.lexicon.name}-${name.replace(/\.csv$/, '')}`, `terms/${rel}`, content, (c) => describe[c], `Term audit of ${audit.lexicon.name}: ${name} (see docs/readme/terms.md).`));
+      if (name.endsWith('.csv')) resources.push(inferTableResource(`terms-${audit.lexicon.name}-${name.replace(/\.csv$/, '')}`, `terms/${rel}`, content, (c) => describe[c], `Term audit of ${audit.lexicon.name}: ${name} (see README.md, "Term lists").`));
     }
   }
   await writeFileAtomic(join(dir, TERM_AUDIT_FILES.top), [TOP_TERMS_COLUMNS.join(','), ...topLines].join('\n') + '\n');

@@ -56,9 +56,9 @@ export interface Study {
   keepText: boolean;
   maxRejects: string;
   series: StudySeries;
-  /** Self-reports and validation settings (see docs/readme/validate.md); absent: no validation. */
+  /** Self-reports and validation settings (see README.md, "Validating text scores"); absent: no validation. */
   ratings?: RatingsSettings;
-  /** Dynamics settings (see docs/readme/dynamics.md); `false` skips the stage. */
+  /** Dynamics settings (see README.md, "Dynamics"); `false` skips the stage. */
   dynamics: DynamicsSettings | false;
   /** Term-audit settings; `false` skips it. */
   audit: AuditSettings | false;

@@ -34,7 +34,7 @@ const REQUIRED = ['base', 'name', 'version', 'license', 'source'] as const;
 const KEYS = new Set<string>([...REQUIRED, 'base-sha256', 'note', 'category']);
 
 /**
- * Reads an override file (format in docs/readme/terms.md): metadata lines `## base`, `## name`,
+ * Reads an override file (format in README.md, "Term lists"): metadata lines `## base`, `## name`,
  * `## version`, `## license`, `## source` (required), `## base-sha256`, `## note`, `## category`
  * (optional), a header `change<TAB>term<TAB>category<TAB>weight`, then one change per line:
  * `add` (term, category, weight), `reweight` (term, category, new weight), `remove` (term and

@@ -26,7 +26,7 @@ export interface SeedFile {
 const RELATIONS: readonly WordNetRelation[] = ['synonym', 'similar', 'see-also', 'derived', 'pertainym'];
 
 /**
- * Reads a seed file (format in docs/readme/terms.md): `## name`, `## version`, `## source`,
+ * Reads a seed file (format in README.md, "Term lists"): `## name`, `## version`, `## source`,
  * `## senses` (default 1), `## relations` (default synonym, similar), `## note`, then a header
  * `category<TAB>seeds<TAB>description` and one category per line with comma-separated seeds
  * (`word` or `word/pos`, pos one of n, v, a, r). Returns the seeds or every problem with its line.
