@@ -99,6 +99,6 @@ describe('parseColumnMapping', () => {
   });
 
   it('names the bad part and gives an example', () => {
-    expect(() => parseColumnMapping('speaker=who')).toThrow('`speaker=who` is not FIELD=COLUMN with FIELD one of person, time, text, id, zone; for example --columns person=participant,time=sent_at,text=body');
+    expect(() => parseColumnMapping('writer=who')).toThrow('`writer=who` is not FIELD=COLUMN with FIELD one of person, time, text, id, zone; for example --columns person=participant,time=sent_at,text=body');
   });
 });

@@ -1,7 +1,7 @@
 /** One mailbox of an address header: the display name (may be empty) and the address. */
 export interface Mailbox {
   name: string;
-  /** addr-spec with comments and folding white space removed, e.g. `pete@silly.test`. */
+  /** addr-spec with comments and folding white space removed, e.g. `quillon@silly.test`. */
   address: string;
 }
 
@@ -9,7 +9,7 @@ export interface Mailbox {
  * Parses an address header value (From, To, Cc…) into mailboxes, following RFC 5322
  * section 3.4 and the obsolete forms of section 4.4:
  * - name-addr (`Mary Smith <mary@x.test>`, `"Giant; \"Big\" Box" <sysservices@example.net>`) and bare addr-spec;
- * - comments anywhere, nested and with quoted pairs (`Pete(A nice \) chap) <pete(his account)@silly.test(his host)>`);
+ * - comments anywhere, nested and with quoted pairs (`Quillon(A nice \) chap) <quillon(his account)@silly.test(his host)>`);
  * - groups (`A Group:Ed Jones <c@a.test>,joe@where.test;`), whose members are returned;
  * - obsolete routes (`<@node.test:mary@example.net>`), empty list elements and white space around dots.
  * Encoded words (RFC 2047) in names are left encoded. Elements without `@` (such as an empty group) give nothing.

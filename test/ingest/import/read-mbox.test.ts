@@ -85,7 +85,7 @@ describe('readMbox keeps the participant\'s own messages only', () => {
 
   it('strips the reply attribution, > quotes, a forwarded block and the signature', async () => {
     const body = 'Thanks, that cheered me up!\n\nOn Mon, 3 Mar 2025 at 08:00, Bob <bob@example.org> wrote:\n> Here is a joke.\n> Bye\n\n-- \nAnn\nPhone 555';
-    const fwd = 'See below.\n\n---------- Forwarded message ---------\nFrom: Carol <c@example.org>\nDate: Sun, 2 Mar 2025\n\nCarol\'s private news.';
+    const fwd = 'See below.\n\n---------- Forwarded message ---------\nFrom: Odalys <c@example.org>\nDate: Sun, 2 Mar 2025\n\nOdalys\'s private news.';
     expect(texts(await read(message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', body), message('ann@example.org', 'Mon, 3 Mar 2025 09:10:00 +0100', fwd)))).toEqual(['Thanks, that cheered me up!', 'See below.']);
   });
 
