@@ -116,22 +116,17 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       workers = autoWorkers(bytes);
     }
     pool = createScorePool(options.lexicons, workers as number);
-    // Entries are scored in batches and written in input order. With workers, each takes up to two
-    // batches at a time and this thread scores the batches in between instead of waiting, so both
-    // cores stay busy; at most a few batches are in flight, so memory stays bounded.
+    // Entries are scored in batches and written in input order, by the workers when there are any
+    // (a few batches in flight per worker, so memory stays bounded), else in this thread.
     const inflight: Array<{ entries: RawEntry[]; scores: Promise<BatchScores> }> = [];
     let batch: RawEntry[] = [];
-    let atWorkers = 0;
     const maxInflight = pool ? 4 * pool.size + 4 : 0;
     const submit = (): void => {
       if (batch.length === 0) return;
       const entries = batch;
       batch = [];
       const texts = entries.map((e) => e.text);
-      if (pool) {
-        atWorkers++;
-        inflight.push({ entries, scores: pool.score(texts).finally(() => atWorkers--) });
-      } else inflight.push({ entries, scores: Promise.resolve(scoreTexts(texts, options.lexicons, columns.length)) });
+      inflight.push({ entries, scores: pool ? pool.score(texts) : Promise.resolve(scoreTexts(texts, options.lexicons, columns.length)) });
     };
     const drain = async (keep: number): Promise<void> => {
       while (inflight.length > keep) {
