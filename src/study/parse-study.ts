@@ -1,3 +1,4 @@
+import type { ImportSourceSpec } from '../io/open-import-source.js';
 import { auditSettings, dynamicsSettings, ratingsSettings, reportSettings, type AuditSettings, type DynamicsSettings, type RatingsSettings, type ReportSettings } from './stage-settings.js';
 
 /**
@@ -8,25 +9,16 @@ import { auditSettings, dynamicsSettings, ratingsSettings, reportSettings, type 
 /** Formats read through an importer (donated exports) rather than as a table. */
 export const STUDY_IMPORT_FORMATS = ['mbox', 'diary', 'chat-lines', 'chat-table'] as const;
 
-export interface StudyInput {
+/** The importer options a donated-export input may carry, as on the command line (camel case). */
+type ImportFields = Partial<Pick<ImportSourceSpec, 'addresses' | 'senders' | 'dateOrder' | 'heading' | 'dateFormat' | 'locale' | 'senderField' | 'timeField' | 'textField' | 'timeFormat'>>;
+
+export interface StudyInput extends ImportFields {
   path: string;
   format?: 'csv' | 'tsv' | 'jsonl' | 'json' | (typeof STUDY_IMPORT_FORMATS)[number];
   columns?: Record<string, string>;
   delimiter?: string;
   /** Donated exports: the participant the file belongs to. */
   person?: string;
-  /** mbox: the participant's addresses. */
-  addresses?: string[];
-  /** chat-lines, chat-table: the participant's sender names (everyone else's messages are dropped). */
-  senders?: string[];
-  dateOrder?: 'dmy' | 'mdy';
-  heading?: string;
-  dateFormat?: string;
-  locale?: string;
-  senderField?: string;
-  timeField?: string;
-  textField?: string;
-  timeFormat?: string;
   /** Drop exact and near-duplicate entries. */
   dedupe?: boolean;
   /** Merge messages within this many minutes into one entry. */
