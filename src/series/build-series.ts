@@ -212,7 +212,9 @@ function personGrid(state: SeriesState, bins: PersonBins, person: string): GridB
       continue;
     }
     const length = bin.week ? 7 : bin.days;
-    const end = memoDayStart(state, day + length, zoneOn(day + length - 1));
+    // The bin ends where the next one starts: after a move, in the new zone (an eastward move
+    // shortens the last day in the old zone, a westward one lengthens it; bin_hours shows it).
+    const end = memoDayStart(state, day + length, zoneOn(day + length));
     const slots: number[] = [];
     for (let d = day; d < day + length; d++) {
       const part = bins.slots.get(d * KEY_SCALE);
@@ -376,7 +378,9 @@ export function buildPersonSeries(state: SeriesState, person: string): SeriesRow
   for (let t = 0; t < rows.length; t++) {
     const r = rows[t] as SeriesRow;
     const prev = t > 0 ? rows[t - 1] : undefined;
-    r.lagValid = prev !== undefined && prev.missing === '' && r.missing === '' && prev.end === r.start;
+    // Bins t−1 and t are neighbours on the person's grid; across a move to another zone the local day
+    // boundary shifts by the change of offset, but the two days still follow each other.
+    r.lagValid = prev !== undefined && prev.missing === '' && r.missing === '';
     for (let c = 0; c < columns; c++) {
       r.lag1[c] = r.lagValid && prev && prev.filled[c] === '' ? prev.values[c] : undefined;
       r.withinLag1[c] = r.lagValid && prev && prev.filled[c] === '' ? prev.within[c] : undefined;
