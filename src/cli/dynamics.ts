@@ -4,6 +4,7 @@ import type { DynamicsOptions } from '../dynamics/analyse-dynamics.js';
 import { usageError } from '../errors.js';
 import { writeFileAtomic } from '../io/atomic-write.js';
 import { runDynamics } from '../io/run-dynamics.js';
+import { readBinRatings } from '../io/read-bin-ratings.js';
 import { dataPackage } from '../report/data-dictionary.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
@@ -24,6 +25,8 @@ export function registerDynamics(program: Command): void {
     .argument('<series>', 'long series CSV written by `lexichron series`')
     .requiredOption('-o, --out <dir>', 'folder for dynamics-*.csv, dynamics.json and datapackage.json')
     .option('--variables <list>', 'comma-separated series columns to analyse (default: every score column)')
+    .option('--ratings-by-bin <file>', 'add self-reports as variables: the validation-pairs.csv written by `lexichron validate --align bins` (name the columns with --rating)')
+    .option('--rating <column>', 'a rating column of --ratings-by-bin to add (repeatable)', collect)
     .option('--pair <A:B>', 'restrict the cross analyses (VAR(1), CCM) to this pair; repeat for more', collect)
     .option('--min-pairs <n>', 'valid lag pairs a series needs to be flagged ready (and usable points for CCM)', wholeNumber('--min-pairs', 1), 50)
     .option('--embedding <E>', 'fix the CCM embedding dimension instead of choosing it by forecast skill', wholeNumber('--embedding', 1))
@@ -40,7 +43,7 @@ export function registerDynamics(program: Command): void {
     .action(async (seriesPath: string, opts: Record<string, unknown>) => {
       const pairs = (opts.pair as string[] | undefined)?.map((p): [string, string] => {
         const parts = p.split(':');
-        if (parts.length !== 2 || !parts[0] || !parts[1]) throw usageError(`--pair \`${p}\` is not of the form A:B, e.g. --pair vader.compound:mood`);
+        if (parts.length !== 2 || !parts[0] || !parts[1]) throw usageError(`--pair \`${p}\` is not of the form A:B, e.g. --pair vader.compound:daily-constructs.worry (self-reports such as mood need --ratings-by-bin)`);
         return [parts[0], parts[1]];
       });
       const options: Omit<DynamicsOptions, 'variables'> & { variables?: string[] } = {
@@ -62,7 +65,8 @@ export function registerDynamics(program: Command): void {
         seed: /^\d+$/.test(String(opts.seed)) ? Number(opts.seed) : String(opts.seed),
       };
       const out = String(opts.out);
-      const { result, persons, variables, diagnostics, resources } = await runDynamics(seriesPath, out, options);
+      const ratings = opts.ratingsByBin ? await readBinRatings(String(opts.ratingsByBin), (opts.rating as string[] | undefined)?.flatMap((r) => r.split(',')) ?? []) : undefined;
+      const { result, persons, variables, diagnostics, resources } = await runDynamics(seriesPath, out, options, ratings);
       await writeFileAtomic(join(out, 'datapackage.json'), JSON.stringify(dataPackage('lexichron-dynamics', 'lexichron dynamics', resources), null, 2) + '\n');
       const ready = result.summaries.filter((s) => s.ready).length;
       const converging = result.ccm.filter((c) => c.converges).length;

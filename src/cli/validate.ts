@@ -79,7 +79,7 @@ export function registerValidate(program: Command): void {
     for (const d of result.result.diagnostics) byCode[d.code] = (byCode[d.code] ?? 0) + 1;
     const problems = Object.entries(byCode).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
     const lines = [
-      `${r.read} self-report rows read, ${r.kept} kept; diagnostics (see validation-diagnostics.csv): ${problems}`,
+      `${r.read} self-report rows read, ${r.kept} with a usable time and person (single values out of scale or not numeric are left out on their own); diagnostics (see validation-diagnostics.csv): ${problems}`,
       `${result.result.counts.rows} occasions paired (${result.result.counts.rowsWithText} with text) for ${result.result.counts.persons} persons`,
     ];
     for (const { score, rating, analysis } of result.result.pairs) {

@@ -6,7 +6,8 @@ import { recordToEntry } from '../ingest/read-entries.js';
 import { readRecords, type TableFormat } from '../ingest/read-records.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import { csvDocument } from '../report/csv.js';
-import { tableResource } from '../report/data-dictionary.js';
+import type { TableResource } from '../report/data-dictionary.js';
+import { inferTableResource } from '../report/infer-table-resource.js';
 import {
   alignedPairsTable,
   binsPerPersonTable,
@@ -26,6 +27,16 @@ import { ratingValues } from '../validate/rating-values.js';
 import { seriesBinFromRecord, seriesScoreColumns, type SeriesBin } from '../validate/series-bin.js';
 import { validateSeries, type ValidateOptions, type ValidationResult } from '../validate/validate-series.js';
 import { writeFileAtomic } from './atomic-write.js';
+
+/** Descriptions of the columns of the validation tables (types are read from the values). */
+const VALIDATION_COLUMNS: Record<string, string> = {
+  score: 'Text score column', rating: 'Self-report (rating) column', level: 'Level of the statistic: pooled, between, within, per_person, model, icc, bootstrap',
+  statistic: 'Name of the statistic', estimate: 'Estimate', ci_low: 'Lower end of the 95% interval', ci_high: 'Upper end of the 95% interval',
+  se: 'Standard error', df: 'Degrees of freedom', n: 'Number of pairs, persons or bins the statistic rests on', p: 'Two-sided p-value',
+  note: 'Why a value is empty, or a caution', person: 'Person id', pairs: 'Pairs of the person', r: 'Pearson correlation',
+  time: 'Local start of the bin, or local time of the self-report', time_utc: 'The same instant in UTC', entries: 'Entries behind the text scores',
+  words: 'Words behind the text scores', text_missing: 'Why the text side is missing (empty when observed)', reports: 'Self-reports averaged into the row',
+};
 
 /** Options of {@link runValidate}. */
 export interface RunValidateOptions {
@@ -62,7 +73,7 @@ export interface RunValidateResult {
   /** Paths written, by role. */
   files: Record<'statistics' | 'pairs' | 'persons' | 'json' | 'diagnostics' | 'reliability' | 'binsPerPerson', string | undefined>;
   /** Data-package resources of the tables written (paths relative to `out`). */
-  resources: ReturnType<typeof tableResource>[];
+  resources: TableResource[];
   /** Self-report rows read, and rejected by code (rows and values). */
   reconciliation: { read: number; kept: number; rejected: Record<string, number> };
 }
@@ -200,10 +211,10 @@ export async function runValidate(options: RunValidateOptions): Promise<RunValid
   const out = options.out;
   const write = async (name: string, table: Table, description: string) => {
     await writeFileAtomic(join(out, name), csvDocument(table.header, table.rows));
-    resources.push(tableResource(name.replace(/\.csv$/, ''), name, table.header, undefined, description));
+    resources.push(inferTableResource(name.replace(/\.csv$/, ''), name, csvDocument(table.header, table.rows), (column) => VALIDATION_COLUMNS[column], description));
     return join(out, name);
   };
-  const resources: ReturnType<typeof tableResource>[] = [];
+  const resources: TableResource[] = [];
   const files: RunValidateResult['files'] = {
     statistics: await write('validation-statistics.csv', validationStatisticsTable(result), 'Every validation statistic per text score and rating, one per row; `note` says why a value is empty.'),
     pairs: await write('validation-pairs.csv', alignedPairsTable(result, scoreColumns, ratings.columns), 'Text scores and self-reports aligned per occasion.'),

@@ -32,7 +32,7 @@ export function validationStatisticsTable(result: ValidationResult): Table {
     if (a.bootstrapBetween.ok) row('between', 'r_person_means_bootstrap', { estimate: a.between.ok ? a.between.r : undefined, se: a.bootstrapBetween.se, ciLow: a.bootstrapBetween.ciLow, ciHigh: a.bootstrapBetween.ciHigh, n: a.bootstrapBetween.succeeded, note: `percentile interval, ${a.bootstrapBetween.replicates} resamples of persons` });
     else row('between', 'r_person_means_bootstrap', { note: note(a.bootstrapBetween) });
     const w = a.within;
-    if (w.ok) row('within', 'r_rm', { estimate: w.r, ciLow: w.ciLow, ciHigh: w.ciHigh, df: w.df, n: w.n, p: w.p, note: w.personsTooFew ? `${w.personsTooFew} persons with fewer than 2 pairs left out` : '' });
+    if (w.ok) row('within', 'r_rm', { estimate: w.r, ciLow: w.ciLow, ciHigh: w.ciHigh, df: w.df, n: w.n, p: w.p, note: w.personsTooFew ? `${w.personsTooFew} person${w.personsTooFew === 1 ? "" : "s"} with fewer than 2 pairs left out` : '' });
     else row('within', 'r_rm', { note: note(w) });
     if (a.bootstrapWithin.ok) row('within', 'r_rm_bootstrap', { estimate: w.ok ? w.r : undefined, se: a.bootstrapWithin.se, ciLow: a.bootstrapWithin.ciLow, ciHigh: a.bootstrapWithin.ciHigh, n: a.bootstrapWithin.succeeded, note: `percentile interval, ${a.bootstrapWithin.replicates} resamples of persons` });
     else row('within', 'r_rm_bootstrap', { note: note(a.bootstrapWithin) });
@@ -56,7 +56,11 @@ export function validationStatisticsTable(result: ValidationResult): Table {
     for (const [which, icc] of [['score', a.iccScore], ['rating', a.iccRating]] as const) {
       if (icc.ok) {
         row('icc', `icc1_${which}`, { estimate: icc.icc1, df: icc.df1, n: icc.groups, p: icc.p, note: `one-way ANOVA, n0 = ${num(icc.n0)}` });
-        row('icc', `icc1k_${which}`, { estimate: icc.icc1k, n: icc.groups, note: 'reliability of a person mean' });
+        row('icc', `icc1k_${which}`, {
+          estimate: icc.icc1k,
+          n: icc.groups,
+          note: icc.icc1k < 0 ? 'reliability of a person mean; negative because the persons differ less than chance would make them: read it as no between-person reliability' : 'reliability of a person mean',
+        });
       } else row('icc', `icc1_${which}`, { note: note(icc) });
     }
   }

@@ -6,6 +6,7 @@ interface JStat {
   studentt: { cdf(x: number, df: number): number; inv(p: number, df: number): number };
   normal: { cdf(x: number, mean: number, sd: number): number; inv(p: number, mean: number, sd: number): number };
   centralF: { cdf(x: number, df1: number, df2: number): number; inv(p: number, df1: number, df2: number): number };
+  ibeta(x: number, a: number, b: number): number;
 }
 const jStat = jStatModule as unknown as JStat;
 
@@ -29,19 +30,29 @@ export function studentTQuantile(p: number, df: number): number {
   return jStat.studentt.inv(p, df);
 }
 
-/** Two-sided p-value of a t statistic: 2·(1 − T_df(|t|)). */
+/** Two-sided p-value of a t statistic: 2·T_df(−|t|) (the lower tail, so tiny p-values do not round to 0). */
 export function studentTTwoSidedP(t: number, df: number): number {
-  return Math.min(1, 2 * (1 - jStat.studentt.cdf(Math.abs(t), df)));
+  return Math.min(1, 2 * jStat.studentt.cdf(-Math.abs(t), df));
 }
 
-/** Two-sided p-value of a z statistic: 2·(1 − Φ(|z|)). */
+/** Two-sided p-value of a z statistic: 2·Φ(−|z|). */
 export function normalTwoSidedP(z: number): number {
-  return Math.min(1, 2 * (1 - normalCdf(Math.abs(z))));
+  return Math.min(1, 2 * normalCdf(-Math.abs(z)));
 }
 
 /** F cumulative distribution with (df1, df2) degrees of freedom (jstat). */
 export function fCdf(f: number, df1: number, df2: number): number {
   return jStat.centralF.cdf(f, df1, df2);
+}
+
+/**
+ * Upper tail P(F > f) of the F distribution with (df1, df2) degrees of freedom, computed as the
+ * regularized incomplete beta I_x(df2/2, df1/2) with x = df2 / (df2 + df1·f), so that small
+ * p-values keep their size instead of rounding to 0 as 1 − CDF would.
+ */
+export function fUpperTail(f: number, df1: number, df2: number): number {
+  if (!(f > 0)) return 1;
+  return jStat.ibeta(df2 / (df2 + df1 * f), df2 / 2, df1 / 2);
 }
 
 /** F quantile with (df1, df2) degrees of freedom (jstat). */

@@ -1,4 +1,4 @@
-import { fCdf, fQuantile } from './distributions.js';
+import { fQuantile, fUpperTail } from './distributions.js';
 import { isNumber } from './is-number.js';
 import { notEstimable, type StatResult } from './stat-result.js';
 
@@ -94,7 +94,7 @@ export function intraclassCorrelation(rows: Iterable<readonly (number | undefine
   if (!(bms > 0) && !(wms > 0)) return notEstimable('zero_variance', 'every rating is the same, so no intraclass correlation can be computed');
   const alpha = 1 - level;
   const form = (value: number, f: number, df1: number, df2: number, ci: ((fl: number, fu: number) => [number, number]) | undefined): IccForm => {
-    const p = Number.isFinite(f) ? 1 - fCdf(f, df1, df2) : 0;
+    const p = Number.isFinite(f) ? fUpperTail(f, df1, df2) : 0;
     let ciLow: number | undefined;
     let ciHigh: number | undefined;
     if (ci && Number.isFinite(f)) {

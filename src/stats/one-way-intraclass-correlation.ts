@@ -1,4 +1,4 @@
-import { fCdf } from './distributions.js';
+import { fUpperTail } from './distributions.js';
 import { isNumber } from './is-number.js';
 import { notEstimable, type StatResult } from './stat-result.js';
 
@@ -81,7 +81,7 @@ export function oneWayIntraclassCorrelation<T>(
   if (!(msBetween > 0) && !(msWithin > 0)) return notEstimable('zero_variance', 'the variable is constant, so no intraclass correlation can be computed');
   const n0 = options.groupSize === 'mean' ? n / g : (n - sumSquaredSizes / n) / df1;
   const f = msWithin > 0 ? msBetween / msWithin : Infinity;
-  const p = Number.isFinite(f) ? 1 - fCdf(f, df1, df2) : 0;
+  const p = Number.isFinite(f) ? fUpperTail(f, df1, df2) : 0;
   const icc1 = (msBetween - msWithin) / (msBetween + (n0 - 1) * msWithin);
   const icc1k = msBetween > 0 ? (msBetween - msWithin) / msBetween : -Infinity;
   if (!Number.isFinite(icc1k)) return notEstimable('zero_variance', 'the person means do not differ at all, so the reliability of a person mean is not defined');
