@@ -33,11 +33,12 @@ import { pseudonymizePerson } from './privacy/pseudonymize-person.js';
 import { createRedactor } from './privacy/create-redactor.js';
 import { termAuditor } from './terms/term-auditor.js';
 import { random } from './stats/random.js';
-import { parseClockTime } from './series/bin-spec.js';
 import { dateOfDayNumber, localDayOf } from './series/local-day.js';
 import { writeStudyAudit } from './io/write-study-audit.js';
 import { writeReport, type WriteReportResult } from './io/write-report.js';
 import { studyInput } from './io/study-input.js';
+import { readWindowsFile } from './io/read-windows-file.js';
+import { zoneOnDay } from './series/zone-on-day.js';
 import { TOOL_VERSION } from './version.js';
 
 /** What a stage after the series contributes to the outputs. */
@@ -141,7 +142,17 @@ export async function runStudy(
     : (id: string): string => id;
   const redact = createRedactor({ names: privacy.names });
   const auditors = study.audit === false ? [] : lexicons.filter((l) => l.scoring === 'rules').map((l) => ({ lexicon: l, auditor: termAuditor(l, { random: random(options.seed ?? DEFAULT_SEED), redact, maxShare: (study.audit as AuditSettings).maxShare, minPersons: (study.audit as AuditSettings).minPersons }) }));
-  const dayStart = parseClockTime(study.series.dayStart);
+  // Series settings are checked before anything is scored, and their errors name the study file's keys.
+  let seriesOptions: ReturnType<typeof seriesOptionsFrom>;
+  let reducers: ReturnType<typeof parseReducers>;
+  try {
+    seriesOptions = seriesOptionsFrom({ ...study.series });
+    reducers = parseReducers(study.series.aggregate);
+  } catch (error) {
+    throw usageError(`Study file \`${studyPath}\`, $.series: ${(error as Error).message.replace(/--([a-z-]+)/g, (_m, flag: string) => `"${flag.replace(/-([a-z])/g, (_x, c: string) => c.toUpperCase())}"`)}`);
+  }
+  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : undefined;
+  const dayStart = seriesOptions.dayStart;
   const score = await runScore({
     inputs: study.inputs.map((i, n) => studyInput(i, at(i.path), zones, time, `$.inputs[${n}]`)),
     lexicons,
@@ -157,9 +168,10 @@ export async function runStudy(
       for (const a of auditors) a.auditor.add({ id: entry.id, person: entry.person, text: entry.text, bin });
     },
   });
-  const reducers = parseReducers(study.series.aggregate);
   const series = await runSeries({
-    ...seriesOptionsFrom({ ...study.series }),
+    ...seriesOptions,
+    ...(windows ? { windows } : {}),
+    zoneOn: zoneOnDay(zones),
     scores: score.scoresPath,
     out: join(outDir, 'series-long.csv'),
     reducers: typeof reducers === 'string' ? undefined : reducers,
@@ -189,7 +201,7 @@ export async function runStudy(
   }
   outputs.push(...Object.values(stages).flatMap((s) => s.outputs));
   const inputs: FileRecord[] = [...score.inputs];
-  for (const extra of [study.zones]) {
+  for (const extra of [study.zones, study.ratings?.path, study.series.windows]) {
     if (!extra) continue;
     const d = await fileDigest(at(extra));
     inputs.push({ path: extra, sha256: d.sha256, bytes: d.bytes, rows: await dataRows(at(extra)) });

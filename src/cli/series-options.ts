@@ -16,6 +16,8 @@ export function addSeriesOptions(command: Command): Command {
     .option('--max-fill <bins>', 'longest run of missing bins that may be filled', '1')
     .option('--detrend', 'add <score>.detrended: residuals from each person\'s linear trend (raw columns kept)')
     .option('--aggregate <spec>', 'per-column bin reducer: weighted (word-weighted mean), mean (entry mean) or sum, as COL=REDUCER[,…] or one reducer for all')
+    .option('--windows <file>', 'per-person study windows: CSV with person, from, to (local dates); bins outside are marked outside_window')
+    .option('--zones <file>', 'the zone table used when scoring (person, zone[, from]): days are laid out in the zone in force, also on days without entries')
     .option('--from <date>', 'first local date of a common grid for everyone (YYYY-MM-DD)')
     .option('--to <date>', 'last local date of the common grid (YYYY-MM-DD)');
 }

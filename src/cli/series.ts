@@ -2,6 +2,9 @@ import type { Command } from 'commander';
 import { dirname, join } from 'node:path';
 import { writeFileAtomic } from '../io/atomic-write.js';
 import { runSeries } from '../io/run-series.js';
+import { readWindowsFile } from '../io/read-windows-file.js';
+import { readZoneFile } from '../io/read-zone-file.js';
+import { zoneOnDay } from '../series/zone-on-day.js';
 import { dataPackage } from '../report/data-dictionary.js';
 import { addSeriesOptions, parseReducers, seriesOptionsFrom } from './series-options.js';
 
@@ -15,8 +18,11 @@ export function registerSeries(program: Command): void {
   addSeriesOptions(command);
   command.action(async (scores: string, opts: Record<string, unknown>) => {
     const reducers = parseReducers(opts.aggregate as string | undefined);
+    const zones = opts.zones ? await readZoneFile(String(opts.zones)) : undefined;
     const result = await runSeries({
       ...seriesOptionsFrom(opts),
+      ...(opts.windows ? { windows: await readWindowsFile(String(opts.windows)) } : {}),
+      ...(zones ? { zoneOn: zoneOnDay(zones) } : {}),
       scores,
       out: String(opts.out),
       reducers: typeof reducers === 'string' ? undefined : reducers,

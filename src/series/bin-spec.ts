@@ -64,3 +64,15 @@ export function inExcludedHours(minute: number, range: [number, number] | undefi
   const [start, end] = range;
   return start < end ? minute >= start && minute < end : minute >= start || minute < end;
 }
+
+/**
+ * True when a bin of `length` minutes starting at local minute-of-day `start` lies wholly inside
+ * the excluded range (which may wrap midnight). Bins that only overlap it keep their other entries.
+ */
+export function binInExcludedHours(start: number, length: number, range: [number, number] | undefined): boolean {
+  if (!range) return false;
+  const [from, to] = range;
+  const rangeLength = (to - from + 1440) % 1440;
+  const offset = (start - from + 1440) % 1440;
+  return length <= rangeLength && offset + length <= rangeLength;
+}

@@ -1,5 +1,5 @@
 import { addToBin, binEntries, binMatched, binWords, createBinStore, newBinSlot, reduceBin, type BinReducer, type BinStore } from './bin-accumulator.js';
-import { inExcludedHours, type BinSpec } from './bin-spec.js';
+import { binInExcludedHours, inExcludedHours, type BinSpec } from './bin-spec.js';
 import { dateOfDayNumber, dayStartInstant, localDayOf } from './local-day.js';
 
 /** Why a bin has no value. */
@@ -25,6 +25,8 @@ export interface SeriesOptions {
   windows?: ReadonlyMap<string, { from: number; to: number }>;
   /** A common grid for everyone (local day numbers, inclusive); bins outside a person's window are `outside_window`. */
   span?: { from: number; to: number };
+  /** The person's zone on a local day (from a zone table with effective dates), when known; else taken from their entries. */
+  zoneOn?: (person: string, day: number) => string | undefined;
 }
 
 /** One entry as the series stage needs it. */
@@ -128,7 +130,8 @@ export function addSeriesEntry(state: SeriesState, entry: SeriesEntry): EntryPla
     binStart = start + index * bin.minutes * 60000;
   }
   const wallMinute = (minuteOfDay + dayStart) % 1440;
-  const excluded = excludeHours !== undefined && inExcludedHours(bin.minutes > 0 ? localDayOf(binStart, entry.zone, 0).minuteOfDay : wallMinute, excludeHours);
+  // An entry is excluded by its own local clock time, whatever the bin length.
+  const excluded = excludeHours !== undefined && inExcludedHours(wallMinute, excludeHours);
   if (excluded) {
     state.excludedEntries++;
     return { day, binStart, excluded };
@@ -179,10 +182,15 @@ function personGrid(state: SeriesState, bins: PersonBins, person: string): GridB
   const { options } = state;
   const dataFirst = bins.firstDay;
   const dataLast = bins.lastDay;
+  // The grid covers the study window (a common span, the person's own window, or first to last
+  // activity) and always every day with entries: bins outside the window are rows marked
+  // `outside_window`, so no entry is lost from the series without a trace.
   const own = options.windows?.get(person);
-  const window = own ?? (options.span ? undefined : { from: dataFirst, to: dataLast });
-  const grid = options.span ?? window ?? { from: dataFirst, to: dataLast };
-  const zoneOn = zoneTimeline(bins.dayZones);
+  const limits = [options.span, own].filter((w): w is { from: number; to: number } => w !== undefined);
+  const window = limits.length > 0 ? { from: Math.max(...limits.map((w) => w.from)), to: Math.min(...limits.map((w) => w.to)) } : { from: dataFirst, to: dataLast };
+  const grid = { from: Math.min(options.span?.from ?? own?.from ?? dataFirst, dataFirst), to: Math.max(options.span?.to ?? own?.to ?? dataLast, dataLast) };
+  const timeline = zoneTimeline(bins.dayZones);
+  const zoneOn = (day: number): string => options.zoneOn?.(person, day) ?? timeline(day);
   const { bin } = options;
   const out: GridBin[] = [];
   const inWindow = (day: number): boolean => (window ? day >= window.from && day <= window.to : true);
@@ -204,7 +212,7 @@ function personGrid(state: SeriesState, bins: PersonBins, person: string): GridB
           day,
           binOfDay: k + 1,
           slots: slotList(bins.slots.get(day * KEY_SCALE + k)),
-          excluded: inExcludedHours(wallMinute, options.excludeHours),
+          excluded: binInExcludedHours(wallMinute, (Math.min(start + size, dayEnd) - start) / 60000, options.excludeHours),
           outside: !inWindow(day),
         });
       }

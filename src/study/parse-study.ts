@@ -36,6 +36,8 @@ export interface StudySeries {
   aggregate?: string;
   from?: string;
   to?: string;
+  /** Per-person study windows file (person, from, to). */
+  windows?: string;
 }
 
 export interface Study {
@@ -69,7 +71,7 @@ export interface StudyProblem {
 const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
 const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
 const TIME_KEYS = ['format', 'epoch', 'dstGap', 'dstOverlap'];
-const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to'];
+const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'windows'];
 const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names', 'aggregatesOnly'];
 
 /** Levenshtein distance, for "did you mean" hints. */
@@ -168,7 +170,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   const series = isObject(json.series) ? json.series : {};
   if (json.series !== undefined && !isObject(json.series)) problems.push({ path: '$.series', message: 'expected an object such as {"bin": "1d", "dayStart": "04:00", "minWords": 10}' });
   unknownKeys(series, SERIES_KEYS, '$.series', problems);
-  for (const key of ['bin', 'dayStart', 'excludeHours', 'aggregate', 'from', 'to']) need(series[key] === undefined || typeof series[key] === 'string', `$.series.${key}`, 'expected a string');
+  for (const key of ['bin', 'dayStart', 'excludeHours', 'aggregate', 'from', 'to', 'windows']) need(series[key] === undefined || typeof series[key] === 'string', `$.series.${key}`, 'expected a string');
   for (const key of ['minWords', 'maxFill']) need(series[key] === undefined || (Number.isInteger(series[key]) && (series[key] as number) >= 0), `$.series.${key}`, 'expected a whole number ≥ 0');
   need(series.fill === undefined || ['none', 'carry', 'linear'].includes(series.fill as string), '$.series.fill', 'expected none, carry or linear');
   need(series.detrend === undefined || typeof series.detrend === 'boolean', '$.series.detrend', 'expected true or false');
@@ -217,6 +219,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
         aggregate: series.aggregate as string | undefined,
         from: series.from as string | undefined,
         to: series.to as string | undefined,
+        windows: series.windows as string | undefined,
       },
       ratings,
       dynamics,

@@ -110,12 +110,13 @@ describe('daily and hourly bins follow the IANA tz database clock changes', () =
 
 /*
  * Hand-worked example (common practice for diary data; values worked out by hand below).
- * Zone UTC, 3-hour bins, excluded hours 00:00-07:00 (bins starting 00:00, 03:00, 06:00), min 3 words.
+ * Zone UTC, 3-hour bins, excluded hours 00:00-07:00 (the bins starting 00:00 and 03:00 lie wholly inside;
+ * the 06:00 bin only overlaps, so it would keep entries from 07:00 on), min 3 words.
  *
  *  t  bin (UTC)        entries (words·value)            missing          value (weighted)
  *  0  05-04 00:00      -                                excluded_hours
  *  1  05-04 03:00      -                                excluded_hours
- *  2  05-04 06:00      -                                excluded_hours
+ *  2  05-04 06:00      -                                no_text
  *  3  05-04 09:00      09:10 10·2, 10:00 30·4           observed         (20+120)/40 = 3.5  (mean 3, sum 6)
  *  4  05-04 12:00      -                                no_text
  *  5  05-04 15:00      15:30 5·1                        observed         1
@@ -123,14 +124,14 @@ describe('daily and hourly bins follow the IANA tz database clock changes', () =
  *  7  05-04 21:00      21:05 10·5                       observed         5
  *  8  05-05 00:00      02:00 10·7 (excluded entry)      excluded_hours
  *  9  05-05 03:00      -                                excluded_hours
- * 10  05-05 06:00      -                                excluded_hours
+ * 10  05-05 06:00      -                                no_text
  * 11  05-05 09:00      09:00 4·3                        observed         3
  * 12  05-05 12:00      12:00 6·0                        observed         0  (a real zero)
  * 13..15 15:00-21:00   -                                no_text
  *
  * Person mean over observed bins: (3.5 + 1 + 5 + 3 + 0) / 5 = 2.5; within = value − 2.5.
  * lag_valid only at t = 12 (t = 11 observed and adjacent): lag1 = 3, within_lag1 = 0.5. Not at
- * t = 11: its previous bin lies in excluded hours (the overnight lag problem); not at 5 or 7:
+ * t = 11: its previous bin (06:00, after the excluded night) has no text; not at 5 or 7:
  * the previous bin is missing.
  */
 const WORKED: Array<[string, number, number]> = [
@@ -150,8 +151,8 @@ describe('hand-worked example: centring, gap-aware lags, fill, detrend, reducers
     const rows = worked();
     expect(rows.map((r) => r.t)).toEqual([...Array(16).keys()]);
     expect(rows.map((r) => r.missing)).toEqual([
-      'excluded_hours', 'excluded_hours', 'excluded_hours', '', 'no_text', '', 'too_few_words', '',
-      'excluded_hours', 'excluded_hours', 'excluded_hours', '', '', 'no_text', 'no_text', 'no_text',
+      'excluded_hours', 'excluded_hours', 'no_text', '', 'no_text', '', 'too_few_words', '',
+      'excluded_hours', 'excluded_hours', 'no_text', '', '', 'no_text', 'no_text', 'no_text',
     ]);
     expect(rows.map((r) => r.values[0])).toEqual([undefined, undefined, undefined, 3.5, undefined, 1, undefined, 5, undefined, undefined, undefined, 3, 0, undefined, undefined, undefined]);
     expect(rows.map((r) => r.entries)).toEqual([0, 0, 0, 2, 0, 1, 1, 1, 0, 0, 0, 1, 1, 0, 0, 0]);
