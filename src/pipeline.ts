@@ -161,7 +161,7 @@ export async function runStudy(
     out: join(outDir, 'scores.csv'),
     keepText: study.keepText,
     redact,
-    person,
+    ...(key ? { person } : {}),
     onProgress: options.onProgress,
     onRawEntry: auditors.length === 0 ? undefined : (entry) => {
       const bin = dateOfDayNumber(localDayOf(entry.instant, entry.zone, dayStart).day);
@@ -212,7 +212,12 @@ export async function runStudy(
     command: `lexichron run ${studyPath}`,
     inputs,
     lexicons: score.lexicons,
-    parameters: { study, seed },
+    parameters: {
+      // Person ids in the recorded study are the ones written in the outputs (pseudonyms when a key was given).
+      study: { ...study, inputs: study.inputs.map((i) => (i.person ? { ...i, person: person(i.person) } : i)), privacy: study.privacy ? { ...study.privacy, keyFile: study.privacy.keyFile ? '(key file, not recorded)' : undefined, names: undefined } : undefined },
+      seed,
+      privacy: { pseudonymized: key !== undefined, aggregatesOnly: privacy.aggregatesOnly === true, redactedNames: privacy.names?.length ?? 0 },
+    },
     reconciliation: score.reconciliation,
     stages: {
       series: { persons: series.persons, bins: series.bins, observed: series.observed, missing: series.missing, entries: series.entries, excludedEntries: series.excludedEntries, rejected: series.rejected, columns: series.columns },

@@ -1,9 +1,26 @@
-import { createHash } from 'node:crypto';
+import { readFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { inputError, usageError } from '../errors.js';
 import type { Command } from 'commander';
 import { forgetPerson } from '../io/forget-person.js';
 import { writeReport } from '../io/write-report.js';
 import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
 import { pseudonymizePerson } from '../privacy/pseudonymize-person.js';
+
+/** Whether the study's manifest (or its scores sidecar) says person ids were pseudonymized. */
+async function studyIsPseudonymized(dir: string): Promise<boolean> {
+  for (const [file, pick] of [
+    ['manifest.json', (m: Record<string, any>) => m.parameters?.privacy?.pseudonymized],
+    ['scores.csv.meta.json', (m: Record<string, any>) => m.options?.pseudonymized],
+  ] as const) {
+    try {
+      if (pick(JSON.parse(await readFile(join(dir, file), 'utf8')) as Record<string, any>) === true) return true;
+    } catch {
+      // no such file, or not JSON: look at the next
+    }
+  }
+  return false;
+}
 
 /** `lexichron forget PERSON --study DIR` */
 export function registerForget(program: Command): void {
@@ -14,16 +31,22 @@ export function registerForget(program: Command): void {
     .requiredOption('--study <dir>', 'the study\'s output folder')
     .option('--pseudonym-key-file <file>', `key used to pseudonymize the study (default: the ${PSEUDONYM_KEY_ENV} environment variable)`)
     .action(async (person: string, opts: Record<string, unknown>) => {
+      const study = String(opts.study);
       const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
+      if (!key && (await studyIsPseudonymized(study))) {
+        throw usageError(`The outputs in \`${study}\` hold pseudonyms, not raw ids: pass the study's key with --pseudonym-key-file (or set ${PSEUDONYM_KEY_ENV}) so that \`${person}\` can be found.`);
+      }
       const pseudonym = key ? pseudonymizePerson(person, key) : undefined;
       const ids = pseudonym ? [person, pseudonym] : [person];
-      // never write the raw id: record the pseudonym, or without a key an unkeyed digest marked as such
-      const record = pseudonym ?? `sha256:${createHash('sha256').update(person.trim(), 'utf8').digest('hex').slice(0, 16)}`;
-      const result = await forgetPerson(String(opts.study), { ids, record, at: new Date().toISOString() });
+      // Never write the raw id (nor an unkeyed digest, which short ids make easy to reverse).
+      const record = pseudonym ?? 'withdrawn person (outputs not pseudonymized; id not recorded)';
+      const result = await forgetPerson(study, { ids, record, at: new Date().toISOString(), onlyIfFound: true });
+      if (result.changed.length === 0 && result.deleted.length === 0) {
+        throw inputError(`No output in \`${study}\` holds \`${person}\`: nothing was removed and nothing was recorded. Check the id as written in the inputs${key ? '' : ' (and pass the key if the study used pseudonyms)'}.`);
+      }
       const lines = [`recorded as ${record} in manifest.json`];
       for (const c of result.changed) lines.push(`removed ${c.removed} row(s) from ${c.file}`);
       for (const d of result.deleted) lines.push(`deleted ${d}`);
-      if (result.changed.length === 0 && result.deleted.length === 0) lines.push('no output held this person');
       // The report is rebuilt from the cleaned files; other stale files are named for the researcher.
       const stale = [];
       for (const s of result.stale) {

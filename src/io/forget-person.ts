@@ -16,6 +16,8 @@ export interface ForgetOptions {
   record: string;
   /** Time of the removal (RFC 3339), passed in by the caller. */
   at: string;
+  /** Record nothing in the manifest when no output held the person. */
+  onlyIfFound?: boolean;
 }
 
 /** What forgetPerson did, with paths relative to the study folder. */
@@ -47,8 +49,8 @@ function idPattern(ids: readonly string[]): RegExp {
 }
 
 /** Rewrites a CSV/TSV/JSON Lines file without the person's rows; returns the rows removed (0 leaves the file untouched). */
-async function filterLines(path: string, format: 'csv' | 'tsv' | 'jsonl', ids: ReadonlySet<string>): Promise<number> {
-  const filter = createPersonRowFilter(ids, format);
+async function filterLines(path: string, format: 'csv' | 'tsv' | 'jsonl', ids: ReadonlySet<string>, mentions: RegExp): Promise<number> {
+  const filter = createPersonRowFilter(ids, format, mentions);
   const writer = await openAtomicLineWriter(path);
   const input = createReadStream(path, { encoding: 'utf8' });
   try {
@@ -102,7 +104,7 @@ export async function forgetPerson(dir: string, options: ForgetOptions): Promise
       continue;
     }
     if (ext === '.csv' || ext === '.tsv' || ext === '.jsonl' || ext === '.ndjson') {
-      const removed = await filterLines(path, ext === '.tsv' ? 'tsv' : ext === '.csv' ? 'csv' : 'jsonl', ids);
+      const removed = await filterLines(path, ext === '.tsv' ? 'tsv' : ext === '.csv' ? 'csv' : 'jsonl', ids, pattern);
       if (removed > 0) result.changed.push({ file: rel, removed });
       continue;
     }
@@ -128,6 +130,7 @@ export async function forgetPerson(dir: string, options: ForgetOptions): Promise
       if (pattern.test(await readFile(path, 'utf8'))) result.stale.push(rel);
     }
   }
+  if (options.onlyIfFound && result.changed.length === 0 && result.deleted.length === 0) return result;
   let manifest: Record<string, unknown> = {};
   try {
     const parsed = JSON.parse(await readFile(manifestPath, 'utf8')) as unknown;

@@ -178,7 +178,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       columns,
       inputs,
       reconciliation,
-      options: { keepText, time: options.time },
+      options: { keepText, time: options.time, pseudonymized: options.person !== undefined },
     };
     await scores.commit();
     await rejects.commit();

@@ -45,10 +45,11 @@ function quoteCount(text: string): number {
  * other line byte for byte as it was:
  * - CSV (`,`) and TSV (tab) with a header: rows whose `person` column equals one of `ids`
  *   (records spanning lines inside RFC 4180 quotes are kept together); without a `person`
- *   column nothing is removed;
+ *   column, rows with a field that names one of the ids as a whole word (`mentions`, e.g. a
+ *   diagnostic message "the self-report of `p07` …"), or nothing when `mentions` is not given;
  * - JSON Lines: lines holding an object whose `person` equals one of `ids`; other lines are kept.
  */
-export function createPersonRowFilter(ids: ReadonlySet<string>, format: 'csv' | 'tsv' | 'jsonl'): PersonRowFilter {
+export function createPersonRowFilter(ids: ReadonlySet<string>, format: 'csv' | 'tsv' | 'jsonl', mentions?: RegExp): PersonRowFilter {
   let removed = 0;
   let personIndex: number | undefined;
   let header = true;
@@ -91,7 +92,7 @@ export function createPersonRowFilter(ids: ReadonlySet<string>, format: 'csv' | 
         if (i >= 0) personIndex = i;
         return lines;
       }
-      if (personIndex !== undefined && ids.has((fields[personIndex] ?? '').trim())) {
+      if (personIndex !== undefined ? ids.has((fields[personIndex] ?? '').trim()) : mentions !== undefined && fields.some((f) => mentions.test(f))) {
         removed++;
         return [];
       }

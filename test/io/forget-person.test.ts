@@ -34,16 +34,17 @@ describe('forgetPerson removes a person from every output of a study folder', ()
     expect(existsSync(join(dir, 'people/pA.json'))).toBe(false);
     expect(existsSync(join(dir, 'people/plot-pA.svg'))).toBe(false);
     expect(readFileSync(join(dir, 'series-long.csv'), 'utf8')).toBe('person,t,value\npB,0,1\npB,1,2\n');
-    expect(readFileSync(join(dir, 'rejects.csv'), 'utf8')).toBe('file,line,code,message\nx,1,bad_time,pA\n'); // no person column: untouched
+    // No person column: a row whose message names the person (as diagnostics do) is removed too.
+    expect(readFileSync(join(dir, 'rejects.csv'), 'utf8')).toBe('file,line,code,message\n');
     expect(result).toEqual({
-      changed: [{ file: 'entries.jsonl', removed: 1 }, { file: 'scores.csv', removed: 2 }, { file: 'summary.json', removed: 3 }, { file: 'manifest.json', removed: 1 }],
+      changed: [{ file: 'entries.jsonl', removed: 1 }, { file: 'rejects.csv', removed: 1 }, { file: 'scores.csv', removed: 2 }, { file: 'summary.json', removed: 3 }, { file: 'manifest.json', removed: 1 }],
       deleted: ['people/pA.json', 'people/plot-pA.svg'],
       stale: ['report.html'],
     });
     expect(JSON.parse(readFileSync(join(dir, 'manifest.json'), 'utf8'))).toEqual({
       tool: 'lexichron',
       persons: ['pB'],
-      forgotten: [{ person: 'pA', at: '2025-04-01T10:00:00Z', files: ['entries.jsonl', 'manifest.json', 'people/pA.json', 'people/plot-pA.svg', 'scores.csv', 'summary.json'] }],
+      forgotten: [{ person: 'pA', at: '2025-04-01T10:00:00Z', files: ['entries.jsonl', 'manifest.json', 'people/pA.json', 'people/plot-pA.svg', 'rejects.csv', 'scores.csv', 'summary.json'] }],
     });
   });
 
