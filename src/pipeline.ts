@@ -195,7 +195,7 @@ export async function runStudy(
   ];
   await writeFileAtomic(join(outDir, 'datapackage.json'), JSON.stringify(dataPackage(study.name, study.name, resources), null, 2) + '\n');
   const outputs: FileRecord[] = [];
-  for (const path of [score.scoresPath, score.rejectsPath, score.metaPath, series.longPath, series.widePath, series.eventsPath, series.rejectsPath, join(outDir, 'datapackage.json')]) {
+  for (const path of [score.scoresPath, score.rejectsPath, score.metaPath, series.longPath, `${series.longPath}.meta.json`, series.widePath, series.eventsPath, series.rejectsPath, join(outDir, 'datapackage.json')]) {
     const d = await fileDigest(path);
     outputs.push({ path: path.slice(outDir.length + 1), sha256: d.sha256, bytes: d.bytes });
   }

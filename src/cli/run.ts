@@ -19,6 +19,8 @@ export function registerRun(program: Command): void {
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;
       process.stderr.write(`series: ${s.persons} persons, ${s.bins} bins, ${s.observed} observed\n`);
+      const seriesRejected = Object.values(s.rejected).reduce((a, b) => a + b, 0);
+      if (seriesRejected > 0) process.stderr.write(`series: ${seriesRejected} scores rows not used: see ${relative(process.cwd(), s.rejectsPath)}\n`);
       for (const [name, stage] of Object.entries(result.stages)) process.stderr.write(`${name}: ${stage.outputs.length} files\n`);
       if (result.report) process.stderr.write(`report: ${relative(process.cwd(), result.report.path)}\n`);
       process.stdout.write(`outputs in ${relative(process.cwd(), result.outDir) || '.'}/ (manifest.json lists every file with its SHA-256)\n`);

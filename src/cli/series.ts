@@ -1,11 +1,10 @@
 import type { Command } from 'commander';
 import { dirname, join } from 'node:path';
-import { writeFileAtomic } from '../io/atomic-write.js';
 import { runSeries } from '../io/run-series.js';
 import { readWindowsFile } from '../io/read-windows-file.js';
 import { readZoneFile } from '../io/read-zone-file.js';
 import { zoneOnDay } from '../series/zone-on-day.js';
-import { dataPackage } from '../report/data-dictionary.js';
+import { mergeDataPackage } from '../io/merge-data-package.js';
 import { addSeriesOptions, parseReducers, seriesOptionsFrom } from './series-options.js';
 
 /** `lexichron series SCORES --bin DURATION --out FILE` */
@@ -28,8 +27,10 @@ export function registerSeries(program: Command): void {
       reducers: typeof reducers === 'string' ? undefined : reducers,
       allReducer: typeof reducers === 'string' ? reducers : undefined,
     });
-    await writeFileAtomic(join(dirname(String(opts.out)), 'datapackage.json'), JSON.stringify(dataPackage('lexichron-series', 'lexichron series', result.resources), null, 2) + '\n');
+    await mergeDataPackage(join(dirname(String(opts.out)), 'datapackage.json'), 'lexichron-series', 'lexichron series', result.resources);
     const missing = Object.entries(result.missing).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
+    const rejected = Object.entries(result.rejected);
+    if (rejected.length > 0) process.stderr.write(`${rejected.reduce((a, [, n]) => a + n, 0)} scores rows not used (${rejected.map(([k, n]) => `${k} ${n}`).join(', ')}): see ${result.rejectsPath}\n`);
     process.stderr.write(`${result.persons} persons, ${result.bins} bins (${result.observed} observed; missing: ${missing}); ${result.entries} entries, ${result.excludedEntries} in excluded hours\nlong:   ${result.longPath}\nwide:   ${result.widePath}\nevents: ${result.eventsPath}\n`);
   });
 }

@@ -88,7 +88,7 @@ function countNewlines(fields: readonly string[]): number {
 function fieldProblem(fields: readonly string[], maxField: number): { code: string; message: string } | undefined {
   for (const field of fields) {
     if (field.length > maxField) {
-      return { code: 'field_too_long', message: `a field holds ${field.length} characters, more than the limit of ${maxField}; split the text or raise --max-field` };
+      return { code: 'field_too_long', message: `a field holds ${field.length} characters, more than the limit of ${maxField}; split such long texts into several entries` };
     }
     if (field.includes('\uFFFD')) {
       return { code: 'invalid_utf8', message: 'the row holds bytes that are not valid UTF-8 (or a U+FFFD replacement character); re-save the file as UTF-8' };

@@ -45,7 +45,7 @@ export async function readLexicon(nameOrPath: string): Promise<Lexicon> {
   }
   const { lexicon, problems } = parseLexicon(text);
   if (!lexicon) {
-    const shown = problems.slice(0, 20).map((p) => `  line ${p.line}: ${p.message}`).join('\n');
+    const shown = [...problems].sort((a, b) => a.line - b.line).slice(0, 20).map((p) => `  line ${p.line}: ${p.message}`).join('\n');
     const more = problems.length > 20 ? `\n  … and ${problems.length - 20} more` : '';
     throw usageError(`Cannot use lexicon \`${basename(path)}\`: ${problems.length} problem${problems.length === 1 ? '' : 's'}; fix them and run again:\n${shown}${more}`);
   }
@@ -64,7 +64,7 @@ async function readOverriddenLexicon(path: string, depth: number): Promise<Lexic
     throw usageError(`Cannot read override file \`${path}\`: no such file; check the path.`);
   }
   const fail = (problems: ReadonlyArray<{ line: number; message: string }>): never => {
-    const shown = problems.slice(0, 20).map((p) => `  line ${p.line}: ${p.message}`).join('\n');
+    const shown = [...problems].sort((a, b) => a.line - b.line).slice(0, 20).map((p) => `  line ${p.line}: ${p.message}`).join('\n');
     throw usageError(`Cannot use override file \`${basename(path)}\`: ${problems.length} problem${problems.length === 1 ? '' : 's'}; fix them and run again:\n${shown}`);
   };
   const { overrides, problems } = parseLexiconOverrides(text);

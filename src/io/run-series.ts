@@ -13,7 +13,9 @@ import type { BinReducer } from '../series/bin-accumulator.js';
 import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesOptions } from '../series/build-series.js';
 import { dateOfDayNumber } from '../series/local-day.js';
 import type { Diagnostic } from '../types.js';
-import { openAtomicLineWriter } from './atomic-write.js';
+import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
+import { fileDigest } from './run-score.js';
+import { TOOL_VERSION } from '../version.js';
 
 /** Score column metadata from a scores sidecar (`scores.csv.meta.json`). */
 export interface ScoreColumnMeta {
@@ -129,7 +131,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       const zone = r.zone ?? '';
       const words = Number(r.words);
       if (!isValidZone(zone)) {
-        await reject({ code: 'unknown_zone', message: `unknown time zone \`${zone}\`; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
+        await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone \`${zone}\`; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
         continue;
       }
       if (!(r.person ?? '').trim() || !Number.isFinite(instant) || !Number.isInteger(words) || words < 0) {
@@ -210,6 +212,21 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       await wide.commit();
       await events.commit();
       await rejects.commit();
+      // A sidecar naming what made the series: the scores file (with its hash) and the lexicons
+      // (name, version, content hash) recorded by the score stage.
+      const scoresDigest = await fileDigest(options.scores);
+      const lexicons = await readFile(`${options.scores}.meta.json`, 'utf8').then((t) => (JSON.parse(t) as { lexicons?: unknown }).lexicons, () => undefined);
+      await writeFileAtomic(
+        `${options.out}.meta.json`,
+        JSON.stringify({
+          tool: { name: 'lexichron', version: TOOL_VERSION },
+          scores: { path: basename(options.scores), sha256: scoresDigest.sha256, bytes: scoresDigest.bytes },
+          lexicons: lexicons ?? 'unknown: the scores file has no .meta.json sidecar',
+          options: { bin: options.bin.text, dayStart: options.dayStart, minWords: options.minWords, excludeHours: options.excludeHours, fill: options.fill, maxFill: options.maxFill, detrend: options.detrend, span: options.span, windows: options.windows ? options.windows.size : 0 },
+          columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
+          counts: { persons: persons.length, bins, observed, missing, entries, excludedEntries: state.excludedEntries, rejected },
+        }, null, 2) + '\n',
+      );
       const describe = (name: string): string | undefined => {
         const base = name.replace(/@\d+$/, '');
         const m = metas.find((x) => x.name === base);

@@ -89,7 +89,7 @@ export function tableResource(name: string, path: string, header: readonly strin
 export function dataPackage(name: string, title: string, resources: ReadonlyArray<TableResource>): Record<string, unknown> {
   return {
     profile: 'tabular-data-package',
-    name: name.toLowerCase().replace(/[^a-z0-9._-]+/g, '-'),
+    name: name.toLowerCase().replace(/[^a-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '') || 'lexichron-study',
     title,
     resources,
   };
