@@ -15,6 +15,8 @@ const HEADER_FOLLOW = /^\s*(?:sent|date|to|subject|gesendet|datum|an|betreff|env
 /** The signature delimiter "-- " of RFC 3676 section 4.3 (the trailing space is often lost, so "--" alone counts too). */
 const SIGNATURE = /^-- ?$/;
 const QUOTED = /^\s*>/;
+/** A device footer that mail programs append on their own ("Sent from my phone"), in a few languages. */
+const DEVICE_FOOTER = /^\s*(?:sent from my|sent from|envoyé de mon|gesendet von meinem|verzonden vanaf mijn|enviado desde mi|inviato da)\b.{0,40}$/i;
 
 function isHeaderBlock(lines: readonly string[], at: number): boolean {
   if (!HEADER_LINE.test(lines[at] ?? '')) return false;
@@ -30,6 +32,7 @@ function isHeaderBlock(lines: readonly string[], at: number): boolean {
  * - removes reply attributions ("On <date>, <name> wrote:", holding a digit, also when wrapped over two lines) and quoted lines
  *   starting with `>` (RFC 3676 section 4.5); when an attribution is followed by no `>` lines
  *   (quoting lost in an HTML conversion), the rest is taken as the quote and cut;
+ * - drops a device footer ("Sent from my phone") standing last;
  * - collapses runs of blank lines and trims.
  * Returns the empty string when nothing of the sender's own remains.
  */
@@ -55,6 +58,8 @@ export function stripMailQuotes(body: string): string {
       continue;
     }
     if (QUOTED.test(line)) continue;
+    // A device footer on the last non-blank line is the mail program's words, not the sender's.
+    if (DEVICE_FOOTER.test(line) && lines.slice(i + 1).every((l) => l.trim() === '' || QUOTED.test(l))) continue;
     kept.push(line.replace(/\s+$/, ''));
   }
   return kept.join('\n').replace(/\n{3,}/g, '\n\n').trim();

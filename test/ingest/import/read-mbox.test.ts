@@ -134,6 +134,10 @@ describe('stripMailQuotes', () => {
   it('does not take an ordinary sentence starting with "On" for an attribution', () => {
     expect(stripMailQuotes('On the whole it was fine, as my sister wrote:\nI agree.')).toBe('On the whole it was fine, as my sister wrote:\nI agree.');
   });
+  it('drops a device footer standing last, but keeps the same words inside the message (common practice)', () => {
+    expect(stripMailQuotes('See you at the hives.\n\nSent from my phone\n')).toBe('See you at the hives.');
+    expect(stripMailQuotes('Sent from my phone, sorry for typos\nSee you at the hives.')).toBe('Sent from my phone, sorry for typos\nSee you at the hives.');
+  });
   it('cuts at an Outlook-style original message header block', () => {
     expect(stripMailQuotes('Fine by me.\n\n________________________________\nFrom: Bob\nSent: Monday\nTo: Ann\nSubject: plan\n\nOld text')).toBe('Fine by me.');
   });
