@@ -29,7 +29,7 @@ export function reliabilityChart(curve: ReliabilityCurve): string {
   const yt = niceTicks(minR, 1, 5);
   const y = linearScale(yt.domain, [yBottom, yTop]);
   const parts: string[] = [];
-  parts.push(axisVertical({ ticks: yt.ticks.map((v) => ({ value: v, label: formatValue(v, 1) })), scale: y, x: x0, y0: yTop, y1: yBottom, title: 'Reliability (Spearman–Brown, 0–1)', side: 'left', gridTo: x1 }));
+  parts.push(axisVertical({ ticks: yt.ticks.map((v) => ({ value: v, label: formatValue(v, 1) })), scale: y, x: x0, y0: yTop, y1: yBottom, title: minR < 0 ? 'Reliability (Spearman–Brown; below 0: halves disagree)' : 'Reliability (Spearman–Brown, 0–1)', side: 'left', gridTo: x1 }));
   parts.push(axisBottom(xt.ticks.map((v) => ({ value: v, label: groupThousands(v) })), x, yBottom, x0, x1, 'Words in the bin', yTop));
   const banded = pts.filter((p) => p.low !== undefined && p.high !== undefined);
   if (banded.length > 1) {
