@@ -66,8 +66,10 @@ export function personVariableSummary(series: BinnedSeries, options: SummaryOpti
     if (!acf.ok) notes.push(`ACF autocorrelation: ${acf.reason}`);
     if (!pearson.ok) notes.push(`Pearson autocorrelation: ${pearson.reason}`);
   }
-  const ready = lagPairs >= minLagPairs;
-  if (!ready) notes.push(`${lagPairs} valid lag pairs, fewer than the ${minLagPairs} needed for dynamic estimates`);
+  const constant = m.n > 1 && m.sumSquares === 0;
+  if (constant) notes.push('the series never changes, so it carries no dynamics to estimate');
+  const ready = lagPairs >= minLagPairs && !constant;
+  if (lagPairs < minLagPairs) notes.push(`${lagPairs} valid lag pairs, fewer than the ${minLagPairs} needed for dynamic estimates`);
   return {
     bins,
     observed,

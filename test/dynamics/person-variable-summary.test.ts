@@ -72,4 +72,12 @@ describe('personVariableSummary', () => {
     expect(s.ready).toBe(false);
     expect(s.notes[0]).toBe('no observed bins');
   });
+
+  it('does not call a series that never changes ready, however many lag pairs it has', () => {
+    const s = personVariableSummary({ values: [3, 3, 3, 3, 3], lagValid: [false, true, true, true, true] }, { minLagPairs: 2 });
+    expect(s.lagPairs).toBe(4);
+    expect(s.mssd).toBe(0);
+    expect(s.ready).toBe(false);
+    expect(s.notes.join(' ')).toContain('never changes');
+  });
 });
