@@ -37,7 +37,7 @@ export function registerScore(program: Command): void {
   command.addOption(new Option('--strict', 'exit with code 3 on the first rejected row\'s count (same as --max-rejects 0)'));
   command.action(async (inputs: string[], opts: Record<string, unknown>) => {
     if (!opts.timeZone && !opts.zones) {
-      throw usageError('No time zone given: times without an offset need the person\'s zone; pass --time-zone ZONE (e.g. Europe/Brussels) or --zones FILE.');
+      throw usageError('No time zone given: every entry needs its person\'s IANA zone, to read times without an offset and to place entries in local days; pass --time-zone ZONE (e.g. Europe/Brussels), or --zones FILE with each person\'s zone.');
     }
     if (opts.aggregatesOnly && opts.keepText) throw usageError('--aggregates-only and --keep-text contradict each other: drop one.');
     const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
