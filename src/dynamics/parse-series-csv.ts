@@ -18,7 +18,7 @@ export interface ParsedSeriesCsv {
 /**
  * Reads the text of a `series-long.csv` (docs/architecture.md) into one {@link PersonSeriesInput}
  * per person, indexed by the bin index `t` (bins absent from the file become missing with an
- * invalid lag). A small pure stand-in for `src/series/read-series.ts`. Non-numeric score cells and
+ * invalid lag). Pure: the caller reads the file. Non-numeric score cells and
  * rows with a bad `t` become Diagnostics (stage `dynamics`) and are treated as missing; a file
  * without the `person`, `t` or `lag_valid` column is an input error.
  */

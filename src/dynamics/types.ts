@@ -13,8 +13,8 @@ export interface BinnedSeries {
 }
 
 /**
- * A person's series as read from `series-long.csv` (structurally the same as the
- * `PersonSeries` of `src/series/read-series.ts`): one value array per column, in bin order.
+ * A person's series as parseSeriesCsv reads it from `series-long.csv`: one value array per
+ * column, in bin order.
  */
 export interface PersonSeriesInput {
   person: string;
