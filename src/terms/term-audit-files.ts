@@ -46,7 +46,7 @@ export function termAuditFiles(audit: TermAudit, top = 10): Record<string, strin
     ['category', 'over', 'items', 'rows', 'alpha', 'standardized_alpha', 'half_correlation', 'split_half', 'note'],
     audit.categories.map((c) => {
       const r = c.reliability;
-      return [c.category, r.over, String(r.items), String(r.rows), num(r.alpha), num(r.standardizedAlpha), num(r.halfCorrelation), num(r.splitHalf), [r.alphaReason, r.splitHalfReason].filter(Boolean).join('; ')];
+      return [c.category, r.over, String(r.items), String(r.rows), num(r.alpha), num(r.standardizedAlpha), num(r.halfCorrelation), num(r.splitHalf), [r.alphaReason, r.splitHalfReason, (r.alpha ?? 0) < 0 || (r.splitHalf ?? 0) < 0 ? 'below 0: the terms do not hang together in these rows (common with few hits per entry); read it as no internal consistency, not as a reliability' : undefined].filter(Boolean).join('; ')];
     }),
   );
   files[TERM_AUDIT_FILES.dropTopK] = csvDocument(
