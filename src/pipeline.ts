@@ -37,6 +37,7 @@ import { dateOfDayNumber, localDayOf } from './series/local-day.js';
 import { writeStudyAudit } from './io/write-study-audit.js';
 import { writeReport, type WriteReportResult } from './io/write-report.js';
 import { studyInput } from './io/study-input.js';
+import { isValidZone } from './ingest/zone-offset.js';
 import { readWindowsFile } from './io/read-windows-file.js';
 import { zoneOnDay } from './series/zone-on-day.js';
 import { TOOL_VERSION } from './version.js';
@@ -126,6 +127,9 @@ export async function runStudy(
   const at = (p: string): string => resolve(studyDir, p);
   const outDir = at(study.out);
   const lexicons = await loadLexicons(study.lexicons.map((l) => (l.includes('/') || l.endsWith('.tsv') ? at(l) : l)));
+  if (study.timeZone && !isValidZone(study.timeZone)) {
+    throw usageError(`Study file \`${studyPath}\`, $.timeZone: unknown time zone \`${study.timeZone}\`; expected an IANA name such as \`Europe/Brussels\`.`);
+  }
   const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
   const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap };
   const privacy = study.privacy ?? {};

@@ -1,4 +1,4 @@
-import { readFileSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { runStudy } from '../../src/pipeline.js';
 import { parseStudy } from '../../src/study/parse-study.js';
@@ -53,5 +53,19 @@ describe('study files that name donated exports', () => {
   it('names a mistyped key with its JSON path and the key it probably means', () => {
     const { problems } = parseStudy({ inputs: ['a.csv'], timeZone: 'UTC', out: 'out', seires: {} });
     expect(problems).toEqual([{ path: '$.seires', message: 'unknown key `seires`; did you mean `series`?' }]);
+  });
+});
+
+describe('study settings are checked before anything is scored', () => {
+  it('names the study key of a bad bin and leaves no scores behind', async () => {
+    tmp.write('t.csv', 'person,time,text\na,2026-03-02T10:00:00+01:00,good day\n');
+    tmp.write('bad-bin.json', JSON.stringify({ inputs: ['t.csv'], timeZone: 'Europe/Brussels', series: { bin: '1 day' }, out: 'out-bad' }));
+    await expect(runStudy(tmp.path('bad-bin.json'), { now: '2026-12-01T00:00:00.000Z' })).rejects.toThrow(/\$\.series: .*"bin" `1 day`|\$\.series: Bin `1 day`/);
+    expect(existsSync(tmp.path('out-bad/scores.csv'))).toBe(false);
+  });
+
+  it('names $.timeZone for an unknown zone', async () => {
+    tmp.write('bad-zone.json', JSON.stringify({ inputs: ['t.csv'], timeZone: 'Europe/Brusels', out: 'out-zone' }));
+    await expect(runStudy(tmp.path('bad-zone.json'), { now: '2026-12-01T00:00:00.000Z' })).rejects.toThrow('$.timeZone: unknown time zone `Europe/Brusels`');
   });
 });
