@@ -1,24 +1,12 @@
 import { readFileSync } from 'node:fs';
-import { describe, expect, it, vi } from 'vitest';
-import { main } from '../../src/cli/main.js';
+import { describe, expect, it } from 'vitest';
 import { pseudonymizePerson } from '../../src/privacy/pseudonymize-person.js';
+import { runCli } from '../support/run-cli.js';
 import { tempFolder } from '../support/temp-files.js';
 
 const tmp = tempFolder();
 
-async function cli(...args: string[]): Promise<{ code: number; stderr: string }> {
-  let stderr = '';
-  const spy = vi.spyOn(process.stderr, 'write').mockImplementation((chunk: string | Uint8Array) => {
-    stderr += String(chunk);
-    return true;
-  });
-  try {
-    return { code: await main(['node', 'lexichron', ...args]), stderr };
-  } finally {
-    spy.mockRestore();
-    process.exitCode = undefined;
-  }
-}
+const cli = runCli;
 
 const input = [
   'person,time,text',
