@@ -26,7 +26,7 @@ export function registerScore(program: Command): void {
     .description('score every entry of text exports with lexicons; one row per entry')
     .argument('<input...>', 'CSV, TSV, JSON Lines or JSON files with person, time and text')
     .option('-l, --lexicon <name-or-path>', 'a bundled lexicon name or a .lex.tsv file (repeatable; default afinn-165 and vader)', collect)
-    .requiredOption('-o, --out <file>', 'scores CSV to write (rejects go to <file>.rejects.csv, provenance to <file>.meta.json)')
+    .requiredOption('-o, --out <file>', 'scores CSV to write, e.g. out/scores.csv (rejects go to out/scores.rejects.csv, provenance to out/scores.csv.meta.json)')
     .option('--keep-text', 'also write each entry\'s text, redacted (off by default: outputs hold no raw text)')
     .option('--redact-names <file>', 'names (one per line) replaced by [name] in kept text; emails, phone numbers, URLs and @handles are always redacted')
     .option('--aggregates-only', 'write no participant text at all (refuses --keep-text)')
