@@ -1,5 +1,5 @@
 import dns from 'node:dns';
-import { readFileSync, existsSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import http from 'node:http';
 import https from 'node:https';
 import net from 'node:net';
@@ -148,5 +148,24 @@ describe('lexichron import', () => {
     expect(code).toBe(0);
     expect(readFileSync(out, 'utf8')).toBe('{"id":"diary.md:1","person":"P02","time":"2025-03-03T12:00:00-05:00","zone":"America/New_York","text":"A good day."}\n');
     expect(readFileSync(`${out}.rejects.csv`, 'utf8')).toMatch(/diary\.md,3,diary_bad_date,/);
+  });
+
+  it('runs a whole study (score, series, validation, dynamics, term audit, report) without any network use', async () => {
+    const rows = ['person,time,text'];
+    const ratings = ['person,time,mood'];
+    for (let d = 1; d <= 9; d++) {
+      for (const [p, mood] of [['a', 20 + d * 5], ['b', 70 - d * 3], ['c', 40 + (d % 3) * 10]] as const) {
+        rows.push(`${p},2026-03-0${d}T09:00:00+01:00,"a ${mood > 50 ? 'good happy' : 'sad tired'} day with friends, worried a little"`);
+        ratings.push(`${p},2026-03-0${d}T20:00:00+01:00,${mood}`);
+      }
+    }
+    mkdirSync(tmp.path('net'), { recursive: true });
+    tmp.write('net/texts.csv', rows.join('\n') + '\n');
+    tmp.write('net/ratings.csv', ratings.join('\n') + '\n');
+    tmp.write('net/study.json', JSON.stringify({ inputs: ['texts.csv'], timeZone: 'Europe/Brussels', lexicons: ['afinn-165', 'vader', 'daily-constructs'], ratings: { path: 'ratings.csv', scales: { mood: [0, 100] }, replicates: 50 }, dynamics: { surrogates: 5, libraries: 5 }, out: 'out' }));
+    const { code, stderr } = await cli('run', tmp.path('net/study.json'));
+    expect(code, stderr).toBe(0);
+    expect(readFileSync(tmp.path('net/out/report.html'), 'utf8')).toContain('<svg');
+    expect(attempts).toEqual([]);
   });
 });
