@@ -1,3 +1,4 @@
+import { addCoMoment, emptyCoMoments } from '../stats/co-moments.js';
 import { notEstimable, type StatResult } from '../stats/stat-result.js';
 
 /** Agreement between observed values and their estimates. */
@@ -18,12 +19,7 @@ export interface Skill {
  * fewer than 3 pairs or when either side is constant.
  */
 export function forecastSkill(observed: ArrayLike<number | undefined>, estimated: ArrayLike<number | undefined>): StatResult<Skill> {
-  let n = 0;
-  let mx = 0;
-  let my = 0;
-  let sxx = 0;
-  let syy = 0;
-  let sxy = 0;
+  const m = emptyCoMoments();
   let sae = 0;
   let sse = 0;
   const length = Math.min(observed.length, estimated.length);
@@ -31,17 +27,11 @@ export function forecastSkill(observed: ArrayLike<number | undefined>, estimated
     const x = observed[i];
     const y = estimated[i];
     if (x === undefined || y === undefined || !Number.isFinite(x) || !Number.isFinite(y)) continue;
-    n += 1;
-    const dx = x - mx;
-    mx += dx / n;
-    const dy = y - my;
-    my += dy / n;
-    sxx += dx * (x - mx);
-    syy += dy * (y - my);
-    sxy += dx * (y - my);
+    addCoMoment(m, x, y);
     sae += Math.abs(x - y);
     sse += (x - y) ** 2;
   }
+  const { n, sxx, syy, sxy } = m;
   if (n < 3) return notEstimable('too_few_predictions', `${n} estimates; at least 3 are needed for a skill`);
   if (!(sxx > 0) || !(syy > 0)) return notEstimable('zero_variance', 'observed or estimated values are constant');
   return { ok: true, rho: Math.max(-1, Math.min(1, sxy / Math.sqrt(sxx * syy))), mae: sae / n, rmse: Math.sqrt(sse / n), n };

@@ -1,3 +1,4 @@
+export { addCoMoment, emptyCoMoments, type CoMoments } from './co-moments.js';
 export { clusterBootstrap, type BootstrapInterval, type ClusterBootstrapOptions } from './cluster-bootstrap.js';
 export { cholesky, type CholeskyFactor } from './cholesky.js';
 export { cronbachAlpha, type CronbachAlpha } from './cronbach-alpha.js';

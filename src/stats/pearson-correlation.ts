@@ -1,4 +1,5 @@
 import { normalQuantile, studentTTwoSidedP } from './distributions.js';
+import { addCoMoment, emptyCoMoments } from './co-moments.js';
 import { isNumber } from './is-number.js';
 import { notEstimable, type StatResult } from './stat-result.js';
 
@@ -42,28 +43,15 @@ export function pearsonCorrelation<T = readonly [number | undefined, number | un
   options: CorrelationOptions = {},
 ): StatResult<Correlation> {
   const level = options.level ?? 0.95;
-  let n = 0;
-  let mx = 0;
-  let my = 0;
-  let sxx = 0;
-  let syy = 0;
-  let sxy = 0;
+  const m = emptyCoMoments();
   let i = -1;
   for (const d of values) {
     ++i;
     const x = xof(d, i);
     const y = yof(d, i);
-    if (!isNumber(x) || !isNumber(y)) continue;
-    n += 1;
-    const dx = x - mx;
-    const dy = y - my;
-    mx += dx / n;
-    my += dy / n;
-    sxx += dx * (x - mx);
-    syy += dy * (y - my);
-    sxy += dx * (y - my);
+    if (isNumber(x) && isNumber(y)) addCoMoment(m, x, y);
   }
-  return correlationFromMoments(n, sxx, syy, sxy, level);
+  return correlationFromMoments(m.n, m.sxx, m.syy, m.sxy, level);
 }
 
 /**

@@ -1,4 +1,6 @@
-import { normalQuantile, studentTTwoSidedP } from './distributions.js';
+import { addCoMoment, emptyCoMoments, type CoMoments } from './co-moments.js';
+import { studentTTwoSidedP } from './distributions.js';
+import { fisherInterval } from './pearson-correlation.js';
 import { isNumber } from './is-number.js';
 import { notEstimable, type StatResult } from './stat-result.js';
 
@@ -43,7 +45,7 @@ export function repeatedMeasuresCorrelation<T>(
   options: { level?: number } = {},
 ): StatResult<RepeatedMeasuresCorrelation> {
   const level = options.level ?? 0.95;
-  const groups = new Map<string, { n: number; mx: number; my: number; sxx: number; syy: number; sxy: number }>();
+  const groups = new Map<string, CoMoments>();
   let i = -1;
   for (const d of values) {
     ++i;
@@ -52,15 +54,8 @@ export function repeatedMeasuresCorrelation<T>(
     if (!isNumber(x) || !isNumber(y)) continue;
     const key = personof(d, i);
     let g = groups.get(key);
-    if (!g) groups.set(key, (g = { n: 0, mx: 0, my: 0, sxx: 0, syy: 0, sxy: 0 }));
-    g.n += 1;
-    const dx = x - g.mx;
-    const dy = y - g.my;
-    g.mx += dx / g.n;
-    g.my += dy / g.n;
-    g.sxx += dx * (x - g.mx);
-    g.syy += dy * (y - g.my);
-    g.sxy += dx * (y - g.my);
+    if (!g) groups.set(key, (g = emptyCoMoments()));
+    addCoMoment(g, x, y);
   }
   let n = 0;
   let k = 0;
@@ -86,12 +81,6 @@ export function repeatedMeasuresCorrelation<T>(
   if (!(syy > 0)) return notEstimable('zero_variance', 'the second variable never varies within a person');
   const r = Math.max(-1, Math.min(1, sxy / Math.sqrt(sxx * syy)));
   const p = Math.abs(r) === 1 ? 0 : studentTTwoSidedP(r * Math.sqrt(df / (1 - r * r)), df);
-  let ciLow: number | undefined;
-  let ciHigh: number | undefined;
-  if (df > 1) {
-    const half = normalQuantile((1 + level) / 2) / Math.sqrt(df - 1);
-    const z = Math.atanh(r);
-    [ciLow, ciHigh] = Math.abs(r) === 1 ? [r, r] : [Math.tanh(z - half), Math.tanh(z + half)];
-  }
+  const [ciLow, ciHigh] = fisherInterval(r, df - 1, level);
   return { ok: true, r, df, n, persons: k, personsTooFew: tooFew, p, ciLow, ciHigh, level, slope: sxy / sxx };
 }

@@ -1,3 +1,4 @@
+import { addCoMoment, emptyCoMoments, type CoMoments } from '../stats/co-moments.js';
 import { clusterBootstrap, type BootstrapInterval } from '../stats/cluster-bootstrap.js';
 import { groupBy } from '../stats/group-by.js';
 import { isNumber } from '../stats/is-number.js';
@@ -48,30 +49,10 @@ export interface PairAnalysis {
   verdict: Verdict;
 }
 
-interface PersonMoments {
-  n: number;
-  mx: number;
-  my: number;
-  sxx: number;
-  syy: number;
-  sxy: number;
-}
-
 /** Welford co-moments of one person's complete pairs. */
-function personMoments(list: readonly AlignedPair[]): PersonMoments {
-  const m: PersonMoments = { n: 0, mx: 0, my: 0, sxx: 0, syy: 0, sxy: 0 };
-  for (const d of list) {
-    const x = d.x as number;
-    const y = d.y as number;
-    m.n += 1;
-    const dx = x - m.mx;
-    const dy = y - m.my;
-    m.mx += dx / m.n;
-    m.my += dy / m.n;
-    m.sxx += dx * (x - m.mx);
-    m.syy += dy * (y - m.my);
-    m.sxy += dx * (y - m.my);
-  }
+function personMoments(list: readonly AlignedPair[]): CoMoments {
+  const m = emptyCoMoments();
+  for (const d of list) addCoMoment(m, d.x as number, d.y as number);
   return m;
 }
 
