@@ -1,6 +1,7 @@
 import type { CompiledLexicon, Hit } from '../lexicon/compile-lexicon.js';
 import { MIN_WILDCARD_STEM } from '../lexicon/parse-lexicon.js';
 import { TokenKind, type Tokens } from '../text/tokenize.js';
+import { hitWeight } from './hit-weight.js';
 
 /** Per-category totals of one lexicon over one entry. */
 export interface LexiconMatch {
@@ -100,17 +101,12 @@ export function matchLexicon(tokens: Tokens, lexicon: CompiledLexicon, onHit?: H
     const neg = hasNegation && isNegated(tokens, i, lexicon);
     onHit?.(hit, i, length, neg);
     if (neg) negated++;
-    if (!(neg && lexicon.negation === 'drop')) {
-      for (let k = 0; k < hit.categories.length; k++) {
-        const c = hit.categories[k] as number;
-        let w = hit.weights[k] as number;
-        if (neg && lexicon.negation === 'flip') {
-          if (lexicon.categories[c]?.aggregation === 'count') continue;
-          w = lexicon.reflect - w;
-        }
-        sums[c] = (sums[c] as number) + w;
-        counts[c] = (counts[c] as number) + 1;
-      }
+    for (let k = 0; k < hit.categories.length; k++) {
+      const c = hit.categories[k] as number;
+      const w = hitWeight(lexicon, c, hit.weights[k] as number, neg);
+      if (w === undefined) continue;
+      sums[c] = (sums[c] as number) + w;
+      counts[c] = (counts[c] as number) + 1;
     }
     i += length;
   }
