@@ -37,6 +37,8 @@ import { dateOfDayNumber, localDayOf } from './series/local-day.js';
 import { writeStudyAudit } from './io/write-study-audit.js';
 import { writeReport, type WriteReportResult } from './io/write-report.js';
 import { studyInput } from './io/study-input.js';
+import { readRecords } from './ingest/read-records.js';
+import { scoresHeader } from './report/score-rows.js';
 import { isValidZone } from './ingest/zone-offset.js';
 import { readWindowsFile } from './io/read-windows-file.js';
 import { zoneOnDay } from './series/zone-on-day.js';
@@ -85,10 +87,11 @@ export const DEFAULT_SEED = 20261201;
 /** Columns of every rejects file (scores.rejects.csv, series-long.rejects.csv). */
 const REJECTS_HEADER = ['file', 'line', 'stage', 'code', 'message'];
 
-/** Data rows of a small CSV input (lines after the header, ignoring blank lines). */
+/** Data rows of a table input (records and rejected rows, streamed with the shared reader, so quoted line breaks are not counted as rows). */
 async function dataRows(path: string): Promise<number> {
-  const lines = (await readFile(path, 'utf8')).split(/\r?\n/).filter((l) => l.trim() !== '');
-  return Math.max(0, lines.length - 1);
+  let rows = 0;
+  for await (const item of readRecords(path)) if (item.kind !== 'header') rows++;
+  return rows;
 }
 
 /** Reads and validates a study file; throws a usage error listing every problem with its JSON path. */
@@ -189,7 +192,8 @@ export async function runStudy(
     const out = await stage(context);
     if (out) stages[name] = out;
   }
-  const scoreHeader = [...(await readFile(score.scoresPath, 'utf8').then((t) => t.slice(0, t.indexOf('\n')).split(',')))];
+  // The header the score stage wrote (rebuilt, not read back: the scores file may be large).
+  const scoreHeader = scoresHeader(score.columns, lexicons, study.keepText);
   const resources: TableResource[] = [
     tableResource('scores', 'scores.csv', scoreHeader, undefined, 'One row per scored entry; score columns are <lexicon>.<category>.'),
     ...series.resources,
