@@ -6,6 +6,7 @@ import { readZoneFile } from '../io/read-zone-file.js';
 import { runValidate } from '../io/run-validate.js';
 import { dataPackage } from '../report/data-dictionary.js';
 import { addTimeOptions, delimiterFrom, timeOptionsFrom } from './common-options.js';
+import { windowMinutes } from '../validate/window-minutes.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, ...value.split(',').map((v) => v.trim()).filter(Boolean)];
 
@@ -13,14 +14,6 @@ function positiveInteger(name: string, value: unknown, allowZero = false): numbe
   const n = Number(value);
   if (!Number.isInteger(n) || n < (allowZero ? 0 : 1)) throw usageError(`${name} \`${String(value)}\` is not a ${allowZero ? 'whole number ≥ 0' : 'positive whole number'}.`);
   return n;
-}
-
-/** Parses a window length such as `3h`, `90m` or `1d` into minutes. */
-function windowMinutes(text: string): number {
-  const m = /^\s*(\d+)\s*(m|min|h|d)\s*$/i.exec(text);
-  if (!m || Number(m[1]) <= 0) throw usageError(`--window \`${text}\` is not a positive duration; write e.g. 90m, 3h or 1d.`);
-  const unit = (m[2] as string).toLowerCase();
-  return Number(m[1]) * (unit === 'h' ? 60 : unit === 'd' ? 1440 : 1);
 }
 
 /** `lexichron validate SERIES --ratings FILE --scale NAME=MIN:MAX --out DIR` */

@@ -5,13 +5,7 @@ import { runDynamics, type RatingsByBin } from './run-dynamics.js';
 import { runValidate } from './run-validate.js';
 import type { FileRecord } from '../report/manifest.js';
 import type { TableResource } from '../report/data-dictionary.js';
-
-/** Minutes in a window duration such as `3h`, `90m` or `1d`. */
-function windowMinutes(text: string): number {
-  const m = /^\s*(\d+)\s*(m|min|h|d)\s*$/i.exec(text) as RegExpExecArray;
-  const unit = (m[2] as string).toLowerCase();
-  return Number(m[1]) * (unit === 'h' ? 60 : unit === 'd' ? 1440 : 1);
-}
+import { windowMinutes } from '../validate/window-minutes.js';
 
 /** File records (with SHA-256) of files written under `dir`, relative to the output folder. */
 async function records(outDir: string, dir: string, files: readonly string[]): Promise<FileRecord[]> {
@@ -55,7 +49,7 @@ export const validateStage: StudyStage = async (context) => {
     person: context.person,
     validate: {
       align: settings.align,
-      windowMinutes: windowMinutes(settings.window),
+      windowMinutes: windowMinutes(settings.window, '$.ratings.window'),
       minWords: settings.minWords,
       seed: context.seed,
       replicates: settings.replicates,
