@@ -40,12 +40,12 @@ describe('convergent cross mapping', () => {
   const reference = readReferenceCsv('coupled_logistic_prefix_xmap_rho.csv');
   const data = readReferenceCsv('coupled_logistic_N1000.csv');
 
-  it('reproduces the prefix cross-map skills of pyEDM 2.5.7 / numpy on the Sugihara et al. (2012) coupled logistic map (coupled_logistic_prefix_xmap_rho.csv) to 1e-5, brute force and table alike', () => {
-    if (!reference || !data) return;
-    const x = data.map((r) => Number(r['x']));
-    const y = data.map((r) => Number(r['y']));
-    expect(reference.length).toBe(14);
-    for (const row of reference) {
+  // Missing reference data: these tests are reported as skipped outside CI (readReferenceCsv throws in CI).
+  it.skipIf(!reference || !data)('reproduces the prefix cross-map skills of pyEDM 2.5.7 / numpy on the Sugihara et al. (2012) coupled logistic map (coupled_logistic_prefix_xmap_rho.csv) to 1e-5, brute force and table alike', () => {
+    const x = data!.map((r) => Number(r['x']));
+    const y = data!.map((r) => Number(r['y']));
+    expect(reference!.length).toBe(14);
+    for (const row of reference!) {
       const E = Number(row['E']);
       const L = Number(row['L_rows']);
       for (const useTable of [false, true]) {
@@ -55,10 +55,9 @@ describe('convergent cross mapping', () => {
     }
   });
 
-  it('finds the asymmetry of Sugihara et al. (2012, Fig. 3A) on coupled_logistic_N1000.csv: Y xmap X (X drives Y, β = 0.1) converges higher than X xmap Y (β = 0.02)', () => {
-    if (!data) return;
-    const x = { values: data.map((r) => Number(r['x'])), lagValid: allValid(data.length) };
-    const y = { values: data.map((r) => Number(r['y'])), lagValid: allValid(data.length) };
+  it.skipIf(!data)('finds the asymmetry of Sugihara et al. (2012, Fig. 3A) on coupled_logistic_N1000.csv: Y xmap X (X drives Y, β = 0.1) converges higher than X xmap Y (β = 0.02)', () => {
+    const x = { values: data!.map((r) => Number(r['x'])), lagValid: allValid(data!.length) };
+    const y = { values: data!.map((r) => Number(r['y'])), lagValid: allValid(data!.length) };
     const options = { E: 2, samples: 30, surrogates: 19, librarySizeCount: 8 };
     const xDrivesY = convergentCrossMapping(y, x, options, random(7));
     const yDrivesX = convergentCrossMapping(x, y, options, random(7));

@@ -4,10 +4,11 @@ import { chooseEmbeddingDimension } from '../../src/dynamics/choose-embedding-di
 import { allValid, readReferenceCsv } from './reference-data.js';
 
 describe('simplexForecast', () => {
-  it('matches pyEDM 2.5.7 Simplex on the rEDM three-species block (block_3sp.csv, E = 3, Tp = 1, library rows 1–100, prediction rows 101–195) to 1e-5', () => {
-    const block = readReferenceCsv('block_3sp.csv');
-    const expected = readReferenceCsv('simplex_E3_block_3sp_expected.csv');
-    if (!block || !expected) return;
+  // Missing reference data: the test is reported as skipped outside CI (readReferenceCsv throws in CI).
+  const referenceMissing = !readReferenceCsv('block_3sp.csv') || !readReferenceCsv('simplex_E3_block_3sp_expected.csv');
+  it.skipIf(referenceMissing)('matches pyEDM 2.5.7 Simplex on the rEDM three-species block (block_3sp.csv, E = 3, Tp = 1, library rows 1–100, prediction rows 101–195) to 1e-5', () => {
+    const block = readReferenceCsv('block_3sp.csv')!;
+    const expected = readReferenceCsv('simplex_E3_block_3sp_expected.csv')!;
     const values = block.map((row) => Number(row['x_t']));
     const forecast = simplexForecast({ values, lagValid: allValid(values.length) }, { E: 3, Tp: 1, library: { from: 0, to: 99 }, prediction: { from: 100, to: 194 } });
     const timeOf = (bin: number): number => Number(block[bin]?.['time']);
