@@ -161,7 +161,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
         ]),
       );
     }
-    if (!state) throw inputError(`\`${file}\` holds no rows; nothing to bin.`);
+    if (!state) throw inputError(`\`${file}\` holds no rows, so there is nothing to bin; check that it is the scores file written by \`lexichron score\` and that scoring kept some entries (see its rejects file).`);
     if (entries === 0) throw inputError(`\`${file}\` holds no scored entries; check the rejects of the score stage.`);
     const layout: SeriesLayout = { scores: metas.map((m) => m.name), matched: nIdx.map((i) => i >= 0), fill: options.fill !== 'none', detrend: options.detrend };
     const long = await openAtomicLineWriter(options.out);

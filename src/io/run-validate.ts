@@ -140,7 +140,7 @@ async function readSeriesBins(path: string): Promise<{ bins: SeriesBin[]; column
     if ('code' in bin) diagnostics.push(bin);
     else bins.push(bin);
   }
-  if (!columns || columns.length === 0) throw inputError(`\`${basename(path)}\` has no score columns to validate.`);
+  if (!columns || columns.length === 0) throw inputError(`\`${basename(path)}\` has no score columns to validate; give the long series of a scores file that was scored with at least one lexicon.`);
   return { bins, columns, diagnostics };
 }
 
@@ -187,7 +187,7 @@ export async function runValidate(options: RunValidateOptions): Promise<RunValid
     if (unknown.length > 0) throw usageError(`Unknown score column ${unknown.map((c) => `\`${c}\``).join(', ')}; the ${align === 'bins' ? 'series' : 'event file'} has ${scoreColumns.map((c) => `\`${c}\``).join(', ')}.`);
     scoreColumns = options.scoreColumns;
   }
-  if (scoreColumns.length === 0) throw inputError('There are no score columns to validate.');
+  if (scoreColumns.length === 0) throw inputError(`There are no score columns to validate in the ${align === 'bins' ? 'series' : 'event file'}; score the text with at least one lexicon and build the series again.`);
   if (ratings.ratings.length === 0) {
     const first = ratings.diagnostics[0];
     const why = first ? ` The first problem, on line ${first.source?.line ?? '?'}: ${first.message} (${ratings.diagnostics.length} rows left out).` : '';
