@@ -103,14 +103,42 @@ function parseWithFormat(value: string, zone: string, options: TimeOptions): Ins
   return fromWall(wall, zone, options);
 }
 
+const DAY_MS = 86_400_000;
+const TWO_DIGITS = Array.from({ length: 60 }, (_, k) => String(k).padStart(2, '0'));
+const THREE_DIGITS = Array.from({ length: 1000 }, (_, k) => String(k).padStart(3, '0'));
+/** The date part (`2026-03-29T`) of the last day formatted: consecutive rows mostly share a day. */
+let lastDay = NaN;
+let lastDatePart = '';
+
+/** `ms` (milliseconds since the epoch, read as UTC) as `YYYY-MM-DDTHH:MM:SS.mmm`, the form of toISOString without `Z`. */
+function isoWithoutZone(ms: number): string {
+  const day = Math.floor(ms / DAY_MS);
+  if (day !== lastDay) {
+    const iso = new Date(day * DAY_MS).toISOString();
+    if (iso.length !== 24) return new Date(ms).toISOString().slice(0, -1); // years beyond 0000–9999
+    lastDay = day;
+    lastDatePart = iso.slice(0, 11);
+  }
+  let rest = ms - day * DAY_MS;
+  const milli = rest % 1000;
+  rest = (rest - milli) / 1000;
+  const second = rest % 60;
+  rest = (rest - second) / 60;
+  const minute = rest % 60;
+  const hour = (rest - minute) / 60;
+  return `${lastDatePart}${TWO_DIGITS[hour]}:${TWO_DIGITS[minute]}:${TWO_DIGITS[second]}.${THREE_DIGITS[milli]}`;
+}
+
 /** Formats an instant as RFC 3339 UTC with milliseconds (`2026-03-29T06:15:00.000Z`). */
 export function formatUtc(instant: number): string {
-  return new Date(instant).toISOString();
+  if (!Number.isInteger(instant)) return new Date(instant).toISOString();
+  return `${isoWithoutZone(instant)}Z`;
 }
 
 /** Formats an instant as local time with its offset (`2026-03-29T08:15:00.000+02:00`). */
 export function formatLocal(instant: number, offsetMinutes: number): string {
-  const local = new Date(instant + offsetMinutes * 60000).toISOString().slice(0, 23);
+  const wall = instant + offsetMinutes * 60000;
+  const local = Number.isInteger(wall) ? isoWithoutZone(wall) : new Date(wall).toISOString().slice(0, 23);
   const sign = offsetMinutes < 0 ? '-' : '+';
   const abs = Math.abs(offsetMinutes);
   return `${local}${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;

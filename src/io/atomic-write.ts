@@ -35,21 +35,37 @@ export interface AtomicLineWriter {
 export async function openAtomicLineWriter(path: string): Promise<AtomicLineWriter> {
   await mkdir(dirname(path), { recursive: true });
   const tmp = temporaryPath(path);
-  const stream = createWriteStream(tmp, { encoding: 'utf8' });
-  let buffer: string[] = [];
-  let size = 0;
-  const flush = async (): Promise<void> => {
-    if (buffer.length === 0) return;
-    const chunk = buffer.join('');
-    buffer = [];
-    size = 0;
-    if (!stream.write(chunk)) await new Promise<void>((resolve) => stream.once('drain', () => resolve()));
+  const stream = createWriteStream(tmp);
+  // Lines are encoded straight into a buffer (no joined string in between); a full buffer is
+  // handed to the stream and a new one started.
+  const SIZE = 1 << 20;
+  let buffer = Buffer.allocUnsafe(SIZE);
+  let used = 0;
+  /** Hands `chunk` to the stream; a promise when the stream asks to wait for it to drain. */
+  const send = (chunk: Buffer): Promise<void> | undefined =>
+    stream.write(chunk) ? undefined : new Promise<void>((resolve) => stream.once('drain', () => resolve()));
+  const flush = (): Promise<void> | undefined => {
+    if (used === 0) return undefined;
+    const chunk = buffer.subarray(0, used);
+    buffer = Buffer.allocUnsafe(SIZE);
+    used = 0;
+    return send(chunk);
   };
   return {
     write(line: string) {
-      buffer.push(line, '\n');
-      size += line.length + 1;
-      return size > 1 << 18 ? flush() : undefined;
+      // A UTF-16 code unit takes at most 3 bytes of UTF-8.
+      const most = 3 * line.length + 1;
+      if (used + most <= SIZE) {
+        used += buffer.write(line, used, 'utf8');
+        buffer[used++] = 10;
+        return undefined;
+      }
+      const flushed = flush();
+      // A line longer than the buffer (a kept long text) goes out on its own.
+      if (most > SIZE) return send(Buffer.from(`${line}\n`, 'utf8')) ?? flushed;
+      used += buffer.write(line, used, 'utf8');
+      buffer[used++] = 10;
+      return flushed;
     },
     async commit() {
       await flush();

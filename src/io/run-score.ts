@@ -133,11 +133,15 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
         const { entries, scores: pendingScores } = inflight.shift() as (typeof inflight)[number];
         const scored = await pendingScores;
         for (let i = 0; i < entries.length; i++) {
-          const entry = scoredEntryFrom(entries[i] as RawEntry, scored, i, columns, options.lexicons, keepText);
-          if (keepText && entry.text !== undefined && options.redact) entry.text = options.redact(entry.text);
+          const raw = entries[i] as RawEntry;
+          const text = keepText ? (options.redact ? options.redact(raw.text) : raw.text) : undefined;
           reconciliation.scored++;
-          options.onEntry?.(entry);
-          const pending = scores.write(formatRow(entry));
+          if (options.onEntry) {
+            const entry = scoredEntryFrom(raw, scored, i, columns, options.lexicons, keepText);
+            if (text !== undefined) entry.text = text;
+            options.onEntry(entry);
+          }
+          const pending = scores.write(formatRow(raw, scored, i, text));
           if (pending) await pending;
         }
       }

@@ -1,7 +1,8 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { formatLocal, formatUtc } from '../ingest/parse-instant.js';
 import type { ScoreColumn } from '../score/score-entry.js';
-import type { ScoredEntry } from '../types.js';
+import type { BatchScores } from '../score/score-text.js';
+import type { RawEntry } from '../types.js';
 import { csvField } from './csv.js';
 import { formatNumber } from './format-number.js';
 
@@ -25,30 +26,30 @@ export function scoresHeader(columns: readonly ScoreColumn[], lexicons: readonly
 
 /**
  * A row formatter for a scores file, matching scoresHeader: the column layout is worked out once,
- * so formatting a row touches only the entry's values.
+ * so formatting a row reads the batch's typed arrays directly (no per-entry objects).
+ * Row `i` of `batch` holds the scores of `entry`; `text` is written when the file keeps text.
  */
-export function scoreRowWriter(columns: readonly ScoreColumn[], lexicons: readonly CompiledLexicon[], keepText: boolean): (entry: ScoredEntry) => string {
-  const layout = lexicons.map((lex) => ({
-    names: columns.filter((c) => c.lexicon === lex.ref.name).map((c) => c.name),
+export function scoreRowWriter(columns: readonly ScoreColumn[], lexicons: readonly CompiledLexicon[], keepText: boolean): (entry: RawEntry, batch: BatchScores, i: number, text?: string) => string {
+  const n = columns.length;
+  const nl = lexicons.length;
+  const indexOf = new Map(columns.map((c, k) => [c.name, k]));
+  const layout = lexicons.map((lex, l) => ({
+    columns: columns.filter((c) => c.lexicon === lex.ref.name).map((c) => indexOf.get(c.name) as number),
     rules: lex.scoring !== 'vader',
-    lexicon: lex.ref.name,
+    lexicon: l,
   }));
-  return (entry) => {
+  return (entry, batch, i, text) => {
     // Numbers and RFC 3339 times never need quoting: only the id, person, zone and text go through csvField.
-    let line = `${csvField(entry.id)},${csvField(entry.person)},${formatUtc(entry.instant)},${csvField(entry.zone)},${formatLocal(entry.instant, entry.offsetMinutes)},${entry.nWords}`;
-    for (const { names, rules, lexicon } of layout) {
-      for (const name of names) line += `,${formatNumber(entry.scores[name])}`;
+    let line = `${csvField(entry.id)},${csvField(entry.person)},${formatUtc(entry.instant)},${csvField(entry.zone)},${formatLocal(entry.instant, entry.offsetMinutes)},${batch.words[i] as number}`;
+    const row = i * n;
+    for (const { columns: own, rules, lexicon } of layout) {
+      for (const c of own) line += `,${formatNumber(batch.values[row + c])}`;
       if (rules) {
-        for (const name of names) line += `,${entry.matched[name] ?? 0}`;
-        line += `,${entry.negated[lexicon] ?? 0}`;
+        for (const c of own) line += `,${batch.matched[row + c] as number}`;
+        line += `,${batch.negated[i * nl + lexicon] as number}`;
       }
     }
-    if (keepText) line += `,${csvField(entry.text ?? '')}`;
+    if (keepText) line += `,${csvField(text ?? '')}`;
     return line;
   };
-}
-
-/** One CSV line of a scores file for a scored entry, matching scoresHeader. */
-export function scoreRow(entry: ScoredEntry, columns: readonly ScoreColumn[], lexicons: readonly CompiledLexicon[], keepText: boolean): string {
-  return scoreRowWriter(columns, lexicons, keepText)(entry);
 }

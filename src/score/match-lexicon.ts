@@ -54,18 +54,43 @@ function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon): Hit | und
       return start.exact;
     }
   }
+  if (lexicon.stemLengths.length === 0 || token.length < MIN_WILDCARD_STEM) return undefined;
+  const memo = wildcardMemoOf(lexicon);
+  let wild = memo.get(token);
+  if (wild === undefined) {
+    wild = wildcardHit(token, lexicon);
+    if (memo.size >= WILDCARD_MEMO_LIMIT) memo.clear();
+    memo.set(token, wild);
+  }
+  if (wild === null) return undefined;
+  hitLength = 1;
+  return wild;
+}
+
+/** The wildcard with the longest stem that `token` starts with, or null. */
+function wildcardHit(token: string, lexicon: CompiledLexicon): Hit | null {
   // Most tokens match no wildcard: one look-up of their first three characters rules that out
   // before a substring is cut for every stem length.
-  if (lexicon.stemLengths.length === 0 || token.length < MIN_WILDCARD_STEM || !lexicon.stemPrefixes.has(token.slice(0, MIN_WILDCARD_STEM))) return undefined;
+  if (!lexicon.stemPrefixes.has(token.slice(0, MIN_WILDCARD_STEM))) return null;
   for (const len of lexicon.stemLengths) {
     if (token.length < len) continue;
     const wild = lexicon.wildcards.get(token.slice(0, len));
-    if (wild) {
-      hitLength = 1;
-      return wild;
-    }
+    if (wild) return wild;
   }
-  return undefined;
+  return null;
+}
+
+/** Per lexicon, the wildcard answer for each token met (tokens recur; bounded by clearing). */
+const wildcardMemos = new WeakMap<CompiledLexicon, Map<string, Hit | null>>();
+const WILDCARD_MEMO_LIMIT = 100_000;
+
+function wildcardMemoOf(lexicon: CompiledLexicon): Map<string, Hit | null> {
+  let memo = wildcardMemos.get(lexicon);
+  if (memo === undefined) {
+    memo = new Map();
+    wildcardMemos.set(lexicon, memo);
+  }
+  return memo;
 }
 
 /**

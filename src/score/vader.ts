@@ -58,6 +58,43 @@ function shapeOf(word: string): number {
   return bits;
 }
 
+/** What VADER needs of one token as written: its lower case, its valence, whether it is in capitals. */
+interface VaderWord {
+  lower: string;
+  valence: number | undefined;
+  caps: boolean;
+}
+
+function vaderWord(w: string, lexicon: VaderLexicon): VaderWord {
+  // All caps as the reference port tests it (Python's `isupper` on A–Z): some A–Z and no a–z.
+  const bits = shapeOf(w);
+  const lower = bits & (UPPER | OTHER) ? w.toLowerCase() : w;
+  return { lower, valence: lexicon.get(lower), caps: (bits & (UPPER | LOWER)) === UPPER };
+}
+
+/** Per lexicon, its VaderWord of each token met (bounded: cleared at WORD_CACHE_LIMIT tokens). */
+const wordCaches = new WeakMap<VaderLexicon, Map<string, VaderWord>>();
+const WORD_CACHE_LIMIT = 100_000;
+
+function wordsOf(lexicon: VaderLexicon): Map<string, VaderWord> {
+  let words = wordCaches.get(lexicon);
+  if (words === undefined) {
+    words = new Map();
+    wordCaches.set(lexicon, words);
+  }
+  return words;
+}
+
+const scratch = { lower: [] as string[], valenceOf: [] as Array<number | undefined>, caps: [] as boolean[], sentiments: [] as number[] };
+
+function grow(n: number): void {
+  const size = Math.max(n, 2 * scratch.lower.length, 64);
+  scratch.lower = new Array<string>(size).fill('');
+  scratch.valenceOf = new Array<number | undefined>(size).fill(undefined);
+  scratch.caps = new Array<boolean>(size).fill(false);
+  scratch.sentiments = new Array<number>(size).fill(0);
+}
+
 /** A single token negates when it is a negator or contains "n't" (case-sensitive, as published). */
 function isNegator(word: string): boolean {
   return VADER_NEGATORS.has(word) || word.includes("n't");
@@ -143,24 +180,26 @@ export function scoreVader(text: string, lexicon: VaderLexicon): VaderScores {
   const n = raw.length;
   if (n === 0) return { compound: 0, pos: 0, neu: 0, neg: 0, tokens: 0, matched: 0 };
 
-  const lower = new Array<string>(n);
-  const valenceOf = new Array<number | undefined>(n);
-  const caps = new Array<boolean>(n);
+  // Scratch arrays reused from text to text (scoring is synchronous; entries beyond n are stale).
+  if (scratch.lower.length < n) grow(n);
+  const { lower, valenceOf, caps, sentiments } = scratch;
+  const words = wordsOf(lexicon);
   let capsCount = 0;
   for (let k = 0; k < n; k++) {
     const w = raw[k]!;
-    // All caps as the reference port tests it (Python's `isupper` on A–Z): some A–Z and no a–z.
-    const bits = shapeOf(w);
-    const lw = bits & (UPPER | OTHER) ? w.toLowerCase() : w;
-    lower[k] = lw;
-    valenceOf[k] = lexicon.get(lw);
-    const c = (bits & (UPPER | LOWER)) === UPPER;
-    caps[k] = c;
-    if (c) capsCount++;
+    let word = words.get(w);
+    if (word === undefined) {
+      word = vaderWord(w, lexicon);
+      if (words.size >= WORD_CACHE_LIMIT) words.clear();
+      words.set(w, word);
+    }
+    lower[k] = word.lower;
+    valenceOf[k] = word.valence;
+    caps[k] = word.caps;
+    if (word.caps) capsCount++;
   }
   const capDiff = capsCount > 0 && capsCount < n;
 
-  const sentiments = new Array<number>(n);
   let matched = 0;
   for (let i = 0; i < n; i++) {
     const lw = lower[i]!;

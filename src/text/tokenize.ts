@@ -19,11 +19,64 @@ export interface Tokens {
 }
 
 type Nlp = ReturnType<typeof winkNLP>;
-let english: Nlp | undefined;
+type WinkModel = typeof model;
+
+/**
+ * wink-nlp remembers every new word it meets (in its lexeme table), and a remembered word can
+ * change how a later text is split: in one process the first `don’twell...` gives
+ * `don’twell . ..` and every later one `don’twell ...`; `'em` is split as `' em` until some
+ * text has made `'em` a token. Tokens would then depend on the texts read before (their order,
+ * and how they were shared between worker threads). So the lexeme table is wrapped: a word
+ * added while tokenizing one piece of text is visible only while that piece is tokenized, and
+ * every piece is tokenized as by a freshly loaded wink-nlp. The table itself still grows with
+ * each new word; the instance is replaced when it holds WINK_RENEW words beyond the model's own.
+ */
+interface IsolatedWink {
+  nlp: Nlp;
+  /** Words added while tokenizing the current piece. */
+  added: Set<string>;
+  /** Words the model had before any text was read. */
+  intrinsic: number;
+  /** The lexeme list, to see how far it has grown. */
+  lexemes: unknown[];
+}
+
+const WINK_RENEW = 200_000;
+let english: IsolatedWink | undefined;
+
+function loadIsolatedWink(): IsolatedWink {
+  const added = new Set<string>();
+  const state: Partial<IsolatedWink> = { added };
+  const wrapped: WinkModel = {
+    ...model,
+    core: () => {
+      const core = (model.core as () => { features: { lexeme: { hash: Record<string, number>; list: unknown[]; intrinsicSize: number } } })();
+      const lexeme = core.features.lexeme;
+      const intrinsic = lexeme.intrinsicSize;
+      state.intrinsic = intrinsic;
+      state.lexemes = lexeme.list;
+      lexeme.hash = new Proxy(lexeme.hash, {
+        get(target, key: string) {
+          const index = target[key];
+          return index === undefined || index < intrinsic || added.has(key) ? index : undefined;
+        },
+        set(target, key: string, value: number) {
+          target[key] = value;
+          added.add(key);
+          return true;
+        },
+      });
+      return core;
+    },
+  } as WinkModel;
+  state.nlp = winkNLP(wrapped, []);
+  return state as IsolatedWink;
+}
 
 /** The wink-nlp English tokenizer with an empty pipeline (tokenization only: no sentence, POS or NER steps). */
-function englishNlp(): Nlp {
-  english ??= winkNLP(model, []);
+function englishNlp(): IsolatedWink {
+  if (english === undefined || english.lexemes.length - english.intrinsic > WINK_RENEW) english = loadIsolatedWink();
+  english.added.clear();
   return english;
 }
 
@@ -62,35 +115,42 @@ function kindOf(type: string): TokenKind {
   }
 }
 
-/**
- * Tokenizes English text with wink-nlp (wink-eng-lite-web-model).
- *
- * - Words keep their contraction pieces as separate tokens in their expanded form (`can't`,
- *   `cant` and `cannot` → `can`, `not`; `don't`/`dont` → `do`, `not`), but a piece attached to
- *   the one before it is not counted as a word of its own, so each contraction counts one word.
- * - Emoji stay whole as grapheme clusters: skin-tone modifiers, variation selectors, ZWJ
- *   sequences (👨‍👩‍👧) and flag pairs (🇧🇪) are joined back into one token.
- * - Emoticons (`:)`, `:-(`, `<3`) are single tokens.
- * - Words counted: word, number, ordinal, hashtag, mention, email, URL, time, date and currency
- *   tokens; punctuation, emoji, emoticons and symbols are not words.
- */
-export function tokenizeEnglish(text: string): Tokens {
-  const nlp = englishNlp();
+/** wink-nlp's output for one text: token values, types, contraction flags and normals, and whether each token follows spaces. */
+interface WinkTokens {
+  values: string[];
+  types: string[];
+  contraction: boolean[];
+  /** Normal forms (used for contraction pieces). */
+  normals: string[];
+  spaced: boolean[];
+}
+
+/** wink's tokens of `text` as read by a freshly loaded wink-nlp (see IsolatedWink). */
+function readWink(text: string): WinkTokens {
+  const { nlp } = englishNlp();
   const its = nlp.its;
   const tokens = nlp.readDoc(text).tokens();
-  const values = tokens.out(its.value) as string[];
-  const types = tokens.out(its.type) as string[];
   const spaces = tokens.out(its.precedingSpaces) as string[];
-  const contraction = tokens.out(its.contractionFlag) as boolean[];
-  const norm: string[] = [];
-  const raw: string[] = [];
-  const kind: TokenKind[] = [];
-  let nWords = 0;
-  let normals: string[] | undefined;
+  return {
+    values: tokens.out(its.value) as string[],
+    types: tokens.out(its.type) as string[],
+    contraction: tokens.out(its.contractionFlag) as boolean[],
+    normals: tokens.out(its.normal) as string[],
+    spaced: spaces.map((s) => s !== ''),
+  };
+}
+
+/**
+ * Appends wink tokens to `out` with our rules (see tokenizeEnglish). `firstSpaced` overrides
+ * whether the first token follows spaces (for a piece of a longer text).
+ */
+function appendTokens(out: Tokens, wink: WinkTokens, firstSpaced: boolean): void {
+  const { norm, raw, kind } = out;
+  const { values, types, contraction } = wink;
   for (let i = 0; i < values.length; i++) {
     const value = values[i] as string;
     const type = types[i] as string;
-    const attached = spaces[i] === '';
+    const attached = !(i === 0 ? firstSpaced : wink.spaced[i]);
     const last = raw.length - 1;
     if (attached && last >= 0 && (type === 'emoji' || type === 'unk') && (kind[last] === TokenKind.Emoji || kind[last] === TokenKind.Other)) {
       const joined = (raw[last] as string) + value;
@@ -103,20 +163,107 @@ export function tokenizeEnglish(text: string): Tokens {
     }
     let n = value.toLowerCase();
     // wink splits contractions written with or without an apostrophe (can't, cant, cannot, I'd've)
-    // into flagged pieces; every piece after the first is attached to the one before it.
+    // into flagged pieces; every piece after the first is attached to the one before it. (The
+    // token before the first one of a space-separated piece is a line break or nothing: never
+    // a contraction piece.)
     const isContraction = contraction[i] === true;
-    const isPiece = attached && last >= 0 && (n.startsWith("'") || n.startsWith('’') || n === "n't" || n === 'n’t' || (isContraction && contraction[i - 1] === true));
-    if (isPiece || isContraction) {
-      normals ??= tokens.out(its.normal) as string[];
-      n = (normals[i] as string).toLowerCase();
-    }
+    const previousIsContraction = i === 0 ? false : contraction[i - 1] === true;
+    const isPiece = attached && last >= 0 && (n.startsWith("'") || n.startsWith('’') || n === "n't" || n === 'n’t' || (isContraction && previousIsContraction));
+    if (isPiece || isContraction) n = (wink.normals[i] as string).toLowerCase();
     const k = kindOf(type);
     raw.push(value);
     norm.push(n);
     kind.push(k);
-    if (WORDISH.has(type) && !isPiece) nWords++;
+    if (WORDISH.has(type) && !isPiece) out.nWords++;
   }
-  return { norm, raw, kind, nWords };
+}
+
+/**
+ * wink-nlp splits a text on runs of spaces (these characters) and on runs of tabs and line
+ * breaks, then tokenizes each piece on its own: the output for a piece depends only on the
+ * piece. Runs of spaces become the next token's preceding spaces; runs of tabs and line breaks
+ * are tokens. (Same classes as wink-nlp's splitter; test/text/tokenize-memo.test.ts checks the
+ * memoised path equals one wink pass over whole texts.)
+ */
+const SPLITTER = /([ \u00a0\u2002-\u2005\u2009\u200a\u202f\u205f]+|[\n\r\t]+)/;
+
+/**
+ * wink output per piece, memoised: in running text most pieces ("the", "today.", "don't")
+ * recur, so each distinct piece is tokenized by wink once. Bounded: cleared when it holds
+ * MEMO_LIMIT pieces, so memory does not grow with the input.
+ */
+/** A memoised piece: wink's tokens and our tokens of the piece when it starts a text or follows spaces. */
+interface Piece {
+  wink: WinkTokens;
+  tokens: Tokens;
+}
+
+const memo = new Map<string, Piece>();
+const MEMO_LIMIT = 50_000;
+
+function winkPiece(piece: string): Piece {
+  let hit = memo.get(piece);
+  if (hit === undefined) {
+    const wink = readWink(piece);
+    const tokens: Tokens = { norm: [], raw: [], kind: [], nWords: 0 };
+    appendTokens(tokens, wink, true);
+    hit = { wink, tokens };
+    if (memo.size >= MEMO_LIMIT) memo.clear();
+    memo.set(piece, hit);
+  }
+  return hit;
+}
+
+/**
+ * Tokenizes English text with wink-nlp (wink-eng-lite-web-model).
+ *
+ * - Words keep their contraction pieces as separate tokens in their expanded form (`can't`,
+ *   `cant` and `cannot` → `can`, `not`; `don't`/`dont` → `do`, `not`), but a piece attached to
+ *   the one before it is not counted as a word of its own, so each contraction counts one word.
+ * - Emoji stay whole as grapheme clusters: skin-tone modifiers, variation selectors, ZWJ
+ *   sequences (👨‍👩‍👧) and flag pairs (🇧🇪) are joined back into one token.
+ * - Emoticons (`:)`, `:-(`, `<3`) are single tokens.
+ * - Words counted: word, number, ordinal, hashtag, mention, email, URL, time, date and currency
+ *   tokens; punctuation, emoji, emoticons and symbols are not words.
+ *
+ * wink tokenizes each space-separated piece on its own, so pieces are memoised (see winkPiece):
+ * the tokens are those of one wink pass over the whole text (`tokenizeEnglishWhole`).
+ */
+export function tokenizeEnglish(text: string): Tokens {
+  const out: Tokens = { norm: [], raw: [], kind: [], nWords: 0 };
+  const pieces = text.split(SPLITTER);
+  let spaced = false;
+  for (let p = 0; p < pieces.length; p++) {
+    const piece = pieces[p] as string;
+    if (piece === '') continue;
+    if (p % 2 === 1 && piece.charCodeAt(0) !== 10 && piece.charCodeAt(0) !== 13 && piece.charCodeAt(0) !== 9) {
+      spaced = true; // a run of spaces: the next token follows spaces
+      continue;
+    }
+    const memoised = winkPiece(piece);
+    if (!spaced && out.raw.length > 0) {
+      // After a line break: the first token may attach to the one before (see appendTokens).
+      appendTokens(out, memoised.wink, false);
+    } else {
+      const t = memoised.tokens;
+      for (let k = 0; k < t.raw.length; k++) {
+        out.norm.push(t.norm[k] as string);
+        out.raw.push(t.raw[k] as string);
+        out.kind.push(t.kind[k] as TokenKind);
+      }
+      out.nWords += t.nWords;
+    }
+    spaced = false;
+  }
+  return out;
+}
+
+/** One wink pass over the whole text, without memo: the reference the memoised path is tested against. */
+export function tokenizeEnglishWhole(text: string): Tokens {
+  const out: Tokens = { norm: [], raw: [], kind: [], nWords: 0 };
+  const wink = readWink(text);
+  appendTokens(out, wink, wink.spaced[0] ?? false);
+  return out;
 }
 
 const segmenters = new Map<string, Intl.Segmenter>();

@@ -193,4 +193,19 @@ describe('formatUtc and formatLocal', () => {
     expect(formatLocal(Date.UTC(2026, 10, 1, 6, 30), -300)).toBe('2026-11-01T01:30:00.000-05:00');
     expect(formatLocal(Date.UTC(2026, 0, 1, 0, 0), 345)).toBe('2026-01-01T05:45:00.000+05:45');
   });
+
+  it('equal ECMAScript Date.prototype.toISOString (ECMA-262 §21.4.4.36) on instants from 1600 to 2400, before 1970 and at day edges', () => {
+    // Reference: the ECMAScript date-time string format, as Node's own Date implements it.
+    let seed = 7;
+    const next = (): number => ((seed = (Math.imul(seed, 1103515245) + 12345) >>> 0) / 2 ** 32);
+    const instants = [0, -1, 1, 86_399_999, 86_400_000, -86_400_000, -86_400_001, Date.UTC(2024, 1, 29, 23, 59, 59, 999), Date.UTC(1969, 11, 31, 23, 59, 59, 999), Date.UTC(9999, 11, 31, 23, 59, 59, 999), Date.UTC(0, 0, 1) - 1];
+    for (let k = 0; k < 5000; k++) instants.push(Math.round(Date.UTC(1600, 0, 1) + next() * (Date.UTC(2400, 0, 1) - Date.UTC(1600, 0, 1))));
+    for (const t of instants) {
+      expect(formatUtc(t)).toBe(new Date(t).toISOString());
+      expect(formatLocal(t, 0)).toBe(new Date(t).toISOString().replace('Z', '+00:00'));
+    }
+    // Years beyond 0000–9999 keep the expanded form of toISOString.
+    expect(formatUtc(Date.UTC(10000, 0, 1))).toBe('+010000-01-01T00:00:00.000Z');
+    expect(formatUtc(Date.UTC(-1, 0, 1))).toBe('-000001-01-01T00:00:00.000Z');
+  });
 });
