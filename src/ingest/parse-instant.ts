@@ -23,8 +23,12 @@ export type InstantResult =
 const RFC3339 = /^(\d{4})-(\d{2})-(\d{2})(?:[Tt ](\d{2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?)?\s*(Z|z|[+-]\d{2}(?::?\d{2})?)?$/;
 const EPOCH = /^-?\d{9,16}(?:\.\d+)?$/;
 
+const MONTH_DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+
+/** Days in `month` (1–12) of `year` in the proleptic Gregorian calendar. */
 function daysInMonth(year: number, month: number): number {
-  return new Date(Date.UTC(year, month, 0)).getUTCDate();
+  if (month !== 2) return MONTH_DAYS[month - 1] as number;
+  return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28;
 }
 
 function parseOffset(text: string): number {

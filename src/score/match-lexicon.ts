@@ -1,6 +1,6 @@
 import type { CompiledLexicon, Hit } from '../lexicon/compile-lexicon.js';
 import { MIN_WILDCARD_STEM } from '../lexicon/parse-lexicon.js';
-import { TokenKind, type Tokens } from '../text/tokenize.js';
+import { TokenKind, tokenGeneration, type Tokens } from '../text/tokenize.js';
 import { hitWeight } from './hit-weight.js';
 
 /** Per-category totals of one lexicon over one entry. */
@@ -28,9 +28,49 @@ function isNegated(tokens: Tokens, at: number, lexicon: CompiledLexicon): boolea
 /** Length in tokens of the last hit found by findHit (saves an allocation per hit on the hot path). */
 let hitLength = 1;
 
-function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon): Hit | undefined {
-  const token = tokens.norm[i] as string;
+type Start = NonNullable<ReturnType<CompiledLexicon['starts']['get']>>;
+
+/** What a lexicon holds for one token text: patterns starting with it, and its wildcard hit. */
+interface Answer {
+  start: Start | undefined;
+  wild: Hit | null;
+}
+
+const NO_ANSWER: Answer = { start: undefined, wild: null };
+
+function answerFor(token: string, lexicon: CompiledLexicon): Answer {
   const start = lexicon.starts.get(token);
+  const wild = lexicon.stemLengths.length === 0 || token.length < MIN_WILDCARD_STEM ? null : wildcardHit(token, lexicon);
+  return start === undefined && wild === null ? NO_ANSWER : { start, wild };
+}
+
+/** Per lexicon, its Answer for each token id of the current generation (see Tokens.ids). */
+const answersByLexicon = new WeakMap<CompiledLexicon, { generation: number; answers: Array<Answer | undefined> }>();
+
+function answersOf(lexicon: CompiledLexicon, generation: number): Array<Answer | undefined> {
+  let entry = answersByLexicon.get(lexicon);
+  if (entry === undefined || entry.generation !== generation) {
+    entry = { generation, answers: [] };
+    answersByLexicon.set(lexicon, entry);
+  }
+  return entry.answers;
+}
+
+function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon, answers: Array<Answer | undefined> | undefined): Hit | undefined {
+  let answer: Answer;
+  if (answers !== undefined) {
+    const id = (tokens.ids as number[])[i] as number;
+    let known = answers[id];
+    if (known === undefined) {
+      known = answerFor(tokens.norm[i] as string, lexicon);
+      answers[id] = known;
+    }
+    answer = known;
+  } else {
+    answer = answerFor(tokens.norm[i] as string, lexicon);
+  }
+  if (answer === NO_ANSWER) return undefined;
+  const start = answer.start;
   if (start) {
     if (start.phrases) {
       for (const phrase of start.phrases) {
@@ -54,17 +94,9 @@ function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon): Hit | und
       return start.exact;
     }
   }
-  if (lexicon.stemLengths.length === 0 || token.length < MIN_WILDCARD_STEM) return undefined;
-  const memo = wildcardMemoOf(lexicon);
-  let wild = memo.get(token);
-  if (wild === undefined) {
-    wild = wildcardHit(token, lexicon);
-    if (memo.size >= WILDCARD_MEMO_LIMIT) memo.clear();
-    memo.set(token, wild);
-  }
-  if (wild === null) return undefined;
+  if (answer.wild === null) return undefined;
   hitLength = 1;
-  return wild;
+  return answer.wild;
 }
 
 /** The wildcard with the longest stem that `token` starts with, or null. */
@@ -80,18 +112,6 @@ function wildcardHit(token: string, lexicon: CompiledLexicon): Hit | null {
   return null;
 }
 
-/** Per lexicon, the wildcard answer for each token met (tokens recur; bounded by clearing). */
-const wildcardMemos = new WeakMap<CompiledLexicon, Map<string, Hit | null>>();
-const WILDCARD_MEMO_LIMIT = 100_000;
-
-function wildcardMemoOf(lexicon: CompiledLexicon): Map<string, Hit | null> {
-  let memo = wildcardMemos.get(lexicon);
-  if (memo === undefined) {
-    memo = new Map();
-    wildcardMemos.set(lexicon, memo);
-  }
-  return memo;
-}
 
 /**
  * Matches one lexicon against an entry's tokens.
@@ -111,13 +131,15 @@ export function matchLexicon(tokens: Tokens, lexicon: CompiledLexicon, onHit?: H
   let negated = 0;
   const n = tokens.norm.length;
   const hasNegation = lexicon.negation !== 'ignore' || lexicon.window > 0;
+  // Answers by token id when the tokens carry ids of the current generation; else by text.
+  const answers = tokens.ids !== undefined && tokens.generation === tokenGeneration() ? answersOf(lexicon, tokens.generation) : undefined;
   let i = 0;
   while (i < n) {
     if (tokens.kind[i] === TokenKind.Punct) {
       i++;
       continue;
     }
-    const hit = findHit(tokens, i, lexicon);
+    const hit = findHit(tokens, i, lexicon, answers);
     if (!hit) {
       i++;
       continue;

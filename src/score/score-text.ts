@@ -1,7 +1,7 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
-import { tokenize, type Tokens } from '../text/tokenize.js';
+import { tokenize, tokenizeEnglishPieces, type Piece, type Tokens } from '../text/tokenize.js';
 import { matchLexicon } from './match-lexicon.js';
-import { scoreVader } from './vader.js';
+import { scoreVaderPieces } from './vader.js';
 
 /**
  * Scores of a batch of texts as flat typed arrays (row-major), the form the scoring workers send
@@ -35,8 +35,9 @@ export function createBatchScores(n: number, columns: number, lexicons: number):
 export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number): void {
   let byLanguage: Map<string, Tokens> | undefined;
   let english: Tokens | undefined;
+  const englishTokens = (): Tokens => (english ??= tokenizeEnglishPieces(text, pieces));
   const tokensFor = (language: string): Tokens => {
-    if (language === 'en') return (english ??= tokenize(text, 'en'));
+    if (language === 'en' || language.startsWith('en-')) return englishTokens();
     byLanguage ??= new Map();
     let t = byLanguage.get(language);
     if (!t) byLanguage.set(language, (t = tokenize(text, language)));
@@ -46,7 +47,10 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
   for (let l = 0; l < lexicons.length; l++) {
     const lex = lexicons[l] as CompiledLexicon;
     if (lex.scoring === 'vader') {
-      const v = scoreVader(text, lex.valence);
+      // VADER splits the text its own way, but on whitespace only, so it can start from the
+      // memoised pieces of the English tokens (see scoreVaderPieces).
+      englishTokens();
+      const v = scoreVaderPieces(pieces, text, lex.valence);
       const has = v.tokens > 0;
       out.values[c++] = has ? v.compound : NaN;
       out.values[c++] = has ? v.pos : NaN;
@@ -67,9 +71,12 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       else out.values[c] = sum;
     }
   }
-  const counted = english ?? (byLanguage ? (byLanguage.values().next().value as Tokens) : tokenize(text, 'en'));
+  const counted = english ?? (byLanguage ? (byLanguage.values().next().value as Tokens) : englishTokens());
   out.words[i] = counted.nWords;
 }
+
+/** The memoised pieces of the text being scored (scoring is synchronous). */
+const pieces: Piece[] = [];
 
 /** Scores a batch of texts (see scoreTextInto). */
 export function scoreTexts(texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number): BatchScores {

@@ -16,6 +16,7 @@ import {
   VADER_QUESTION_BOOST,
   VADER_QUESTION_BOOST_MAX,
 } from './vader-constants.js';
+import type { Piece } from '../text/tokenize.js';
 import { vaderTokens } from './vader-tokens.js';
 
 /** A VADER lexicon: lower-case token → mean valence (−4 … +4). */
@@ -58,8 +59,9 @@ function shapeOf(word: string): number {
   return bits;
 }
 
-/** What VADER needs of one token as written: its lower case, its valence, whether it is in capitals. */
-interface VaderWord {
+/** What VADER needs of one token as written: the token, its lower case, its valence, whether it is in capitals. */
+export interface VaderWord {
+  raw: string;
   lower: string;
   valence: number | undefined;
   caps: boolean;
@@ -69,7 +71,18 @@ function vaderWord(w: string, lexicon: VaderLexicon): VaderWord {
   // All caps as the reference port tests it (Python's `isupper` on A–Z): some A–Z and no a–z.
   const bits = shapeOf(w);
   const lower = bits & (UPPER | OTHER) ? w.toLowerCase() : w;
-  return { lower, valence: lexicon.get(lower), caps: (bits & (UPPER | LOWER)) === UPPER };
+  return { raw: w, lower, valence: lexicon.get(lower), caps: (bits & (UPPER | LOWER)) === UPPER };
+}
+
+/** The VaderWord of token `w` for `lexicon`, cached. */
+function cachedWord(w: string, lexicon: VaderLexicon, words: Map<string, VaderWord>): VaderWord {
+  let word = words.get(w);
+  if (word === undefined) {
+    word = vaderWord(w, lexicon);
+    if (words.size >= WORD_CACHE_LIMIT) words.clear();
+    words.set(w, word);
+  }
+  return word;
 }
 
 /** Per lexicon, its VaderWord of each token met (bounded: cleared at WORD_CACHE_LIMIT tokens). */
@@ -85,14 +98,41 @@ function wordsOf(lexicon: VaderLexicon): Map<string, VaderWord> {
   return words;
 }
 
-const scratch = { lower: [] as string[], valenceOf: [] as Array<number | undefined>, caps: [] as boolean[], sentiments: [] as number[] };
+/** The tokens of the text being scored, reused from text to text (scoring is synchronous; entries from `n` on are stale). */
+const scratch = { n: 0, raw: [] as string[], lower: [] as string[], valenceOf: [] as Array<number | undefined>, caps: [] as boolean[], sentiments: [] as number[] };
 
 function grow(n: number): void {
   const size = Math.max(n, 2 * scratch.lower.length, 64);
-  scratch.lower = new Array<string>(size).fill('');
-  scratch.valenceOf = new Array<number | undefined>(size).fill(undefined);
-  scratch.caps = new Array<boolean>(size).fill(false);
+  const raw = new Array<string>(size).fill('');
+  for (let k = 0; k < scratch.n; k++) raw[k] = scratch.raw[k] as string;
+  scratch.raw = raw;
+  const lower = new Array<string>(size).fill('');
+  for (let k = 0; k < scratch.n; k++) lower[k] = scratch.lower[k] as string;
+  scratch.lower = lower;
+  const valenceOf = new Array<number | undefined>(size).fill(undefined);
+  for (let k = 0; k < scratch.n; k++) valenceOf[k] = scratch.valenceOf[k];
+  scratch.valenceOf = valenceOf;
+  const caps = new Array<boolean>(size).fill(false);
+  for (let k = 0; k < scratch.n; k++) caps[k] = scratch.caps[k] as boolean;
+  scratch.caps = caps;
   scratch.sentiments = new Array<number>(size).fill(0);
+}
+
+/** Appends one token to the scratch arrays. */
+function pushWord(word: VaderWord): void {
+  const k = scratch.n;
+  if (k >= scratch.lower.length) grow(k + 1);
+  scratch.raw[k] = word.raw;
+  scratch.lower[k] = word.lower;
+  scratch.valenceOf[k] = word.valence;
+  scratch.caps[k] = word.caps;
+  scratch.n = k + 1;
+}
+
+/** The first index below `n` where `list` holds `value`, or −1. */
+function firstIndex(list: readonly string[], n: number, value: string): number {
+  for (let k = 0; k < n; k++) if (list[k] === value) return k;
+  return -1;
 }
 
 /** A single token negates when it is a negator or contains "n't" (case-sensitive, as published). */
@@ -100,14 +140,14 @@ function isNegator(word: string): boolean {
   return VADER_NEGATORS.has(word) || word.includes("n't");
 }
 
-function countChar(text: string, code: number): number {
+function countChar(text: string, char: string): number {
   let count = 0;
-  for (let k = 0; k < text.length; k++) if (text.charCodeAt(k) === code) count++;
+  for (let k = text.indexOf(char); k !== -1; k = text.indexOf(char, k + 1)) count++;
   return count;
 }
 
 /** The special-idiom and two-word-dampener check, applied with the modifier three tokens back. */
-function idiomValence(valence: number, raw: readonly string[], i: number): number {
+function idiomValence(valence: number, raw: readonly string[], i: number, n: number): number {
   const w3 = raw[i - 3]!;
   const w2 = raw[i - 2]!;
   const w1 = raw[i - 1]!;
@@ -126,7 +166,6 @@ function idiomValence(valence: number, raw: readonly string[], i: number): numbe
   if (idiom === undefined && has3 && has2 && has1) idiom = VADER_IDIOMS.get(`${w3} ${w2} ${w1}`);
   if (idiom === undefined && has3 && has2) idiom = VADER_IDIOMS.get(`${w3} ${w2}`);
   if (idiom !== undefined) v = idiom;
-  const n = raw.length;
   if (has0 && n - 1 > i) {
     const next = raw[i + 1]!;
     if (IDIOM_WORDS.has(next)) {
@@ -176,28 +215,40 @@ function idiomValence(valence: number, raw: readonly string[], i: number): numbe
  *   (the reference's result), which callers should treat as "no score"
  */
 export function scoreVader(text: string, lexicon: VaderLexicon): VaderScores {
-  const raw = vaderTokens(text);
-  const n = raw.length;
-  if (n === 0) return { compound: 0, pos: 0, neu: 0, neg: 0, tokens: 0, matched: 0 };
-
-  // Scratch arrays reused from text to text (scoring is synchronous; entries beyond n are stale).
-  if (scratch.lower.length < n) grow(n);
-  const { lower, valenceOf, caps, sentiments } = scratch;
   const words = wordsOf(lexicon);
-  let capsCount = 0;
-  for (let k = 0; k < n; k++) {
-    const w = raw[k]!;
-    let word = words.get(w);
-    if (word === undefined) {
-      word = vaderWord(w, lexicon);
-      if (words.size >= WORD_CACHE_LIMIT) words.clear();
-      words.set(w, word);
+  scratch.n = 0;
+  for (const w of vaderTokens(text)) pushWord(cachedWord(w, lexicon, words));
+  return scoreScratch(text);
+}
+
+/**
+ * scoreVader for a text given as its memoised pieces (see tokenizeEnglishPieces): VADER splits
+ * on every whitespace character, which includes every separator of the pieces, so the VADER
+ * tokens of the text are those of its pieces in order. Each piece keeps its VADER tokens for
+ * `lexicon` in its annotation slot, so a recurring piece is split and looked up once.
+ */
+export function scoreVaderPieces(pieces: readonly Piece[], text: string, lexicon: VaderLexicon): VaderScores {
+  const words = wordsOf(lexicon);
+  scratch.n = 0;
+  for (const piece of pieces) {
+    let list = piece.annotationKey === lexicon ? (piece.annotation as VaderWord[]) : undefined;
+    if (list === undefined) {
+      list = vaderTokens(piece.text).map((w) => cachedWord(w, lexicon, words));
+      piece.annotationKey = lexicon;
+      piece.annotation = list;
     }
-    lower[k] = word.lower;
-    valenceOf[k] = word.valence;
-    caps[k] = word.caps;
-    if (word.caps) capsCount++;
+    for (const word of list) pushWord(word);
   }
+  return scoreScratch(text);
+}
+
+/** VADER's scores of the tokens in the scratch arrays (see scoreVader); `text` for its ! and ?. */
+function scoreScratch(text: string): VaderScores {
+  const n = scratch.n;
+  if (n === 0) return { compound: 0, pos: 0, neu: 0, neg: 0, tokens: 0, matched: 0 };
+  const { raw, lower, valenceOf, caps, sentiments } = scratch;
+  let capsCount = 0;
+  for (let k = 0; k < n; k++) if (caps[k]) capsCount++;
   const capDiff = capsCount > 0 && capsCount < n;
 
   let matched = 0;
@@ -223,7 +274,7 @@ export function scoreVader(text: string, lexicon: VaderLexicon): VaderScores {
         v += s;
       }
       v = negationCheck(v, raw, back, i);
-      if (back === 2) v = idiomValence(v, raw, i);
+      if (back === 2) v = idiomValence(v, raw, i, n);
     }
 
     if (i > 0 && lower[i - 1] === 'least' && valenceOf[i - 1] === undefined) {
@@ -232,8 +283,8 @@ export function scoreVader(text: string, lexicon: VaderLexicon): VaderScores {
     sentiments[i] = v;
   }
 
-  let but = raw.indexOf('but');
-  if (but < 0) but = raw.indexOf('BUT');
+  let but = firstIndex(raw, n, 'but');
+  if (but < 0) but = firstIndex(raw, n, 'BUT');
   if (but >= 0) {
     for (let i = 0; i < n; i++) {
       if (i < but) sentiments[i] = sentiments[i]! * VADER_BEFORE_BUT;
@@ -289,8 +340,8 @@ function negationCheck(v: number, raw: readonly string[], back: number, i: numbe
 
 /** Emphasis from "!" (0.292 each, up to 4) and "?" (2–3: 0.18 each; more: 0.96) anywhere in the text. */
 function punctuationEmphasis(text: string): number {
-  const exclamations = Math.min(countChar(text, 0x21), VADER_MAX_EXCLAMATIONS);
-  const questions = countChar(text, 0x3f);
+  const exclamations = Math.min(countChar(text, '!'), VADER_MAX_EXCLAMATIONS);
+  const questions = countChar(text, '?');
   const q = questions > 1 ? (questions <= 3 ? questions * VADER_QUESTION_BOOST : VADER_QUESTION_BOOST_MAX) : 0;
   return exclamations * VADER_EXCLAMATION_BOOST + q;
 }

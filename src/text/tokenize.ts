@@ -16,6 +16,13 @@ export interface Tokens {
   kind: TokenKind[];
   /** Number of word tokens (see tokenize for what counts). */
   nWords: number;
+  /**
+   * English tokens only: per token a small integer standing for its `norm` (equal norms, equal
+   * ids), valid while tokenGeneration() returns `generation`. Lets matchers keep per-word
+   * answers in arrays instead of looking each token up by its text.
+   */
+  ids?: number[];
+  generation?: number;
 }
 
 type Nlp = ReturnType<typeof winkNLP>;
@@ -188,18 +195,55 @@ function appendTokens(out: Tokens, wink: WinkTokens, firstSpaced: boolean): void
 const SPLITTER = /([ \u00a0\u2002-\u2005\u2009\u200a\u202f\u205f]+|[\n\r\t]+)/;
 
 /**
- * wink output per piece, memoised: in running text most pieces ("the", "today.", "don't")
- * recur, so each distinct piece is tokenized by wink once. Bounded: cleared when it holds
- * MEMO_LIMIT pieces, so memory does not grow with the input.
+ * A memoised piece of text (between separators): wink's tokens, our tokens when the piece starts
+ * a text or follows spaces, and one annotation slot for a scorer (for example VADER's reading of
+ * the piece, keyed by its lexicon).
  */
-/** A memoised piece: wink's tokens and our tokens of the piece when it starts a text or follows spaces. */
-interface Piece {
+export interface Piece {
+  text: string;
   wink: WinkTokens;
   tokens: Tokens;
+  annotationKey?: object;
+  annotation?: unknown;
 }
 
+/**
+ * wink output per piece, memoised: in running text most pieces ("the", "today.", "don't")
+ * recur, so each distinct piece is tokenized by wink once. Bounded: the memo and the table of
+ * token ids are emptied (and the generation of ids moves on) between texts once either is
+ * full, so memory does not grow with the input.
+ */
 const memo = new Map<string, Piece>();
 const MEMO_LIMIT = 50_000;
+const ids = new Map<string, number>();
+const IDS_LIMIT = 200_000;
+let generation = 0;
+
+/** Empties the memo of pieces and the table of token ids (the next generation of ids begins). */
+export function clearTokenMemo(): void {
+  memo.clear();
+  ids.clear();
+  generation++;
+}
+
+/** The generation of token ids (see Tokens.ids); ids of an older generation mean nothing now. */
+export function tokenGeneration(): number {
+  return generation;
+}
+
+/** Number of distinct token ids of the current generation (an upper bound for arrays indexed by id). */
+export function tokenIdCount(): number {
+  return ids.size;
+}
+
+function idOf(norm: string): number {
+  let id = ids.get(norm);
+  if (id === undefined) {
+    id = ids.size;
+    ids.set(norm, id);
+  }
+  return id;
+}
 
 function winkPiece(piece: string): Piece {
   let hit = memo.get(piece);
@@ -207,8 +251,9 @@ function winkPiece(piece: string): Piece {
     const wink = readWink(piece);
     const tokens: Tokens = { norm: [], raw: [], kind: [], nWords: 0 };
     appendTokens(tokens, wink, true);
-    hit = { wink, tokens };
-    if (memo.size >= MEMO_LIMIT) memo.clear();
+    tokens.ids = tokens.norm.map(idOf);
+    tokens.generation = generation;
+    hit = { text: piece, wink, tokens };
     memo.set(piece, hit);
   }
   return hit;
@@ -230,26 +275,43 @@ function winkPiece(piece: string): Piece {
  * the tokens are those of one wink pass over the whole text (`tokenizeEnglishWhole`).
  */
 export function tokenizeEnglish(text: string): Tokens {
-  const out: Tokens = { norm: [], raw: [], kind: [], nWords: 0 };
-  const pieces = text.split(SPLITTER);
+  return tokenizeEnglishPieces(text);
+}
+
+/**
+ * tokenizeEnglish, also listing the memoised pieces of the text in order in `pieces` (when
+ * given), for scorers that annotate pieces. The pieces stay valid until the next call.
+ */
+export function tokenizeEnglishPieces(text: string, pieces?: Piece[]): Tokens {
+  if (memo.size >= MEMO_LIMIT || ids.size >= IDS_LIMIT) clearTokenMemo();
+  const idList: number[] = [];
+  const out: Tokens = { norm: [], raw: [], kind: [], nWords: 0, ids: idList, generation };
+  if (pieces) pieces.length = 0;
+  const parts = text.split(SPLITTER);
   let spaced = false;
-  for (let p = 0; p < pieces.length; p++) {
-    const piece = pieces[p] as string;
-    if (piece === '') continue;
-    if (p % 2 === 1 && piece.charCodeAt(0) !== 10 && piece.charCodeAt(0) !== 13 && piece.charCodeAt(0) !== 9) {
+  for (let p = 0; p < parts.length; p++) {
+    const part = parts[p] as string;
+    if (part === '') continue;
+    if (p % 2 === 1 && part.charCodeAt(0) !== 10 && part.charCodeAt(0) !== 13 && part.charCodeAt(0) !== 9) {
       spaced = true; // a run of spaces: the next token follows spaces
       continue;
     }
-    const memoised = winkPiece(piece);
+    const memoised = winkPiece(part);
+    pieces?.push(memoised);
     if (!spaced && out.raw.length > 0) {
       // After a line break: the first token may attach to the one before (see appendTokens).
+      const before = out.raw.length;
       appendTokens(out, memoised.wink, false);
+      idList.length = before - 1;
+      for (let k = before - 1; k < out.norm.length; k++) idList.push(idOf(out.norm[k] as string));
     } else {
       const t = memoised.tokens;
+      const tIds = t.ids as number[];
       for (let k = 0; k < t.raw.length; k++) {
         out.norm.push(t.norm[k] as string);
         out.raw.push(t.raw[k] as string);
         out.kind.push(t.kind[k] as TokenKind);
+        idList.push(tIds[k] as number);
       }
       out.nWords += t.nWords;
     }

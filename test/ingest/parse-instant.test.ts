@@ -55,6 +55,13 @@ describe('parseInstant reads the RFC 3339 section 5.8 examples', () => {
     expect(parseInstant('2026-03-01T10:00:00+25:00', 'UTC')).toMatchObject({ ok: false, code: 'bad_time' });
   });
 
+  it('knows February 29 by the leap-year rule of RFC 3339 Appendix C (divisible by 4, not by 100 unless by 400)', () => {
+    for (const year of ['2024', '2000', '1600', '2400']) expect(parseInstant(`${year}-02-29T12:00:00Z`, 'UTC').ok, year).toBe(true);
+    for (const year of ['2026', '1900', '2100', '1800']) expect(parseInstant(`${year}-02-29T12:00:00Z`, 'UTC').ok, year).toBe(false);
+    expect(parseInstant('2026-04-31T12:00:00Z', 'UTC').ok).toBe(false);
+    expect(parseInstant('2026-12-31T12:00:00Z', 'UTC').ok).toBe(true);
+  });
+
   it('rejects text that is no time with a message naming the accepted forms', () => {
     expect(parseInstant('yesterday at tea', 'UTC')).toMatchObject({ ok: false, code: 'bad_time', message: expect.stringContaining('--time-format') });
     expect(parseInstant('2026-03-17 ??:??', 'UTC')).toMatchObject({ ok: false, code: 'bad_time' });

@@ -4,7 +4,7 @@ import type { Lexicon } from '../../src/lexicon/lexicon-types.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
 import { matchLexicon } from '../../src/score/match-lexicon.js';
 import { scoreColumns, scoreEntry } from '../../src/score/score-entry.js';
-import { tokenize } from '../../src/text/tokenize.js';
+import { clearTokenMemo, tokenize, tokenizeSegmenter } from '../../src/text/tokenize.js';
 import type { RawEntry } from '../../src/types.js';
 
 /** Builds a compiled lexicon from rows `term|category|weight`, with `|` standing for tabs. */
@@ -69,6 +69,29 @@ describe('matchLexicon takes the longest pattern first and counts each token onc
     expect(match(lex, "I can't stand it").sums).toEqual([-3]);
     expect(match(lex, 'I cant stand it').sums).toEqual([-3]);
     expect(match(lex, 'I cannot stand it').sums).toEqual([-3]);
+  });
+});
+
+describe('matchLexicon answers by token id and by text alike', () => {
+  const lex = lexicon({ scale: '-5|5', negation: 'flip', window: '3' }, ['valence|sum'], ['happy|valence|2', 'worn out|valence|-2', 'glo*|valence|-1']);
+
+  it('gives the same sums for tokens made before the memo was emptied (their ids are stale) as for fresh tokens', () => {
+    const text = 'happy, not happy, worn out and gloomy glowing';
+    const before = tokenize(text);
+    const fresh = matchLexicon(before, lex);
+    clearTokenMemo(); // ids of `before` belong to the previous generation now
+    const stale = matchLexicon(before, lex);
+    const after = matchLexicon(tokenize(text), lex);
+    expect([...fresh.sums]).toEqual([2 - 2 - 2 - 1 - 1]);
+    expect([...stale.sums]).toEqual([...fresh.sums]);
+    expect([...after.sums]).toEqual([...fresh.sums]);
+    expect(after.negated).toBe(1);
+  });
+
+  it('matches tokens without ids (other languages: Intl.Segmenter) by their text', () => {
+    const t = tokenizeSegmenter('happy and gloomy', 'en');
+    expect(t.ids).toBeUndefined();
+    expect([...matchLexicon(t, lex).sums]).toEqual([1]);
   });
 });
 

@@ -5,7 +5,13 @@
 import winkNLP from 'wink-nlp';
 import model from 'wink-eng-lite-web-model';
 import { describe, expect, it } from 'vitest';
-import { tokenizeEnglish, tokenizeEnglishWhole } from '../../src/text/tokenize.js';
+import { tokenizeEnglish as tokenizeWithIds, tokenizeEnglishWhole, type Tokens } from '../../src/text/tokenize.js';
+
+/** The tokens without their ids (the reference has none). */
+function tokenizeEnglish(text: string): Omit<Tokens, 'ids' | 'generation'> {
+  const { norm, raw, kind, nWords } = tokenizeWithIds(text);
+  return { norm, raw, kind, nWords };
+}
 
 /** mulberry32, seeded: the same texts on every run. */
 function seeded(seed: number): () => number {
@@ -78,6 +84,14 @@ describe('tokenizeEnglish memo equals one wink-nlp pass over the whole text', ()
       const its = fresh.its;
       const expected = fresh.readDoc(piece).tokens().out(its.value);
       expect(tokenizeEnglish(piece).raw, piece).toEqual(expected);
+    }
+  });
+
+  it('gives equal norms equal ids and different norms different ids (ids stand for the norm)', () => {
+    const t = tokenizeWithIds("Happy happy HAPPY, can't cannot 🐝 🐝\nhappy");
+    expect(t.ids).toHaveLength(t.norm.length);
+    for (let a = 0; a < t.norm.length; a++) {
+      for (let b = 0; b < t.norm.length; b++) expect(t.ids![a] === t.ids![b], `${t.norm[a]} / ${t.norm[b]}`).toBe(t.norm[a] === t.norm[b]);
     }
   });
 });
