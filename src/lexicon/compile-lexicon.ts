@@ -54,12 +54,11 @@ function addHit(map: Map<string, Hit>, key: string, pattern: string, category: n
   }
 }
 
-/**
- * Compiles a parsed lexicon. Terms are tokenized with the tokenizer of the lexicon's language,
- * so phrases, contractions and emoji are matched token by token exactly as the text is.
- * Only `accepted` terms are compiled.
- */
-export function compileLexicon(lexicon: Lexicon): CompiledLexicon {
+/** The matching tables of a compiled lexicon, built from its terms on first use. */
+type Tables = Pick<CompiledLexicon, 'single' | 'phrases' | 'wildcards' | 'stemLengths' | 'stemPrefixes' | 'starts' | 'valence'>;
+const TABLE_KEYS = ['single', 'phrases', 'wildcards', 'stemLengths', 'stemPrefixes', 'starts', 'valence'] as const;
+
+function buildTables(lexicon: Lexicon): Tables {
   const categoryIndex = new Map(lexicon.categories.map((c, i) => [c.name, i]));
   const single = new Map<string, Hit>();
   const wildcards = new Map<string, Hit>();
@@ -100,22 +99,36 @@ export function compileLexicon(lexicon: Lexicon): CompiledLexicon {
   const starts = new Map<string, { exact?: Hit; phrases?: Phrase[] }>();
   for (const [token, hit] of single) starts.set(token, { exact: hit });
   for (const [token, list] of phrases) starts.set(token, { ...starts.get(token), phrases: list });
-  return {
+  return { single, phrases, wildcards, stemLengths, stemPrefixes, starts, valence };
+}
+
+/**
+ * Compiles a parsed lexicon. Terms are tokenized with the tokenizer of the lexicon's language,
+ * so phrases, contractions and emoji are matched token by token exactly as the text is.
+ * Only `accepted` terms are compiled.
+ *
+ * The matching tables are built on first use, not here: a thread that only reads and writes
+ * while workers score (see io/score-pool) then never loads the tokenizer. After the first use
+ * they are plain read-only properties.
+ */
+export function compileLexicon(lexicon: Lexicon): CompiledLexicon {
+  const eager: Omit<CompiledLexicon, keyof Tables> = {
     ref: { name: lexicon.name, version: lexicon.version, sha256: lexiconHash(lexicon), license: lexicon.license, source: lexicon.source },
     lexicon,
     language: lexicon.language,
     scoring: lexicon.scoring,
     categories: lexicon.categories.map((c) => ({ name: c.name, aggregation: c.aggregation })),
-    single,
-    phrases,
-    wildcards,
-    stemLengths,
-    stemPrefixes,
-    starts,
     negation: lexicon.negation,
     negators: new Set(lexicon.negators),
     window: lexicon.window,
     reflect: lexicon.scale[0] + lexicon.scale[1],
-    valence,
   };
+  const compiled = eager as CompiledLexicon;
+  const build = (): Tables => {
+    const tables = buildTables(lexicon);
+    for (const key of TABLE_KEYS) Object.defineProperty(compiled, key, { value: tables[key], enumerable: true, writable: false, configurable: false });
+    return tables;
+  };
+  for (const key of TABLE_KEYS) Object.defineProperty(compiled, key, { get: () => build()[key], enumerable: true, configurable: true });
+  return compiled;
 }

@@ -5,7 +5,7 @@
 import winkNLP from 'wink-nlp';
 import model from 'wink-eng-lite-web-model';
 import { describe, expect, it } from 'vitest';
-import { tokenizeEnglish as tokenizeWithIds, tokenizeEnglishWhole, type Tokens } from '../../src/text/tokenize.js';
+import { loadCoreModel, tokenizeEnglish as tokenizeWithIds, tokenizeEnglishWhole, type Tokens } from '../../src/text/tokenize.js';
 
 /** The tokens without their ids (the reference has none). */
 function tokenizeEnglish(text: string): Omit<Tokens, 'ids' | 'generation'> {
@@ -93,6 +93,12 @@ describe('tokenizeEnglish memo equals one wink-nlp pass over the whole text', ()
     for (let a = 0; a < t.norm.length; a++) {
       for (let b = 0; b < t.norm.length; b++) expect(t.ids![a] === t.ids![b], `${t.norm[a]} / ${t.norm[b]}`).toBe(t.norm[a] === t.norm[b]);
     }
+  });
+
+  it("loads the same core model as wink-eng-lite-web-model's own loader (reference: the package's core())", () => {
+    const ours = loadCoreModel();
+    const theirs = (model.core as () => unknown)();
+    expect(ours).toEqual(theirs);
   });
 });
 
