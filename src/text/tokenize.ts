@@ -34,15 +34,16 @@ type WinkModel = typeof model;
  * change how a later text is split: in one process the first `don’twell...` gives
  * `don’twell . ..` and every later one `don’twell ...`; `'em` is split as `' em` until some
  * text has made `'em` a token. Tokens would then depend on the texts read before (their order,
- * and how they were shared between worker threads). So the lexeme table is wrapped: a word
- * added while tokenizing one piece of text is visible only while that piece is tokenized, and
- * every piece is tokenized as by a freshly loaded wink-nlp. The table itself still grows with
- * each new word; the instance is replaced when it holds WINK_RENEW words beyond the model's own.
+ * and how they were shared between worker threads). So every piece of text is tokenized as by a
+ * freshly loaded wink-nlp: the words wink adds to its lexeme table while tokenizing a piece are
+ * taken out of the table's index again right after (they stay in its list, whose positions wink
+ * relies on). The list still grows with each new word; the instance is replaced when it holds
+ * WINK_RENEW words beyond the model's own.
  */
 interface IsolatedWink {
   nlp: Nlp;
-  /** Words added while tokenizing the current piece. */
-  added: Set<string>;
+  /** The lexeme index (text → position in `lexemes`) that wink looks words up in. */
+  index: Record<string, number>;
   /** Words the model had before any text was read. */
   intrinsic: number;
   /** The lexeme list, to see how far it has grown. */
@@ -114,27 +115,15 @@ export function loadCoreModel(): CoreModel {
 }
 
 function loadIsolatedWink(): IsolatedWink {
-  const added = new Set<string>();
-  const state: Partial<IsolatedWink> = { added };
+  const state: Partial<IsolatedWink> = {};
   const wrapped: WinkModel = {
     ...model,
     core: () => {
       const core = loadCoreModel();
       const lexeme = core.features.lexeme;
-      const intrinsic = lexeme.intrinsicSize;
-      state.intrinsic = intrinsic;
+      state.intrinsic = lexeme.intrinsicSize;
       state.lexemes = lexeme.list;
-      lexeme.hash = new Proxy(lexeme.hash, {
-        get(target, key: string) {
-          const index = target[key];
-          return index === undefined || index < intrinsic || added.has(key) ? index : undefined;
-        },
-        set(target, key: string, value: number) {
-          target[key] = value;
-          added.add(key);
-          return true;
-        },
-      });
+      state.index = lexeme.hash;
       return core;
     },
   } as WinkModel;
@@ -145,8 +134,16 @@ function loadIsolatedWink(): IsolatedWink {
 /** The wink-nlp English tokenizer with an empty pipeline (tokenization only: no sentence, POS or NER steps). */
 function englishNlp(): IsolatedWink {
   if (english === undefined || english.lexemes.length - english.intrinsic > WINK_RENEW) english = loadIsolatedWink();
-  english.added.clear();
   return english;
+}
+
+/** Takes the words wink added since its list had `from` entries out of its index (see IsolatedWink). */
+function forgetAdded(wink: IsolatedWink, from: number): void {
+  const { lexemes, index } = wink;
+  for (let k = from; k < lexemes.length; k++) {
+    const word = lexemes[k] as string;
+    if (index[word] === k) delete index[word];
+  }
 }
 
 const graphemes = new Intl.Segmenter('en', { granularity: 'grapheme' });
@@ -196,17 +193,21 @@ interface WinkTokens {
 
 /** wink's tokens of `text` as read by a freshly loaded wink-nlp (see IsolatedWink). */
 function readWink(text: string): WinkTokens {
-  const { nlp } = englishNlp();
+  const wink = englishNlp();
+  const { nlp } = wink;
   const its = nlp.its;
+  const before = wink.lexemes.length;
   const tokens = nlp.readDoc(text).tokens();
   const spaces = tokens.out(its.precedingSpaces) as string[];
-  return {
+  const result = {
     values: tokens.out(its.value) as string[],
     types: tokens.out(its.type) as string[],
     contraction: tokens.out(its.contractionFlag) as boolean[],
     normals: tokens.out(its.normal) as string[],
     spaced: spaces.map((s) => s !== ''),
   };
+  if (wink.lexemes.length > before) forgetAdded(wink, before);
+  return result;
 }
 
 /**
@@ -257,33 +258,35 @@ function appendTokens(out: Tokens, wink: WinkTokens, firstSpaced: boolean): void
 const SPLITTER = /([ \u00a0\u2002-\u2005\u2009\u200a\u202f\u205f]+|[\n\r\t]+)/;
 
 /**
- * A memoised piece of text (between separators): wink's tokens, our tokens when the piece starts
- * a text or follows spaces, and one annotation slot for a scorer (for example VADER's reading of
- * the piece, keyed by its lexicon).
+ * A memoised piece of text (between separators): our tokens of the piece when it starts a text
+ * or follows spaces, and one annotation slot for a scorer (for example VADER's reading of the
+ * piece, keyed by its lexicon).
  */
 export interface Piece {
   text: string;
-  wink: WinkTokens;
   tokens: Tokens;
   annotationKey?: object;
   annotation?: unknown;
 }
 
 /**
- * wink output per piece, memoised: in running text most pieces ("the", "today.", "don't")
- * recur, so each distinct piece is tokenized by wink once. Bounded: the memo and the table of
- * token ids are emptied (and the generation of ids moves on) between texts once either is
- * full, so memory does not grow with the input.
+ * Pieces memoised in two generations: new pieces go to `young`; when it is full it becomes
+ * `old` (the previous `old` is dropped) and a piece found in `old` moves back to `young`. Pieces
+ * in use stay, pieces not met for a generation go, and memory stays bounded (at most twice
+ * MEMO_LIMIT pieces) without emptying the memo of common words all at once.
  */
-const memo = new Map<string, Piece>();
-const MEMO_LIMIT = 50_000;
+let young = new Map<string, Piece>();
+let old = new Map<string, Piece>();
+const MEMO_LIMIT = 60_000;
+/** Token ids (see Tokens.ids), kept apart from the memo; emptied with it when full. */
 const ids = new Map<string, number>();
-const IDS_LIMIT = 200_000;
+const IDS_LIMIT = 500_000;
 let generation = 0;
 
 /** Empties the memo of pieces and the table of token ids (the next generation of ids begins). */
 export function clearTokenMemo(): void {
-  memo.clear();
+  young = new Map();
+  old = new Map();
   ids.clear();
   generation++;
 }
@@ -308,16 +311,21 @@ function idOf(norm: string): number {
 }
 
 function winkPiece(piece: string): Piece {
-  let hit = memo.get(piece);
+  let hit = young.get(piece);
+  if (hit !== undefined) return hit;
+  hit = old.get(piece);
   if (hit === undefined) {
-    const wink = readWink(piece);
     const tokens: Tokens = { norm: [], raw: [], kind: [], nWords: 0 };
-    appendTokens(tokens, wink, true);
+    appendTokens(tokens, readWink(piece), true);
     tokens.ids = tokens.norm.map(idOf);
     tokens.generation = generation;
-    hit = { text: piece, wink, tokens };
-    memo.set(piece, hit);
+    hit = { text: piece, tokens };
   }
+  if (young.size >= MEMO_LIMIT) {
+    old = young;
+    young = new Map();
+  }
+  young.set(piece, hit);
   return hit;
 }
 
@@ -345,7 +353,7 @@ export function tokenizeEnglish(text: string): Tokens {
  * given), for scorers that annotate pieces. The pieces stay valid until the next call.
  */
 export function tokenizeEnglishPieces(text: string, pieces?: Piece[]): Tokens {
-  if (memo.size >= MEMO_LIMIT || ids.size >= IDS_LIMIT) clearTokenMemo();
+  if (ids.size >= IDS_LIMIT) clearTokenMemo();
   const idList: number[] = [];
   const out: Tokens = { norm: [], raw: [], kind: [], nWords: 0, ids: idList, generation };
   if (pieces) pieces.length = 0;
@@ -363,7 +371,9 @@ export function tokenizeEnglishPieces(text: string, pieces?: Piece[]): Tokens {
     if (!spaced && out.raw.length > 0) {
       // After a line break: the first token may attach to the one before (see appendTokens).
       const before = out.raw.length;
-      appendTokens(out, memoised.wink, false);
+      // wink's tokens of the piece are read again: they are the same (see IsolatedWink), and
+      // only pieces right after a line break need them.
+      appendTokens(out, readWink(part), false);
       idList.length = before - 1;
       for (let k = before - 1; k < out.norm.length; k++) idList.push(idOf(out.norm[k] as string));
     } else {
