@@ -5,6 +5,7 @@
 import winkNLP from 'wink-nlp';
 import model from 'wink-eng-lite-web-model';
 import { describe, expect, it } from 'vitest';
+import { random } from '../../src/stats/random.js';
 import { loadCoreModel, tokenizeEnglish as tokenizeWithIds, tokenizeEnglishWhole, type Tokens } from '../../src/text/tokenize.js';
 
 /** The tokens without their ids (the reference has none). */
@@ -13,17 +14,6 @@ function tokenizeEnglish(text: string): Omit<Tokens, 'ids' | 'generation'> {
   return { norm, raw, kind, nWords };
 }
 
-/** mulberry32, seeded: the same texts on every run. */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 // Pieces chosen to reach wink's special paths: contractions with and without apostrophes,
 // punctuation on either side, emoji sequences (skin tones, ZWJ, flags, VS16), emoticons, URLs,
@@ -52,7 +42,7 @@ describe('tokenizeEnglish memo equals one wink-nlp pass over the whole text', ()
   // over the whole text is a piece whose split changes because another piece of the same text
   // taught wink a word first (about 1 text in 100,000 of these; none among these 4,000).
   it('on 4,000 seeded texts built from wink edge cases (reference: wink-nlp readDoc)', () => {
-    const rand = seeded(20261202);
+    const rand = random(20261202);
     let compared = 0;
     for (let i = 0; i < 4000; i++) {
       const text = randomText(rand);
