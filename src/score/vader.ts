@@ -87,7 +87,7 @@ function cachedWord(w: string, lexicon: VaderLexicon, words: Map<string, VaderWo
 
 /** Per lexicon, its VaderWord of each token met (bounded: cleared at WORD_CACHE_LIMIT tokens). */
 const wordCaches = new WeakMap<VaderLexicon, Map<string, VaderWord>>();
-const WORD_CACHE_LIMIT = 100_000;
+const WORD_CACHE_LIMIT = 50_000;
 
 function wordsOf(lexicon: VaderLexicon): Map<string, VaderWord> {
   let words = wordCaches.get(lexicon);

@@ -50,7 +50,7 @@ interface IsolatedWink {
   lexemes: unknown[];
 }
 
-const WINK_RENEW = 200_000;
+const WINK_RENEW = 100_000;
 let english: IsolatedWink | undefined;
 
 /** The parts of wink's core model read here (see loadCoreModel). */
@@ -279,10 +279,10 @@ export interface Piece {
  */
 let young = new Map<string, Piece>();
 let old = new Map<string, Piece>();
-const MEMO_LIMIT = 60_000;
+const MEMO_LIMIT = 30_000;
 /** Token ids (see Tokens.ids), kept apart from the memo; emptied with it when full. */
 const ids = new Map<string, number>();
-const IDS_LIMIT = 500_000;
+const IDS_LIMIT = 100_000;
 let generation = 0;
 
 /** Empties the memo of pieces and the table of token ids (the next generation of ids begins). */
