@@ -279,10 +279,10 @@ export interface Piece {
  */
 let young = new Map<string, Piece>();
 let old = new Map<string, Piece>();
-const MEMO_LIMIT = 30_000;
+const MEMO_LIMIT = 60_000;
 /** Token ids (see Tokens.ids), kept apart from the memo; emptied with it when full. */
 const ids = new Map<string, number>();
-const IDS_LIMIT = 100_000;
+const IDS_LIMIT = 200_000;
 let generation = 0;
 
 /** Empties the memo of pieces and the table of token ids (the next generation of ids begins). */
