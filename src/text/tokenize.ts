@@ -265,7 +265,7 @@ const SPLITTER = /([ \u00a0\u2002-\u2005\u2009\u200a\u202f\u205f]+|[\n\r\t]+)/;
 export interface Piece {
   text: string;
   tokens: Tokens;
-  /** Times met (up to HOT_AFTER), to find the pieces worth keeping in the hot map. */
+  /** Times met in the young map, to find the pieces worth keeping in the hot map. */
   seen: number;
   annotationKey?: object;
   annotation?: unknown;
@@ -297,11 +297,6 @@ export function clearTokenMemo(): void {
 /** The generation of token ids (see Tokens.ids); ids of an older generation mean nothing now. */
 export function tokenGeneration(): number {
   return generation;
-}
-
-/** Number of distinct token ids of the current generation (an upper bound for arrays indexed by id). */
-export function tokenIdCount(): number {
-  return ids.size;
 }
 
 function idOf(norm: string): number {
@@ -358,8 +353,10 @@ function winkPiece(piece: string): Piece {
  * - Words counted: word, number, ordinal, hashtag, mention, email, URL, time, date and currency
  *   tokens; punctuation, emoji, emoticons and symbols are not words.
  *
- * wink tokenizes each space-separated piece on its own, so pieces are memoised (see winkPiece):
- * the tokens are those of one wink pass over the whole text (`tokenizeEnglishWhole`).
+ * wink tokenizes each space-separated piece on its own, so pieces are memoised (see winkPiece),
+ * and each piece is read as by a freshly loaded wink-nlp (see IsolatedWink): the tokens are those
+ * of one wink pass over the whole text (`tokenizeEnglishWhole`) except where, in that pass, one
+ * piece's new words would have changed how a later piece of the same text is split.
  */
 export function tokenizeEnglish(text: string): Tokens {
   return tokenizeEnglishPieces(text);

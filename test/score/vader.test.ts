@@ -5,7 +5,8 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { compileLexicon } from '../../src/lexicon/compile-lexicon.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
-import { scoreVader, type VaderScores } from '../../src/score/vader.js';
+import { scoreVader, scoreVaderPieces, type VaderScores } from '../../src/score/vader.js';
+import { tokenizeEnglishPieces, type Piece } from '../../src/text/tokenize.js';
 import { vaderTokens } from '../../src/score/vader-tokens.js';
 import { vaderSentences } from './vader-sentences.js';
 
@@ -233,6 +234,31 @@ describe('vaderTokens follows the tokenisation of the VADER reference implementa
   ];
   it.each(cases)('splits %j as the reference does', (text, tokens) => {
     expect(vaderTokens(text)).toEqual(tokens);
+  });
+});
+
+describe('scoreVaderPieces (the scoring path) equals scoreVader', () => {
+  // The scorer hands VADER the memoised pieces of the wink tokenizer; VADER's whitespace split
+  // must give the same tokens from them as from the whole text, whatever the whitespace.
+  const viaPieces = (text: string): VaderScores => {
+    const pieces: Piece[] = [];
+    tokenizeEnglishPieces(text, pieces);
+    return scoreVaderPieces(pieces, text, lexicon);
+  };
+
+  it('on the 2,000 parity sentences below, scored twice (memoised pieces the second time)', () => {
+    for (const text of vaderSentences(20140601, [...lexicon.keys()], 2000)) {
+      expect(viaPieces(text), text).toEqual(scoreVader(text, lexicon));
+      expect(viaPieces(text), text).toEqual(scoreVader(text, lexicon));
+    }
+  });
+
+  it('on texts with every whitespace character JavaScript splits on, inside and between pieces', () => {
+    const spaces = ['\t', '\n', '\v', '\f', '\r', ' ', '\u00a0', '\u1680', '\u2000', '\u2005', '\u2007', '\u200a', '\u2028', '\u2029', '\u202f', '\u205f', '\u3000', '\ufeff'];
+    for (const space of spaces) {
+      const text = `VERY good${space}but not${space}${space}great!! :)${space}sad`;
+      expect(viaPieces(text), JSON.stringify(space)).toEqual(scoreVader(text, lexicon));
+    }
   });
 });
 
