@@ -73,7 +73,13 @@ export async function openAtomicLineWriter(path: string): Promise<AtomicLineWrit
       await rename(tmp, path);
     },
     async abort() {
-      stream.destroy();
+      // The file may still be opening: wait until the stream has closed it, or the removal
+      // could run first and the open create the file after it.
+      if (!stream.closed) {
+        const closed = new Promise<void>((resolve) => stream.once('close', () => resolve()));
+        stream.destroy();
+        await closed;
+      }
       await rm(tmp, { force: true });
     },
   };

@@ -32,11 +32,13 @@ describe('openAtomicLineWriter', () => {
     expect(readFileSync(path, 'utf8')).toBe(lines.join('\n') + '\n');
   });
 
-  it('abort leaves no file and no temporary file behind', async () => {
+  it('abort leaves no file and no temporary file behind, even while the file is still being opened', async () => {
     const dir = folder();
-    const writer = await openAtomicLineWriter(join(dir, 'out.csv'));
-    writer.write('a,b');
-    await writer.abort();
+    // Many writers aborted at once: their files are still opening when abort runs.
+    const writers = await Promise.all(Array.from({ length: 40 }, (_, k) => openAtomicLineWriter(join(dir, `out${k}.csv`))));
+    writers.forEach((w) => w.write('a,b'));
+    await Promise.all(writers.map((w) => w.abort()));
+    await new Promise((resolve) => setTimeout(resolve, 50));
     expect(readdirSync(dir)).toEqual([]);
   });
 });
