@@ -101,20 +101,19 @@ function wordsOf(lexicon: VaderLexicon): Map<string, VaderWord> {
 /** The tokens of the text being scored, reused from text to text (scoring is synchronous; entries from `n` on are stale). */
 const scratch = { n: 0, raw: [] as string[], lower: [] as string[], valenceOf: [] as Array<number | undefined>, caps: [] as boolean[], sentiments: [] as number[] };
 
+/** `list` copied into a new array of `size` entries (the first scratch.n kept, the rest `fill`). */
+function grown<T>(list: readonly T[], size: number, fill: T): T[] {
+  const next = new Array<T>(size).fill(fill);
+  for (let k = 0; k < scratch.n; k++) next[k] = list[k] as T;
+  return next;
+}
+
 function grow(n: number): void {
   const size = Math.max(n, 2 * scratch.lower.length, 64);
-  const raw = new Array<string>(size).fill('');
-  for (let k = 0; k < scratch.n; k++) raw[k] = scratch.raw[k] as string;
-  scratch.raw = raw;
-  const lower = new Array<string>(size).fill('');
-  for (let k = 0; k < scratch.n; k++) lower[k] = scratch.lower[k] as string;
-  scratch.lower = lower;
-  const valenceOf = new Array<number | undefined>(size).fill(undefined);
-  for (let k = 0; k < scratch.n; k++) valenceOf[k] = scratch.valenceOf[k];
-  scratch.valenceOf = valenceOf;
-  const caps = new Array<boolean>(size).fill(false);
-  for (let k = 0; k < scratch.n; k++) caps[k] = scratch.caps[k] as boolean;
-  scratch.caps = caps;
+  scratch.raw = grown(scratch.raw, size, '');
+  scratch.lower = grown(scratch.lower, size, '');
+  scratch.valenceOf = grown<number | undefined>(scratch.valenceOf, size, undefined);
+  scratch.caps = grown(scratch.caps, size, false);
   scratch.sentiments = new Array<number>(size).fill(0);
 }
 

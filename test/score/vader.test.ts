@@ -253,6 +253,16 @@ describe('scoreVaderPieces (the scoring path) equals scoreVader', () => {
     }
   });
 
+  it('on texts longer than the scratch arrays start (hundreds of tokens), equal to npm vader-sentiment 1.1.3', () => {
+    const sentences = vaderSentences(20261202, [...lexicon.keys()], 120);
+    for (const count of [10, 40, 120]) {
+      const text = sentences.slice(0, count).join(' ');
+      const ours = viaPieces(text);
+      expect(ours).toEqual(scoreVader(text, lexicon));
+      expect(Math.abs(ours.compound - npmScores(text).compound)).toBeLessThanOrEqual(0.001);
+    }
+  });
+
   it('on texts with every whitespace character JavaScript splits on, inside and between pieces', () => {
     const spaces = ['\t', '\n', '\v', '\f', '\r', ' ', '\u00a0', '\u1680', '\u2000', '\u2005', '\u2007', '\u200a', '\u2028', '\u2029', '\u202f', '\u205f', '\u3000', '\ufeff'];
     for (const space of spaces) {
