@@ -11,7 +11,7 @@ import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { csvRow } from '../report/csv.js';
 import { scoreRowWriter, scoresHeader } from '../report/score-rows.js';
 import { scoreColumns, scoredEntryFrom, type ScoreColumn } from '../score/score-entry.js';
-import { scoreTexts, type BatchScores } from '../score/score-text.js';
+import { mergeVaderColumns, scoreTexts, type BatchScores } from '../score/score-text.js';
 import { autoWorkers, createScorePool, type ScorePool } from './score-pool.js';
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
@@ -72,6 +72,9 @@ export interface RunScoreResult {
 /** Entries per scoring batch. */
 const BATCH_SIZE = 256;
 
+/** Batches waiting per worker from which this thread takes over the VADER lexicons of a batch. */
+const VADER_HERE_AFTER = 2;
+
 /** Where the rejects and the sidecar of a scores file go. */
 export function scoreSidecars(out: string): { rejects: string; meta: string } {
   const stem = out.replace(/\.csv$/i, '');
@@ -116,6 +119,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       workers = autoWorkers(bytes);
     }
     pool = createScorePool(options.lexicons, workers as number);
+    const hasVader = options.lexicons.some((l) => l.scoring === 'vader');
     // Entries are scored in batches and written in input order, by the workers when there are any
     // (a few batches in flight per worker, so memory stays bounded), else in this thread.
     const inflight: Array<{ entries: RawEntry[]; scores: Promise<BatchScores> }> = [];
@@ -126,7 +130,21 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       const entries = batch;
       batch = [];
       const texts = entries.map((e) => e.text);
-      inflight.push({ entries, scores: pool ? pool.score(texts) : Promise.resolve(scoreTexts(texts, options.lexicons, columns.length)) });
+      // When the workers fall behind (they tokenize, which costs most on text with many rare
+      // words), this thread scores the batch's VADER lexicons itself, from the text, while the
+      // workers score the rest. Either way the scores are the same (tested), so the file is too.
+      let scored: Promise<BatchScores>;
+      if (!pool) scored = Promise.resolve(scoreTexts(texts, options.lexicons, columns.length));
+      else if (!hasVader || pool.queued() < VADER_HERE_AFTER * pool.size) scored = pool.score(texts);
+      else {
+        const fromWorkers = pool.score(texts, 'rules');
+        const vader = scoreTexts(texts, options.lexicons, columns.length, 'vader');
+        scored = fromWorkers.then((batch) => {
+          mergeVaderColumns(batch, vader, options.lexicons, columns.length);
+          return batch;
+        });
+      }
+      inflight.push({ entries, scores: scored });
     };
     const drain = async (keep: number): Promise<void> => {
       while (inflight.length > keep) {

@@ -3,12 +3,15 @@ import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
-import type { BatchScores } from '../score/score-text.js';
+import type { BatchScores, ScorePart } from '../score/score-text.js';
 
 /** Scoring workers that score batches of texts in parallel, results in submission order per call. */
 export interface ScorePool {
   size: number;
-  score(texts: string[]): Promise<BatchScores>;
+  /** Scores `part` of the lexicons (see scoreTextInto) for these texts. */
+  score(texts: string[], part?: ScorePart): Promise<BatchScores>;
+  /** Batches sent to the workers and not yet returned. */
+  queued(): number;
   close(): Promise<void>;
 }
 
@@ -60,7 +63,8 @@ export function createScorePool(lexicons: readonly CompiledLexicon[], size: numb
   let next = 0;
   return {
     size,
-    score(texts) {
+    queued: () => pending.reduce((sum, p) => sum + p.size, 0),
+    score(texts, part = 'all') {
       if (failure) return Promise.reject(failure);
       // the least busy worker takes the batch
       let w = 0;
@@ -68,7 +72,7 @@ export function createScorePool(lexicons: readonly CompiledLexicon[], size: numb
       const id = next++;
       return new Promise<BatchScores>((resolve, reject) => {
         pending[w]?.set(id, { resolve, reject });
-        workers[w]?.postMessage({ id, texts });
+        workers[w]?.postMessage({ id, texts, part });
       });
     },
     async close() {

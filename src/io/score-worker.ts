@@ -6,12 +6,12 @@ import { parentPort, workerData } from 'node:worker_threads';
 import { compileLexicon } from '../lexicon/compile-lexicon.js';
 import type { Lexicon } from '../lexicon/lexicon-types.js';
 import { scoreColumns } from '../score/score-columns.js';
-import { scoreTexts } from '../score/score-text.js';
+import { scoreTexts, type ScorePart } from '../score/score-text.js';
 
 const lexicons = (workerData as { lexicons: Lexicon[] }).lexicons.map(compileLexicon);
 const columns = scoreColumns(lexicons).length;
 
-parentPort?.on('message', (message: { id: number; texts: string[] }) => {
-  const out = scoreTexts(message.texts, lexicons, columns);
+parentPort?.on('message', (message: { id: number; texts: string[]; part: ScorePart }) => {
+  const out = scoreTexts(message.texts, lexicons, columns, message.part);
   parentPort?.postMessage({ id: message.id, ...out }, [out.values.buffer as ArrayBuffer, out.matched.buffer as ArrayBuffer, out.negated.buffer as ArrayBuffer, out.words.buffer as ArrayBuffer]);
 });

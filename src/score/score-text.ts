@@ -1,7 +1,8 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { tokenize, tokenizeEnglishPieces, type Piece, type Tokens } from '../text/tokenize.js';
 import { matchLexicon } from './match-lexicon.js';
-import { scoreVaderPieces } from './vader.js';
+import { VADER_COLUMNS } from './score-columns.js';
+import { scoreVader, scoreVaderPieces, type VaderScores } from './vader.js';
 
 /**
  * Scores of a batch of texts as flat typed arrays (row-major), the form the scoring workers send
@@ -31,8 +32,19 @@ export function createBatchScores(n: number, columns: number, lexicons: number):
  * for a text with no VADER tokens (the reference returns zeros, but empty is not neutral).
  * The text is tokenized once per language; words are counted with the English tokenizer unless
  * only other-language lexicons are used.
+ *
+ * `part` splits the work between threads: `rules` scores every lexicon but VADER (and counts
+ * words), `vader` only the VADER lexicons (from the text itself: no tokenizing), `all` both.
  */
-export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number): void {
+export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): void {
+  if (part === 'vader') {
+    let c = i * columns;
+    for (const lex of lexicons) {
+      if (lex.scoring === 'vader') writeVader(out, c, scoreVader(text, lex.valence));
+      c += lex.scoring === 'vader' ? VADER_COLUMNS.length : lex.categories.length;
+    }
+    return;
+  }
   let byLanguage: Map<string, Tokens> | undefined;
   let english: Tokens | undefined;
   const englishTokens = (): Tokens => (english ??= tokenizeEnglishPieces(text, pieces));
@@ -49,13 +61,11 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
     if (lex.scoring === 'vader') {
       // VADER splits the text its own way, but on whitespace only, so it can start from the
       // memoised pieces of the English tokens (see scoreVaderPieces).
-      englishTokens();
-      const v = scoreVaderPieces(pieces, text, lex.valence);
-      const has = v.tokens > 0;
-      out.values[c++] = has ? v.compound : NaN;
-      out.values[c++] = has ? v.pos : NaN;
-      out.values[c++] = has ? v.neu : NaN;
-      out.values[c++] = has ? v.neg : NaN;
+      if (part === 'all') {
+        englishTokens();
+        writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence));
+      }
+      c += VADER_COLUMNS.length;
       continue;
     }
     const tokens = tokensFor(lex.language);
@@ -78,9 +88,35 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
 /** The memoised pieces of the text being scored (scoring is synchronous). */
 const pieces: Piece[] = [];
 
-/** Scores a batch of texts (see scoreTextInto). */
-export function scoreTexts(texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number): BatchScores {
+/** Which lexicons scoreTextInto scores: all, all but VADER (`rules`), or only VADER. */
+export type ScorePart = 'all' | 'rules' | 'vader';
+
+/** VADER's four columns at `c` (NaN for a text without VADER tokens). */
+function writeVader(out: BatchScores, c: number, v: VaderScores): void {
+  const has = v.tokens > 0;
+  out.values[c] = has ? v.compound : NaN;
+  out.values[c + 1] = has ? v.pos : NaN;
+  out.values[c + 2] = has ? v.neu : NaN;
+  out.values[c + 3] = has ? v.neg : NaN;
+}
+
+/** Scores a batch of texts (see scoreTextInto for `part`). */
+export function scoreTexts(texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number, part: ScorePart = 'all'): BatchScores {
   const out = createBatchScores(texts.length, columns, lexicons.length);
-  for (let i = 0; i < texts.length; i++) scoreTextInto(texts[i] as string, lexicons, out, i, columns);
+  for (let i = 0; i < texts.length; i++) scoreTextInto(texts[i] as string, lexicons, out, i, columns, part);
   return out;
+}
+
+/** Copies the VADER columns of `from` into `into` (batches of the same texts, scored by parts). */
+export function mergeVaderColumns(into: BatchScores, from: BatchScores, lexicons: readonly CompiledLexicon[], columns: number): void {
+  const rows = into.words.length;
+  let c = 0;
+  for (const lex of lexicons) {
+    if (lex.scoring !== 'vader') {
+      c += lex.categories.length;
+      continue;
+    }
+    for (let i = 0; i < rows; i++) for (let k = 0; k < VADER_COLUMNS.length; k++) into.values[i * columns + c + k] = from.values[i * columns + c + k] as number;
+    c += VADER_COLUMNS.length;
+  }
 }
