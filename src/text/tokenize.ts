@@ -265,6 +265,11 @@ const SPLITTER = /([ \u00a0\u2002-\u2005\u2009\u200a\u202f\u205f]+|[\n\r\t]+)/;
 export interface Piece {
   text: string;
   tokens: Tokens;
+  /**
+   * Our tokens of the piece right after a tab or line break, when they differ from `tokens`:
+   * a first token such as `'em` then attaches to the token before and counts no word.
+   */
+  afterBreak?: Tokens;
   /** Times met in the young map, to find the pieces worth keeping in the hot map. */
   seen: number;
   annotationKey?: object;
@@ -317,6 +322,14 @@ let hot = new Map<string, Piece>();
 const HOT_LIMIT = 8192;
 const HOT_AFTER = 16;
 
+/** `out` with wink's tokens appended (see appendTokens) and ids for all of them. */
+function withIds(out: Tokens, wink: WinkTokens, firstSpaced: boolean): Tokens {
+  appendTokens(out, wink, firstSpaced);
+  out.ids = out.norm.map(idOf);
+  out.generation = generation;
+  return out;
+}
+
 function winkPiece(piece: string): Piece {
   let hit = hot.get(piece);
   if (hit !== undefined) return hit;
@@ -327,11 +340,18 @@ function winkPiece(piece: string): Piece {
   }
   hit = old.get(piece);
   if (hit === undefined) {
-    const tokens: Tokens = { norm: [], raw: [], kind: [], nWords: 0 };
-    appendTokens(tokens, readWink(piece), true);
-    tokens.ids = tokens.norm.map(idOf);
-    tokens.generation = generation;
+    const wink = readWink(piece);
+    const tokens = withIds({ norm: [], raw: [], kind: [], nWords: 0 }, wink, true);
+    // After a break the token before is a tab or line break, a control character, and no
+    // character joins a control character into one grapheme (Unicode UAX #29, rules GB4 and
+    // GB5), so `\n` stands for every break here.
+    const afterBreak = withIds({ norm: ['\n'], raw: ['\n'], kind: [TokenKind.Other], nWords: 0 }, wink, false);
+    afterBreak.norm.shift();
+    afterBreak.raw.shift();
+    afterBreak.kind.shift();
+    (afterBreak.ids as number[]).shift();
     hit = { text: piece, tokens, seen: 0 };
+    if (afterBreak.nWords !== tokens.nWords || afterBreak.norm.some((n, k) => n !== tokens.norm[k])) hit.afterBreak = afterBreak;
   }
   if (young.size >= MEMO_LIMIT) {
     old = young;
@@ -382,25 +402,16 @@ export function tokenizeEnglishPieces(text: string, pieces?: Piece[]): Tokens {
     }
     const memoised = winkPiece(part);
     pieces?.push(memoised);
-    if (!spaced && out.raw.length > 0) {
-      // After a line break: the first token may attach to the one before (see appendTokens).
-      const before = out.raw.length;
-      // wink's tokens of the piece are read again: they are the same (see IsolatedWink), and
-      // only pieces right after a line break need them.
-      appendTokens(out, readWink(part), false);
-      idList.length = before - 1;
-      for (let k = before - 1; k < out.norm.length; k++) idList.push(idOf(out.norm[k] as string));
-    } else {
-      const t = memoised.tokens;
-      const tIds = t.ids as number[];
-      for (let k = 0; k < t.raw.length; k++) {
-        out.norm.push(t.norm[k] as string);
-        out.raw.push(t.raw[k] as string);
-        out.kind.push(t.kind[k] as TokenKind);
-        idList.push(tIds[k] as number);
-      }
-      out.nWords += t.nWords;
+    // Right after a tab or line break the first token may attach to it (see Piece.afterBreak).
+    const t = !spaced && out.raw.length > 0 && memoised.afterBreak ? memoised.afterBreak : memoised.tokens;
+    const tIds = t.ids as number[];
+    for (let k = 0; k < t.raw.length; k++) {
+      out.norm.push(t.norm[k] as string);
+      out.raw.push(t.raw[k] as string);
+      out.kind.push(t.kind[k] as TokenKind);
+      idList.push(tIds[k] as number);
     }
+    out.nWords += t.nWords;
     spaced = false;
   }
   return out;

@@ -52,10 +52,13 @@ describe('tokenizeEnglish memo equals one wink-nlp pass over the whole text', ()
     expect(compared).toBe(4000);
   });
 
-  it('on texts that begin or end with separators, are empty, or are only separators', () => {
-    for (const text of ['', ' ', '\n', ' \n\t ', '\u00a0', "\n'em", "\n🐝🏽", 'a\n\nb', "word\n'", ' 👍🏽 ', '\r\n❤️\r\n']) {
+  it('on texts that begin or end with separators, are empty, or are only separators, and pieces that attach to a line break', () => {
+    for (const text of ['', ' ', '\n', ' \n\t ', '\u00a0', "\n'em", "x\nn't", "x\n'm", 'x\r\n’s', "x\tn't", "\n🐝🏽", 'a\n\nb', "word\n'", ' 👍🏽 ', '\r\n❤️\r\n']) {
       expect(tokenizeEnglish(text), JSON.stringify(text)).toEqual(tokenizeEnglishWhole(text));
     }
+    // After a line break `n't` attaches to the token before and counts no word; after a space it counts.
+    expect(tokenizeEnglish("x\nn't").nWords).toBe(1);
+    expect(tokenizeEnglish("x n't").nWords).toBe(2);
   });
 
   it('memoised pieces give the same tokens the second time (no state carried between texts)', () => {
