@@ -140,7 +140,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
         const fromWorkers = pool.score(texts, 'rules');
         const vader = scoreTexts(texts, options.lexicons, columns.length, 'vader');
         scored = fromWorkers.then((batch) => {
-          mergeVaderColumns(batch, vader, options.lexicons, columns.length);
+          mergeVaderColumns(batch, vader, options.lexicons);
           return batch;
         });
       }

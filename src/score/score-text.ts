@@ -1,7 +1,7 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { tokenize, tokenizeEnglishPieces, type Piece, type Tokens } from '../text/tokenize.js';
 import { matchLexicon } from './match-lexicon.js';
-import { VADER_COLUMNS } from './score-columns.js';
+import { scoreColumns, VADER_COLUMNS } from './score-columns.js';
 import { scoreVader, scoreVaderPieces, type VaderScores } from './vader.js';
 
 /**
@@ -37,14 +37,6 @@ export function createBatchScores(n: number, columns: number, lexicons: number):
  * words), `vader` only the VADER lexicons (from the text itself: no tokenizing), `all` both.
  */
 export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): void {
-  if (part === 'vader') {
-    let c = i * columns;
-    for (const lex of lexicons) {
-      if (lex.scoring === 'vader') writeVader(out, c, scoreVader(text, lex.valence));
-      c += lex.scoring === 'vader' ? VADER_COLUMNS.length : lex.categories.length;
-    }
-    return;
-  }
   let byLanguage: Map<string, Tokens> | undefined;
   let english: Tokens | undefined;
   const englishTokens = (): Tokens => (english ??= tokenizeEnglishPieces(text, pieces));
@@ -64,8 +56,14 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       if (part === 'all') {
         englishTokens();
         writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence));
+      } else if (part === 'vader') {
+        writeVader(out, c, scoreVader(text, lex.valence));
       }
       c += VADER_COLUMNS.length;
+      continue;
+    }
+    if (part === 'vader') {
+      c += lex.categories.length;
       continue;
     }
     const tokens = tokensFor(lex.language);
@@ -81,6 +79,7 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       else out.values[c] = sum;
     }
   }
+  if (part === 'vader') return;
   const counted = english ?? (byLanguage ? (byLanguage.values().next().value as Tokens) : englishTokens());
   out.words[i] = counted.nWords;
 }
@@ -108,15 +107,10 @@ export function scoreTexts(texts: readonly string[], lexicons: readonly Compiled
 }
 
 /** Copies the VADER columns of `from` into `into` (batches of the same texts, scored by parts). */
-export function mergeVaderColumns(into: BatchScores, from: BatchScores, lexicons: readonly CompiledLexicon[], columns: number): void {
-  const rows = into.words.length;
-  let c = 0;
-  for (const lex of lexicons) {
-    if (lex.scoring !== 'vader') {
-      c += lex.categories.length;
-      continue;
-    }
-    for (let i = 0; i < rows; i++) for (let k = 0; k < VADER_COLUMNS.length; k++) into.values[i * columns + c + k] = from.values[i * columns + c + k] as number;
-    c += VADER_COLUMNS.length;
+export function mergeVaderColumns(into: BatchScores, from: BatchScores, lexicons: readonly CompiledLexicon[]): void {
+  const columns = scoreColumns(lexicons);
+  const vader = columns.flatMap((column, k) => (column.aggregation === 'vader' ? [k] : []));
+  for (let row = 0; row < into.words.length * columns.length; row += columns.length) {
+    for (const k of vader) into.values[row + k] = from.values[row + k] as number;
   }
 }

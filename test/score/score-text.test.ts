@@ -19,7 +19,7 @@ describe('scoreTexts by parts (how the reading thread and the workers share a ba
     const vaderColumn = scoreColumns(lexicons).findIndex((c) => c.name === 'vader.compound');
     expect(rules.values[vaderColumn]).toBe(0);
     expect(vader.words.every((w) => w === 0)).toBe(true);
-    mergeVaderColumns(rules, vader, lexicons, columns);
+    mergeVaderColumns(rules, vader, lexicons);
     expect(rules).toEqual(all);
     expect(all.values.some((v, k) => k % columns === vaderColumn && v !== 0 && !Number.isNaN(v))).toBe(true);
   });
