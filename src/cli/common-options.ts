@@ -5,6 +5,16 @@ import type { TimeOptions } from '../ingest/parse-instant.js';
 import type { WallClockPolicy } from '../ingest/zone-offset.js';
 import type { Reconciliation } from '../types.js';
 
+/** `--dst-gap`: what to do with a local time skipped by a clock change (shared by every command that reads times). */
+export function dstGapOption(): Option {
+  return new Option('--dst-gap <policy>', 'a local time skipped by a clock change: reject it (a counted reject with its reason), or take the earlier/later instant').choices(['reject', 'earlier', 'later']).default('reject');
+}
+
+/** `--dst-overlap`: what to do with a local time repeated by a clock change. */
+export function dstOverlapOption(): Option {
+  return new Option('--dst-overlap <policy>', 'a local time repeated by a clock change: reject it (a counted reject with its reason), or take the earlier/later instant').choices(['reject', 'earlier', 'later']).default('reject');
+}
+
 /** Adds the options shared by every command that reads timestamped rows. */
 export function addTimeOptions(command: Command): Command {
   return command
@@ -13,8 +23,8 @@ export function addTimeOptions(command: Command): Command {
     .option('--zones <file>', 'CSV with columns person, zone[, from] giving each person\'s IANA zone (from: local date a move takes effect)')
     .option('--time-format <format>', 'luxon format of the time column, e.g. "dd/MM/yyyy HH:mm" (default: RFC 3339 / ISO 8601 or epoch)')
     .addOption(new Option('--epoch <unit>', 'unit of numeric times').choices(['auto', 's', 'ms']).default('auto'))
-    .addOption(new Option('--dst-gap <policy>', 'a local time skipped by a clock change: reject the row, or take the earlier/later instant').choices(['reject', 'earlier', 'later']).default('reject'))
-    .addOption(new Option('--dst-overlap <policy>', 'a local time repeated by a clock change: reject the row, or take the earlier/later instant').choices(['reject', 'earlier', 'later']).default('reject'))
+    .addOption(dstGapOption())
+    .addOption(dstOverlapOption())
     .option('--delimiter <char>', 'field delimiter of delimited text (default: , for .csv, tab for .tsv)')
     .addOption(new Option('--format <format>', 'input format when the extension does not tell').choices(['csv', 'tsv', 'jsonl', 'json']));
 }

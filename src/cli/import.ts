@@ -10,6 +10,7 @@ import { createRedactor } from '../privacy/create-redactor.js';
 import { pseudonymizePerson } from '../privacy/pseudonymize-person.js';
 import { importReconciliationText } from '../report/import-reconciliation-text.js';
 import type { WallClockPolicy } from '../ingest/zone-offset.js';
+import { dstGapOption, dstOverlapOption } from './common-options.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
 
@@ -40,8 +41,8 @@ export function registerImport(program: Command): void {
     .option('--time-field <name>', 'chat-table: field holding the time')
     .option('--text-field <name>', 'chat-table: field holding the text')
     .option('--time-format <format>', 'chat-table: luxon format of the time field (default: RFC 3339 / ISO 8601 or epoch)')
-    .addOption(new Option('--dst-gap <policy>', 'a local time skipped by a clock change: reject it, or take the earlier/later instant').choices(['reject', 'earlier', 'later']).default('reject'))
-    .addOption(new Option('--dst-overlap <policy>', 'a local time repeated by a clock change: reject it, or take the earlier/later instant').choices(['reject', 'earlier', 'later']).default('reject'))
+    .addOption(dstGapOption())
+    .addOption(dstOverlapOption())
     .option('--merge-burst <minutes>', 'merge the participant\'s messages that follow each other within this many minutes into one entry')
     .option('--dedupe', 'drop exact and near-duplicate entries (repeated or forwarded text)')
     .option('--near-threshold <jaccard>', 'with --dedupe: word-shingle Jaccard similarity that counts as a near duplicate', '0.8')
