@@ -1,5 +1,5 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
-import { tokenize, tokenizeEnglishPieces, type Piece, type Tokens } from '../text/tokenize.js';
+import { tokenize, tokenizeEnglishShared, type Piece, type Tokens } from '../text/tokenize.js';
 import { matchLexicon } from './match-lexicon.js';
 import { scoreColumns, VADER_COLUMNS } from './score-columns.js';
 import { scoreVader, scoreVaderPieces, type VaderScores } from './vader.js';
@@ -39,7 +39,7 @@ export function createBatchScores(n: number, columns: number, lexicons: number):
 export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): void {
   let byLanguage: Map<string, Tokens> | undefined;
   let english: Tokens | undefined;
-  const englishTokens = (): Tokens => (english ??= tokenizeEnglishPieces(text, pieces));
+  const englishTokens = (): Tokens => (english ??= tokenizeEnglishShared(text, pieces));
   const tokensFor = (language: string): Tokens => {
     if (language === 'en' || language.startsWith('en-')) return englishTokens();
     byLanguage ??= new Map();

@@ -1,6 +1,7 @@
 import { createRequire } from 'node:module';
 import winkNLP from 'wink-nlp';
 import model from 'wink-eng-lite-web-model';
+import { HASH_START, hashStep, PieceTable } from './piece-table.js';
 
 /** Token kinds. Words are what `nWords` counts; punctuation stops negation windows. */
 export const TokenKind = { Word: 0, Punct: 1, Emoji: 2, Emoticon: 3, Number: 4, Other: 5 } as const;
@@ -63,6 +64,9 @@ interface CoreModel {
     posClusters: { list: unknown[] };
   };
   pos: { hash: Record<string, number> };
+  trex: unknown;
+  tcat: { hash: Record<string, number> };
+  preserve: unknown;
 }
 
 const requireModelFile = createRequire(import.meta.url);
@@ -138,7 +142,7 @@ function englishNlp(): IsolatedWink {
 }
 
 /** Takes the words wink added since its list had `from` entries out of its index (see IsolatedWink). */
-function forgetAdded(wink: IsolatedWink, from: number): void {
+function forgetAdded(wink: Pick<IsolatedWink, 'lexemes' | 'index'>, from: number): void {
   const { lexemes, index } = wink;
   for (let k = from; k < lexemes.length; k++) {
     const word = lexemes[k] as string;
@@ -191,7 +195,7 @@ interface WinkTokens {
   spaced: boolean[];
 }
 
-/** wink's tokens of `text` as read by a freshly loaded wink-nlp (see IsolatedWink). */
+/** wink's tokens of `text` as read by a freshly loaded wink-nlp (see IsolatedWink), through its public `readDoc`. */
 function readWink(text: string): WinkTokens {
   const wink = englishNlp();
   const { nlp } = wink;
@@ -206,6 +210,88 @@ function readWink(text: string): WinkTokens {
     normals: tokens.out(its.normal) as string[],
     spaced: spaces.map((s) => s !== ''),
   };
+  if (wink.lexemes.length > before) forgetAdded(wink, before);
+  return result;
+}
+
+/**
+ * The parts of wink-nlp 2.4.0 that `readDoc` runs to tokenize a text (src/wink-nlp.js, `load`
+ * and `readDoc`): its lexeme cache, its compiled token patterns, its tokenizer and a document
+ * record for the tokenizer to fill. Reading a piece through them skips what `readDoc` builds
+ * around the tokens (a document object of some fifty closures, sentence and entity records,
+ * one array per `out` call): about 15 µs per new piece down to a few. wink-nlp is pinned at
+ * 2.4.0 (package.json), and test/text/tokenize-memo.test.ts checks the tokens against
+ * `readDoc` (tokenizeEnglishWhole) on every test corpus, so a change inside wink-nlp fails tests.
+ */
+interface WinkCache {
+  value(index: number): string;
+  property(index: number, name: string): string;
+  normal(index: number): number;
+  nox(binary: number): number;
+}
+
+interface DirectWink extends Omit<IsolatedWink, 'nlp'> {
+  cache: WinkCache;
+  tokenize: (doc: unknown, text: string) => void;
+  /** The document record the tokenizer fills (`tokens`: 4 numbers per token, see its.js). */
+  record: { tokens: number[] };
+  /** wink's wrapper of `record` that the tokenizer adds tokens through. */
+  wrapped: unknown;
+}
+
+const requireWink = createRequire(import.meta.url);
+let direct: DirectWink | undefined;
+
+function loadDirectWink(): DirectWink {
+  const Cache = requireWink('wink-nlp/src/cache.js') as (core: CoreModel, featureFn: unknown) => WinkCache;
+  const compileTRex = requireWink('wink-nlp/src/compile-trex.js') as (trex: unknown) => unknown;
+  const tokenizer = requireWink('wink-nlp/src/tokenizer.js') as (trex: unknown, categories: unknown, preserve: unknown) => DirectWink['tokenize'];
+  const DocDataWrapper = requireWink('wink-nlp/src/dd-wrapper.js') as (record: object) => unknown;
+  const core = loadCoreModel();
+  const cache = Cache(core, (model as unknown as { featureFn: unknown }).featureFn);
+  const tokenize = tokenizer(compileTRex(core.trex), core.tcat.hash, core.preserve);
+  const record = Object.assign(Object.create(null) as object, {
+    cache,
+    tokens: [] as number[],
+    sentences: [],
+    markings: [],
+    nonBreakingSpaces: Object.create(null) as object,
+  });
+  const lexeme = core.features.lexeme;
+  return { cache, tokenize, record, wrapped: DocDataWrapper(record), index: lexeme.hash, lexemes: lexeme.list, intrinsic: lexeme.intrinsicSize };
+}
+
+function directWink(): DirectWink {
+  if (direct === undefined || direct.lexemes.length - direct.intrinsic > WINK_RENEW) direct = loadDirectWink();
+  return direct;
+}
+
+/** Bits of a token's second number (wink-nlp src/its.js): preceding spaces below, a contraction's normal above. */
+const SPACES_MASK = 0xffff;
+
+/**
+ * wink's tokens of one piece of text (no spaces, or one run of tabs and line breaks), as
+ * `readWink` gives them, read through wink's tokenizer directly (see WinkCache).
+ */
+function readPiece(text: string): WinkTokens {
+  const wink = directWink();
+  const { cache, record } = wink;
+  const before = wink.lexemes.length;
+  const raw = record.tokens;
+  raw.length = 0;
+  wink.tokenize(wink.wrapped, text);
+  const n = raw.length / 4;
+  const result: WinkTokens = { values: new Array<string>(n), types: new Array<string>(n), contraction: new Array<boolean>(n), normals: new Array<string>(n), spaced: new Array<boolean>(n) };
+  for (let k = 0; k < n; k++) {
+    const lexeme = raw[4 * k] as number;
+    const second = raw[4 * k + 1] as number;
+    const contraction = second > SPACES_MASK;
+    result.values[k] = cache.value(lexeme);
+    result.types[k] = cache.property(lexeme, 'tokenType');
+    result.contraction[k] = contraction;
+    result.normals[k] = contraction ? cache.value(cache.nox(second)) : cache.value(cache.normal(lexeme));
+    result.spaced[k] = (second & SPACES_MASK) > 0;
+  }
   if (wink.lexemes.length > before) forgetAdded(wink, before);
   return result;
 }
@@ -249,13 +335,20 @@ function appendTokens(out: Tokens, wink: WinkTokens, firstSpaced: boolean): void
 }
 
 /**
- * wink-nlp splits a text on runs of spaces (these characters) and on runs of tabs and line
- * breaks, then tokenizes each piece on its own: the output for a piece depends only on the
- * piece. Runs of spaces become the next token's preceding spaces; runs of tabs and line breaks
- * are tokens. (Same classes as wink-nlp's splitter; test/text/tokenize-memo.test.ts checks the
- * memoised path equals one wink pass over whole texts.)
+ * wink-nlp splits a text on runs of spaces and on runs of tabs and line breaks (its splitter
+ * `([ \u00a0\u2002-\u2005\u2009\u200a\u202f\u205f]+|[\n\r\t]+)`), then tokenizes each piece on
+ * its own: the output for a piece depends only on the piece. Runs of spaces become the next
+ * token's preceding spaces; runs of tabs and line breaks are tokens. These are the splitter's two
+ * classes (test/text/tokenize-memo.test.ts checks the memoised path equals one wink pass over
+ * whole texts, every space character included).
  */
-const SPLITTER = /([ \u00a0\u2002-\u2005\u2009\u200a\u202f\u205f]+|[\n\r\t]+)/;
+function isSpaceChar(c: number): boolean {
+  return c === 0x20 || (c >= 0xa0 && (c === 0xa0 || (c >= 0x2002 && c <= 0x2005) || c === 0x2009 || c === 0x200a || c === 0x202f || c === 0x205f));
+}
+
+function isBreakChar(c: number): boolean {
+  return c === 0x0a || c === 0x0d || c === 0x09;
+}
 
 /**
  * A memoised piece of text (between separators): our tokens of the piece when it starts a text
@@ -270,8 +363,6 @@ export interface Piece {
    * a first token such as `'em` then attaches to the token before and counts no word.
    */
   afterBreak?: Tokens;
-  /** Times met in the young map, to find the pieces worth keeping in the hot map. */
-  seen: number;
   annotationKey?: object;
   annotation?: unknown;
 }
@@ -280,11 +371,13 @@ export interface Piece {
  * Pieces memoised in two generations: new pieces go to `young`; when it is full it becomes
  * `old` (the previous `old` is dropped) and a piece found in `old` moves back to `young`. Pieces
  * in use stay, pieces not met for a generation go, and memory stays bounded (at most twice
- * MEMO_LIMIT pieces) without emptying the memo of common words all at once.
+ * MEMO_LIMIT pieces) without emptying the memo of common words all at once. The tables are
+ * looked up by a range of the text being tokenized (see PieceTable): a piece met before costs
+ * no substring.
  */
-let young = new Map<string, Piece>();
-let old = new Map<string, Piece>();
 const MEMO_LIMIT = 60_000;
+let young = new PieceTable<Piece>(MEMO_LIMIT);
+let old = new PieceTable<Piece>(MEMO_LIMIT);
 /** Token ids (see Tokens.ids), kept apart from the memo; emptied with it when full. */
 const ids = new Map<string, number>();
 const IDS_LIMIT = 200_000;
@@ -292,9 +385,8 @@ let generation = 0;
 
 /** Empties the memo of pieces and the table of token ids (the next generation of ids begins). */
 export function clearTokenMemo(): void {
-  hot = new Map();
-  young = new Map();
-  old = new Map();
+  young = new PieceTable(MEMO_LIMIT);
+  old = new PieceTable(MEMO_LIMIT);
   ids.clear();
   generation++;
 }
@@ -313,15 +405,6 @@ function idOf(norm: string): number {
   return id;
 }
 
-/**
- * The pieces met most often, in a map small enough to stay in the processor's cache (a look-up
- * in the large maps costs several cache misses): in running text a few thousand pieces make up
- * most tokens. A piece moves here when met HOT_AFTER times, while there is room.
- */
-let hot = new Map<string, Piece>();
-const HOT_LIMIT = 8192;
-const HOT_AFTER = 16;
-
 /** `out` with wink's tokens appended (see appendTokens) and ids for all of them. */
 function withIds(out: Tokens, wink: WinkTokens, firstSpaced: boolean): Tokens {
   appendTokens(out, wink, firstSpaced);
@@ -330,34 +413,45 @@ function withIds(out: Tokens, wink: WinkTokens, firstSpaced: boolean): Tokens {
   return out;
 }
 
-function winkPiece(piece: string): Piece {
-  let hit = hot.get(piece);
+/**
+ * Whether a piece whose first wink token is `first` can read differently right after a tab or
+ * line break than after spaces: only a first token that appendTokens would attach to the token
+ * before (an apostrophe piece or `n't`); emoji never join a break (see newPiece).
+ */
+function mayAttach(first: string | undefined): boolean {
+  if (first === undefined) return false;
+  const c = first.charCodeAt(0);
+  return c === 0x27 || c === 0x2019 || ((c === 0x6e || c === 0x4e) && first.length === 3 && /^n['’]t$/i.test(first));
+}
+
+/** A piece read by wink (see readPiece), with our tokens of it after spaces and, where they differ, after a break. */
+function newPiece(piece: string): Piece {
+  const wink = readPiece(piece);
+  const tokens = withIds({ norm: [], raw: [], kind: [], nWords: 0 }, wink, true);
+  const made: Piece = { text: piece, tokens };
+  if (!mayAttach(wink.values[0])) return made;
+  // After a break the token before is a tab or line break, a control character, and no
+  // character joins a control character into one grapheme (Unicode UAX #29, rules GB4 and
+  // GB5), so `\n` stands for every break here.
+  const afterBreak = withIds({ norm: ['\n'], raw: ['\n'], kind: [TokenKind.Other], nWords: 0 }, wink, false);
+  afterBreak.norm.shift();
+  afterBreak.raw.shift();
+  afterBreak.kind.shift();
+  (afterBreak.ids as number[]).shift();
+  if (afterBreak.nWords !== tokens.nWords || afterBreak.norm.some((n, k) => n !== tokens.norm[k])) made.afterBreak = afterBreak;
+  return made;
+}
+
+/** The memoised piece `text.slice(start, end)`, whose hashOfRange is `hash`. */
+function pieceAt(text: string, start: number, end: number, hash: number): Piece {
+  let hit = young.find(text, start, end, hash);
   if (hit !== undefined) return hit;
-  hit = young.get(piece);
-  if (hit !== undefined) {
-    if (++hit.seen >= HOT_AFTER && hot.size < HOT_LIMIT) hot.set(piece, hit);
-    return hit;
-  }
-  hit = old.get(piece);
-  if (hit === undefined) {
-    const wink = readWink(piece);
-    const tokens = withIds({ norm: [], raw: [], kind: [], nWords: 0 }, wink, true);
-    // After a break the token before is a tab or line break, a control character, and no
-    // character joins a control character into one grapheme (Unicode UAX #29, rules GB4 and
-    // GB5), so `\n` stands for every break here.
-    const afterBreak = withIds({ norm: ['\n'], raw: ['\n'], kind: [TokenKind.Other], nWords: 0 }, wink, false);
-    afterBreak.norm.shift();
-    afterBreak.raw.shift();
-    afterBreak.kind.shift();
-    (afterBreak.ids as number[]).shift();
-    hit = { text: piece, tokens, seen: 0 };
-    if (afterBreak.nWords !== tokens.nWords || afterBreak.norm.some((n, k) => n !== tokens.norm[k])) hit.afterBreak = afterBreak;
-  }
-  if (young.size >= MEMO_LIMIT) {
+  hit = old.find(text, start, end, hash) ?? newPiece(text.slice(start, end));
+  if (young.full()) {
     old = young;
-    young = new Map();
+    young = new PieceTable(MEMO_LIMIT);
   }
-  young.set(piece, hit);
+  young.add(hit.text, hash, hit);
   return hit;
 }
 
@@ -373,7 +467,7 @@ function winkPiece(piece: string): Piece {
  * - Words counted: word, number, ordinal, hashtag, mention, email, URL, time, date and currency
  *   tokens; punctuation, emoji, emoticons and symbols are not words.
  *
- * wink tokenizes each space-separated piece on its own, so pieces are memoised (see winkPiece),
+ * wink tokenizes each space-separated piece on its own, so pieces are memoised (see pieceAt),
  * and each piece is read as by a freshly loaded wink-nlp (see IsolatedWink): the tokens are those
  * of one wink pass over the whole text (`tokenizeEnglishWhole`) except where, in that pass, one
  * piece's new words would have changed how a later piece of the same text is split.
@@ -387,32 +481,68 @@ export function tokenizeEnglish(text: string): Tokens {
  * given), for scorers that annotate pieces. The pieces stay valid until the next call.
  */
 export function tokenizeEnglishPieces(text: string, pieces?: Piece[]): Tokens {
+  return tokenizeEnglishInto({ norm: [], raw: [], kind: [], nWords: 0, ids: [], generation }, text, pieces);
+}
+
+/** The Tokens that tokenizeEnglishShared fills, text after text. */
+const shared: Tokens = { norm: [], raw: [], kind: [], nWords: 0, ids: [], generation };
+
+/**
+ * tokenizeEnglishPieces into one Tokens object that every call refills: for a caller that is done
+ * with the tokens of a text before it tokenizes the next one (the scoring loop), it saves four
+ * arrays per text. The tokens are valid until the next call.
+ */
+export function tokenizeEnglishShared(text: string, pieces?: Piece[]): Tokens {
+  return tokenizeEnglishInto(shared, text, pieces);
+}
+
+/** Tokenizes `text` into `out`, overwriting what it held (see tokenizeEnglishPieces). */
+function tokenizeEnglishInto(out: Tokens, text: string, pieces: Piece[] | undefined): Tokens {
   if (ids.size >= IDS_LIMIT) clearTokenMemo();
-  const idList: number[] = [];
-  const out: Tokens = { norm: [], raw: [], kind: [], nWords: 0, ids: idList, generation };
+  const { norm, raw, kind } = out;
+  const idList = out.ids as number[];
+  out.generation = generation;
+  out.nWords = 0;
   if (pieces) pieces.length = 0;
-  const parts = text.split(SPLITTER);
+  const n = text.length;
+  let m = 0; // tokens written
   let spaced = false;
-  for (let p = 0; p < parts.length; p++) {
-    const part = parts[p] as string;
-    if (part === '') continue;
-    if (p % 2 === 1 && part.charCodeAt(0) !== 10 && part.charCodeAt(0) !== 13 && part.charCodeAt(0) !== 9) {
+  let k = 0;
+  while (k < n) {
+    let c = text.charCodeAt(k);
+    if (isSpaceChar(c)) {
       spaced = true; // a run of spaces: the next token follows spaces
+      k++;
       continue;
     }
-    const memoised = winkPiece(part);
+    // A piece runs to the next separator; a run of tabs and line breaks is a piece of its own.
+    const start = k;
+    const breaks = isBreakChar(c);
+    let hash = HASH_START;
+    do {
+      hash = hashStep(hash, c);
+      if (++k === n) break;
+      c = text.charCodeAt(k);
+    } while (breaks ? isBreakChar(c) : !isSpaceChar(c) && !isBreakChar(c));
+    const memoised = pieceAt(text, start, k, hash);
     pieces?.push(memoised);
     // Right after a tab or line break the first token may attach to it (see Piece.afterBreak).
-    const t = !spaced && out.raw.length > 0 && memoised.afterBreak ? memoised.afterBreak : memoised.tokens;
+    const t = !spaced && m > 0 && memoised.afterBreak ? memoised.afterBreak : memoised.tokens;
     const tIds = t.ids as number[];
-    for (let k = 0; k < t.raw.length; k++) {
-      out.norm.push(t.norm[k] as string);
-      out.raw.push(t.raw[k] as string);
-      out.kind.push(t.kind[k] as TokenKind);
-      idList.push(tIds[k] as number);
+    for (let j = 0; j < t.raw.length; j++, m++) {
+      norm[m] = t.norm[j] as string;
+      raw[m] = t.raw[j] as string;
+      kind[m] = t.kind[j] as TokenKind;
+      idList[m] = tIds[j] as number;
     }
     out.nWords += t.nWords;
     spaced = false;
+  }
+  if (norm.length !== m) {
+    norm.length = m;
+    raw.length = m;
+    kind.length = m;
+    idList.length = m;
   }
   return out;
 }
