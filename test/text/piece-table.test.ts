@@ -1,0 +1,53 @@
+import { describe, expect, it } from 'vitest';
+import { HASH_START, hashOfRange, hashStep, PieceTable } from '../../src/text/piece-table.js';
+
+describe('hashOfRange', () => {
+  it('is 32-bit FNV-1a (reference: FNV test vectors of draft-eastlake-fnv, IETF; values recalled from memory and recomputed with a separate Python loop)', () => {
+    // FNV-1a 32: "" → 0x811c9dc5, "a" → 0xe40c292c, "foobar" → 0xbf9cf968 (ASCII: one code unit per byte).
+    expect(hashOfRange('') >>> 0).toBe(0x811c9dc5);
+    expect(hashOfRange('a') >>> 0).toBe(0xe40c292c);
+    expect(hashOfRange('foobar') >>> 0).toBe(0xbf9cf968);
+  });
+
+  it('hashes a range of a longer text as the text of that range alone', () => {
+    const text = 'say foobar twice: foobar';
+    expect(hashOfRange(text, 4, 10)).toBe(hashOfRange('foobar'));
+    expect(hashOfRange(text, 18)).toBe(hashOfRange('foobar'));
+    let h = HASH_START;
+    for (const c of 'foo') h = hashStep(h, c.charCodeAt(0));
+    expect(h).toBe(hashOfRange('foobar', 0, 3));
+  });
+});
+
+describe('PieceTable', () => {
+  it('finds a key by a range of another text, and nothing for a range that differs', () => {
+    const table = new PieceTable<number>(8);
+    table.add('calm', hashOfRange('calm'), 1);
+    table.add('calmer', hashOfRange('calmer'), 2);
+    const text = 'calmer, calm, clam';
+    expect(table.find(text, 0, 6, hashOfRange(text, 0, 6))).toBe(2);
+    expect(table.find(text, 8, 12, hashOfRange(text, 8, 12))).toBe(1);
+    expect(table.find(text, 0, 4, hashOfRange(text, 0, 4))).toBe(1);
+    expect(table.find(text, 14, 18, hashOfRange(text, 14, 18))).toBeUndefined();
+    expect(table.find(text, 0, 5, hashOfRange(text, 0, 5))).toBeUndefined();
+  });
+
+  it('keeps keys apart when their hashes collide (all hashes forced equal)', () => {
+    const table = new PieceTable<string>(100);
+    const words = Array.from({ length: 100 }, (_, k) => `w${k}`);
+    for (const w of words) table.add(w, 7, w.toUpperCase());
+    for (const w of words) expect(table.find(`..${w}..`, 2, 2 + w.length, 7)).toBe(w.toUpperCase());
+    expect(table.find('w100', 0, 4, 7)).toBeUndefined();
+    expect(table.size).toBe(100);
+  });
+
+  it('holds at most `limit` entries and says so before refusing one', () => {
+    const table = new PieceTable<number>(3);
+    for (const [k, w] of ['a', 'b', 'c'].entries()) {
+      expect(table.full()).toBe(false);
+      table.add(w, hashOfRange(w), k);
+    }
+    expect(table.full()).toBe(true);
+    expect(() => table.add('d', hashOfRange('d'), 3)).toThrow(/check full\(\) before add\(\)/);
+  });
+});
