@@ -1,7 +1,11 @@
 import { createRequire } from 'node:module';
-import winkNLP from 'wink-nlp';
-import model from 'wink-eng-lite-web-model';
+import type winkNLP from 'wink-nlp';
+import type model from 'wink-eng-lite-web-model';
 import { HASH_START, hashStep, PieceTable } from './piece-table.js';
+import { loadCoreModel } from './wink-model.js';
+import { readPiece, type WinkTokens } from './wink-pieces.js';
+
+export { loadCoreModel } from './wink-model.js';
 
 /** Token kinds. Words are what `nWords` counts; punctuation stops negation windows. */
 export const TokenKind = { Word: 0, Punct: 1, Emoji: 2, Emoticon: 3, Number: 4, Other: 5 } as const;
@@ -36,10 +40,12 @@ type WinkModel = typeof model;
  * `don’twell . ..` and every later one `don’twell ...`; `'em` is split as `' em` until some
  * text has made `'em` a token. Tokens would then depend on the texts read before (their order,
  * and how they were shared between worker threads). So every piece of text is tokenized as by a
- * freshly loaded wink-nlp: the words wink adds to its lexeme table while tokenizing a piece are
- * taken out of the table's index again right after (they stay in its list, whose positions wink
- * relies on). The list still grows with each new word; the instance is replaced when it holds
- * WINK_RENEW words beyond the model's own.
+ * freshly loaded wink-nlp: scoring reads pieces through wink's tokenizer with new words kept
+ * apart from its lexeme table (see readPiece), and the whole-text reference here, through
+ * wink's public `readDoc`, takes the words wink added out of the table's index again right after
+ * (they stay in its list, whose positions wink relies on; the instance is replaced when the list
+ * holds WINK_RENEW words beyond the model's own). Only the reference loads wink-nlp's full
+ * pipeline and the model package (sentence, part-of-speech and entity models).
  */
 interface IsolatedWink {
   nlp: Nlp;
@@ -54,71 +60,11 @@ interface IsolatedWink {
 const WINK_RENEW = 100_000;
 let english: IsolatedWink | undefined;
 
-/** The parts of wink's core model read here (see loadCoreModel). */
-interface CoreModel {
-  lexicon: Uint32Array | string;
-  xpansions: Uint32Array | string;
-  packing: { layout: Record<string, number[]>; efList: string[] };
-  features: Record<string, { list: unknown[]; hash: Record<string, number>; intrinsicSize: number; index: number; maxIndex: number }> & {
-    lexeme: { list: unknown[]; hash: Record<string, number>; intrinsicSize: number; index: number };
-    posClusters: { list: unknown[] };
-  };
-  pos: { hash: Record<string, number> };
-  trex: unknown;
-  tcat: { hash: Record<string, number> };
-  preserve: unknown;
-}
-
-const requireModelFile = createRequire(import.meta.url);
-
-/** A fresh ArrayBuffer holding the bytes of base64 `data`. */
-function bytesOfBase64(data: string): ArrayBuffer {
-  const bytes = Buffer.from(data, 'base64');
-  return bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer;
-}
-
-/**
- * wink-eng-lite-web-model's core model, prepared as the package's own `core()` prepares it
- * (dist/read-core-model.js and dist/load-core-model.js of version 1.8.1), with two cheaper
- * steps: a structured clone instead of a JSON round trip, and Node's base64 decoder instead of
- * a character loop. About 0.13 s less per start of the tool and of each scoring worker.
- * test/text/tokenize-memo.test.ts checks the tokens equal those of the package's own loader.
- */
-export function loadCoreModel(): CoreModel {
-  const original = requireModelFile('wink-eng-lite-web-model/dist/languages/cur/models/eng-core-web-model.json') as CoreModel;
-  const core = structuredClone(original);
-  const { packing, features, pos } = core;
-  core.lexicon = new Uint32Array(bytesOfBase64(core.lexicon as string));
-  core.xpansions = new Uint32Array(bytesOfBase64(core.xpansions as string));
-  for (const f in packing.layout) {
-    if (packing.layout[f]![3] !== 0) continue;
-    const feature = features[f]!;
-    const hash: Record<string, number> = Object.create(null);
-    for (let k = 0; k < feature.list.length; k++) hash[feature.list[k] as string] = k;
-    feature.hash = hash;
-  }
-  const lexemeHash: Record<string, number> = Object.create(null);
-  for (let k = 0; k < features.lexeme.list.length; k++) lexemeHash[features.lexeme.list[k] as string] = k;
-  features.lexeme.hash = lexemeHash;
-  const clusters = features.posClusters.list;
-  for (let k = 0; k < clusters.length; k++) clusters[k] = new Set((clusters[k] as string).split('_').map((e) => pos.hash[e] || 0));
-  packing.efList = [];
-  for (const f in packing.layout) {
-    const layout = packing.layout[f]!;
-    if (layout[3] === 0) {
-      const feature = features[f]!;
-      feature.intrinsicSize = feature.list.length;
-      feature.index = feature.list.length;
-      feature.maxIndex = layout[1]! >>> layout[2]!;
-    }
-    if (layout[4] === 1) packing.efList.push(f);
-  }
-  features.lexeme.intrinsicSize = features.lexeme.list.length;
-  features.lexeme.index = features.lexeme.list.length;
-  return core;
-}
+const requireLazily = createRequire(import.meta.url);
 
 function loadIsolatedWink(): IsolatedWink {
+  const winkNLPLoader = requireLazily('wink-nlp') as typeof winkNLP;
+  const model = requireLazily('wink-eng-lite-web-model') as WinkModel;
   const state: Partial<IsolatedWink> = {};
   const wrapped: WinkModel = {
     ...model,
@@ -131,7 +77,7 @@ function loadIsolatedWink(): IsolatedWink {
       return core;
     },
   } as WinkModel;
-  state.nlp = winkNLP(wrapped, []);
+  state.nlp = winkNLPLoader(wrapped, []);
   return state as IsolatedWink;
 }
 
@@ -142,7 +88,7 @@ function englishNlp(): IsolatedWink {
 }
 
 /** Takes the words wink added since its list had `from` entries out of its index (see IsolatedWink). */
-function forgetAdded(wink: Pick<IsolatedWink, 'lexemes' | 'index'>, from: number): void {
+function forgetAdded(wink: IsolatedWink, from: number): void {
   const { lexemes, index } = wink;
   for (let k = from; k < lexemes.length; k++) {
     const word = lexemes[k] as string;
@@ -185,16 +131,6 @@ function kindOf(type: string): TokenKind {
   }
 }
 
-/** wink-nlp's output for one text: token values, types, contraction flags and normals, and whether each token follows spaces. */
-interface WinkTokens {
-  values: string[];
-  types: string[];
-  contraction: boolean[];
-  /** Normal forms (used for contraction pieces). */
-  normals: string[];
-  spaced: boolean[];
-}
-
 /** wink's tokens of `text` as read by a freshly loaded wink-nlp (see IsolatedWink), through its public `readDoc`. */
 function readWink(text: string): WinkTokens {
   const wink = englishNlp();
@@ -210,88 +146,6 @@ function readWink(text: string): WinkTokens {
     normals: tokens.out(its.normal) as string[],
     spaced: spaces.map((s) => s !== ''),
   };
-  if (wink.lexemes.length > before) forgetAdded(wink, before);
-  return result;
-}
-
-/**
- * The parts of wink-nlp 2.4.0 that `readDoc` runs to tokenize a text (src/wink-nlp.js, `load`
- * and `readDoc`): its lexeme cache, its compiled token patterns, its tokenizer and a document
- * record for the tokenizer to fill. Reading a piece through them skips what `readDoc` builds
- * around the tokens (a document object of some fifty closures, sentence and entity records,
- * one array per `out` call): about 15 µs per new piece down to a few. wink-nlp is pinned at
- * 2.4.0 (package.json), and test/text/tokenize-memo.test.ts checks the tokens against
- * `readDoc` (tokenizeEnglishWhole) on every test corpus, so a change inside wink-nlp fails tests.
- */
-interface WinkCache {
-  value(index: number): string;
-  property(index: number, name: string): string;
-  normal(index: number): number;
-  nox(binary: number): number;
-}
-
-interface DirectWink extends Omit<IsolatedWink, 'nlp'> {
-  cache: WinkCache;
-  tokenize: (doc: unknown, text: string) => void;
-  /** The document record the tokenizer fills (`tokens`: 4 numbers per token, see its.js). */
-  record: { tokens: number[] };
-  /** wink's wrapper of `record` that the tokenizer adds tokens through. */
-  wrapped: unknown;
-}
-
-const requireWink = createRequire(import.meta.url);
-let direct: DirectWink | undefined;
-
-function loadDirectWink(): DirectWink {
-  const Cache = requireWink('wink-nlp/src/cache.js') as (core: CoreModel, featureFn: unknown) => WinkCache;
-  const compileTRex = requireWink('wink-nlp/src/compile-trex.js') as (trex: unknown) => unknown;
-  const tokenizer = requireWink('wink-nlp/src/tokenizer.js') as (trex: unknown, categories: unknown, preserve: unknown) => DirectWink['tokenize'];
-  const DocDataWrapper = requireWink('wink-nlp/src/dd-wrapper.js') as (record: object) => unknown;
-  const core = loadCoreModel();
-  const cache = Cache(core, (model as unknown as { featureFn: unknown }).featureFn);
-  const tokenize = tokenizer(compileTRex(core.trex), core.tcat.hash, core.preserve);
-  const record = Object.assign(Object.create(null) as object, {
-    cache,
-    tokens: [] as number[],
-    sentences: [],
-    markings: [],
-    nonBreakingSpaces: Object.create(null) as object,
-  });
-  const lexeme = core.features.lexeme;
-  return { cache, tokenize, record, wrapped: DocDataWrapper(record), index: lexeme.hash, lexemes: lexeme.list, intrinsic: lexeme.intrinsicSize };
-}
-
-function directWink(): DirectWink {
-  if (direct === undefined || direct.lexemes.length - direct.intrinsic > WINK_RENEW) direct = loadDirectWink();
-  return direct;
-}
-
-/** Bits of a token's second number (wink-nlp src/its.js): preceding spaces below, a contraction's normal above. */
-const SPACES_MASK = 0xffff;
-
-/**
- * wink's tokens of one piece of text (no spaces, or one run of tabs and line breaks), as
- * `readWink` gives them, read through wink's tokenizer directly (see WinkCache).
- */
-function readPiece(text: string): WinkTokens {
-  const wink = directWink();
-  const { cache, record } = wink;
-  const before = wink.lexemes.length;
-  const raw = record.tokens;
-  raw.length = 0;
-  wink.tokenize(wink.wrapped, text);
-  const n = raw.length / 4;
-  const result: WinkTokens = { values: new Array<string>(n), types: new Array<string>(n), contraction: new Array<boolean>(n), normals: new Array<string>(n), spaced: new Array<boolean>(n) };
-  for (let k = 0; k < n; k++) {
-    const lexeme = raw[4 * k] as number;
-    const second = raw[4 * k + 1] as number;
-    const contraction = second > SPACES_MASK;
-    result.values[k] = cache.value(lexeme);
-    result.types[k] = cache.property(lexeme, 'tokenType');
-    result.contraction[k] = contraction;
-    result.normals[k] = contraction ? cache.value(cache.nox(second)) : cache.value(cache.normal(lexeme));
-    result.spaced[k] = (second & SPACES_MASK) > 0;
-  }
   if (wink.lexemes.length > before) forgetAdded(wink, before);
   return result;
 }
