@@ -123,11 +123,23 @@ function wildcardHit(token: string, lexicon: CompiledLexicon): Hit | null {
  * (−w on a symmetric scale) for `rating` and `sum` categories and drops the hit from `count`
  * categories (a negated "worried" is not an occurrence of worry); `drop` removes the hit;
  * `ignore` scores it as written. Negated hits are counted either way.
+ *
+ * `into`, when given, is overwritten and returned instead of a new result (the scoring loop
+ * reuses one per lexicon rather than allocating two typed arrays per entry).
  */
-export function matchLexicon(tokens: Tokens, lexicon: CompiledLexicon, onHit?: HitListener): LexiconMatch {
+export function matchLexicon(tokens: Tokens, lexicon: CompiledLexicon, onHit?: HitListener, into?: LexiconMatch): LexiconMatch {
   const nc = lexicon.categories.length;
-  const sums = new Float64Array(nc);
-  const counts = new Int32Array(nc);
+  let sums: Float64Array;
+  let counts: Int32Array;
+  if (into !== undefined && into.sums.length === nc) {
+    sums = into.sums;
+    counts = into.counts;
+    sums.fill(0);
+    counts.fill(0);
+  } else {
+    sums = new Float64Array(nc);
+    counts = new Int32Array(nc);
+  }
   let negated = 0;
   const n = tokens.norm.length;
   const hasNegation = lexicon.negation !== 'ignore' || lexicon.window > 0;
@@ -157,5 +169,9 @@ export function matchLexicon(tokens: Tokens, lexicon: CompiledLexicon, onHit?: H
     }
     i += length;
   }
-  return { sums, counts, negated };
+  if (into === undefined) return { sums, counts, negated };
+  into.sums = sums;
+  into.counts = counts;
+  into.negated = negated;
+  return into;
 }

@@ -1,6 +1,6 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { tokenize, tokenizeEnglishShared, type Piece, type Tokens } from '../text/tokenize.js';
-import { matchLexicon } from './match-lexicon.js';
+import { matchLexicon, type LexiconMatch } from './match-lexicon.js';
 import { scoreColumns, VADER_COLUMNS } from './score-columns.js';
 import { scoreVader, scoreVaderPieces, type VaderScores } from './vader.js';
 
@@ -67,7 +67,7 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       continue;
     }
     const tokens = tokensFor(lex.language);
-    const m = matchLexicon(tokens, lex);
+    const m = matchLexicon(tokens, lex, undefined, scratchFor(lex));
     out.negated[i * lexicons.length + l] = m.negated;
     for (let k = 0; k < lex.categories.length; k++, c++) {
       const aggregation = (lex.categories[k] as { aggregation: string }).aggregation;
@@ -82,6 +82,19 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
   if (part === 'vader') return;
   const counted = english ?? (byLanguage ? (byLanguage.values().next().value as Tokens) : englishTokens());
   out.words[i] = counted.nWords;
+}
+
+/** Per lexicon, the match result scoreTextInto reuses from text to text (its values are copied out at once). */
+const scratchMatches = new WeakMap<CompiledLexicon, LexiconMatch>();
+
+function scratchFor(lexicon: CompiledLexicon): LexiconMatch {
+  let m = scratchMatches.get(lexicon);
+  if (m === undefined) {
+    const n = lexicon.categories.length;
+    m = { sums: new Float64Array(n), counts: new Int32Array(n), negated: 0 };
+    scratchMatches.set(lexicon, m);
+  }
+  return m;
 }
 
 /** The memoised pieces of the text being scored (scoring is synchronous). */

@@ -1,7 +1,7 @@
 import { VADER_STRIPPABLE_PUNCTUATION } from './vader-constants.js';
 
 /** Whitespace as matched by a JavaScript `\s` (the reference splits text on it). */
-function isSpace(c: number): boolean {
+export function isSpace(c: number): boolean {
   if (c <= 0x20) return c === 0x20 || (c >= 0x09 && c <= 0x0d);
   if (c < 0xa0) return false;
   return (
@@ -22,7 +22,7 @@ function isPunctuation(c: number): boolean {
  * is at least 2 characters with no punctuation inside ("funny." → "funny",
  * "(funny)" and "don't," stay as they are, emoticons such as ":)" stay whole).
  */
-function stripToken(token: string): string {
+export function stripToken(token: string): string {
   const n = token.length;
   let lead = 0;
   while (lead < n && isPunctuation(token.charCodeAt(lead))) lead++;

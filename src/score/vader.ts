@@ -17,7 +17,8 @@ import {
   VADER_QUESTION_BOOST_MAX,
 } from './vader-constants.js';
 import type { Piece } from '../text/tokenize.js';
-import { vaderTokens } from './vader-tokens.js';
+import { HASH_START, hashStep, PieceTable } from '../text/piece-table.js';
+import { isSpace, stripToken, vaderTokens } from './vader-tokens.js';
 
 /** A VADER lexicon: lower-case token → mean valence (−4 … +4). */
 export type VaderLexicon = ReadonlyMap<string, number>;
@@ -214,11 +215,41 @@ function idiomValence(valence: number, raw: readonly string[], i: number, n: num
  *   (the reference's result), which callers should treat as "no score"
  */
 export function scoreVader(text: string, lexicon: VaderLexicon): VaderScores {
-  const words = wordsOf(lexicon);
+  let cache = tokenCaches.get(lexicon);
+  if (cache === undefined) {
+    cache = { table: new PieceTable(WORD_CACHE_LIMIT) };
+    tokenCaches.set(lexicon, cache);
+  }
   scratch.n = 0;
-  for (const w of vaderTokens(text)) pushWord(cachedWord(w, lexicon, words));
+  // vaderTokens, with each whitespace-separated token looked up by its range of the text: a
+  // token met before costs no substring.
+  const n = text.length;
+  let start = 0;
+  let hash = HASH_START;
+  for (let k = 0; k <= n; k++) {
+    const c = k === n ? 0x20 : text.charCodeAt(k);
+    if (!isSpace(c)) {
+      hash = hashStep(hash, c);
+      continue;
+    }
+    if (k - start > 1) {
+      let word = cache.table.find(text, start, k, hash);
+      if (word === undefined) {
+        const token = text.slice(start, k);
+        word = vaderWord(stripToken(token), lexicon);
+        if (cache.table.full()) cache.table = new PieceTable(WORD_CACHE_LIMIT);
+        cache.table.add(token, hash, word);
+      }
+      pushWord(word);
+    }
+    start = k + 1;
+    hash = HASH_START;
+  }
   return scoreScratch(text);
 }
+
+/** Per lexicon, the VaderWord of each whitespace-separated token met by scoreVader, by the token as written (bounded: emptied when full). */
+const tokenCaches = new WeakMap<VaderLexicon, { table: PieceTable<VaderWord> }>();
 
 /**
  * scoreVader for a text given as its memoised pieces (see tokenizeEnglishPieces): VADER splits
