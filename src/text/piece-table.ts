@@ -3,41 +3,43 @@
  * hash, so a text can be looked up piece by piece without cutting a substring for each piece
  * (most look-ups find the piece, and then no string is made at all). Open addressing with
  * linear probing over a power-of-two slot array kept at most half full; `limit` entries at most
- * (the caller decides what to do when `full()`).
+ * (the caller decides what to do when `full()`). Laid out for few cache misses per look-up: a
+ * slot holds the key's hash beside the entry's position, and an entry's key and value sit side
+ * by side.
  */
 export class PieceTable<T> {
-  /** Entry index + 1 per slot (0: empty). */
+  /** Per slot: the key's hash, then entry index + 1 (0: empty). */
   private readonly slots: Int32Array;
   private readonly mask: number;
-  private readonly hashes: Int32Array;
-  private readonly keys: string[] = [];
-  private readonly values: T[] = [];
+  /** Per entry: its key, then its value. */
+  private readonly entries: Array<string | T> = [];
+  private count = 0;
 
   constructor(readonly limit: number) {
     let size = 16;
     while (size < 2 * limit) size *= 2;
-    this.slots = new Int32Array(size);
+    this.slots = new Int32Array(2 * size);
     this.mask = size - 1;
-    this.hashes = new Int32Array(limit);
   }
 
   get size(): number {
-    return this.keys.length;
+    return this.count;
   }
 
   full(): boolean {
-    return this.keys.length >= this.limit;
+    return this.count >= this.limit;
   }
 
   /** The value stored for `text.slice(start, end)` (whose hashOfRange is `hash`), or undefined. */
   find(text: string, start: number, end: number, hash: number): T | undefined {
-    const { slots, mask, hashes, keys } = this;
+    const { slots, mask, entries } = this;
     const length = end - start;
     for (let slot = hash & mask; ; slot = (slot + 1) & mask) {
-      const entry = slots[slot] as number;
+      const entry = slots[2 * slot + 1] as number;
       if (entry === 0) return undefined;
-      const key = keys[entry - 1] as string;
-      if (hashes[entry - 1] === hash && key.length === length && sameText(key, text, start)) return this.values[entry - 1];
+      if (slots[2 * slot] !== hash) continue;
+      const key = entries[2 * entry - 2] as string;
+      if (key.length === length && sameText(key, text, start)) return entries[2 * entry - 1] as T;
     }
   }
 
@@ -46,11 +48,11 @@ export class PieceTable<T> {
     if (this.full()) throw new Error(`PieceTable: more than ${this.limit} entries; check full() before add()`);
     const { slots, mask } = this;
     let slot = hash & mask;
-    while (slots[slot] !== 0) slot = (slot + 1) & mask;
-    this.keys.push(key);
-    this.values.push(value);
-    this.hashes[this.keys.length - 1] = hash;
-    slots[slot] = this.keys.length;
+    while (slots[2 * slot + 1] !== 0) slot = (slot + 1) & mask;
+    this.entries.push(key, value);
+    this.count++;
+    slots[2 * slot] = hash;
+    slots[2 * slot + 1] = this.count;
   }
 }
 

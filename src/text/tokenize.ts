@@ -205,20 +205,51 @@ function isBreakChar(c: number): boolean {
 }
 
 /**
- * A memoised piece of text (between separators): our tokens of the piece when it starts a text
- * or follows spaces, and one annotation slot for a scorer (for example VADER's reading of the
- * piece, keyed by its lexicon).
+ * Our tokens of a piece in one reading, laid out for the loop that copies them into a text's
+ * tokens: a piece of one token (most pieces) holds it in its own fields, so copying it reads one
+ * object; longer pieces hold arrays.
  */
-export interface Piece {
+export interface PieceReading {
+  count: number;
+  nWords: number;
+  /** The token when count is 1 (else unused). */
+  norm: string;
+  raw: string;
+  kind: TokenKind;
+  id: number;
+  /** All tokens when count is not 1 (else undefined). */
+  all: Required<Pick<Tokens, 'norm' | 'raw' | 'kind' | 'ids'>> | undefined;
+}
+
+/**
+ * A memoised piece of text (between separators): our tokens of the piece when it starts a text
+ * or follows spaces (its PieceReading fields), and one annotation slot for a scorer (for example
+ * VADER's reading of the piece, keyed by its lexicon).
+ */
+export interface Piece extends PieceReading {
   text: string;
-  tokens: Tokens;
   /**
-   * Our tokens of the piece right after a tab or line break, when they differ from `tokens`:
-   * a first token such as `'em` then attaches to the token before and counts no word.
+   * Our tokens of the piece right after a tab or line break, when they differ: a first token such
+   * as `'em` then attaches to the token before and counts no word.
    */
-  afterBreak?: Tokens;
-  annotationKey?: object;
-  annotation?: unknown;
+  afterBreak: PieceReading | undefined;
+  annotationKey: object | undefined;
+  annotation: unknown;
+}
+
+/** The PieceReading fields of `tokens` (whose arrays it may keep). */
+function readingOf(tokens: Tokens): PieceReading {
+  const ids = tokens.ids as number[];
+  const one = tokens.norm.length === 1;
+  return {
+    count: tokens.norm.length,
+    nWords: tokens.nWords,
+    norm: one ? (tokens.norm[0] as string) : '',
+    raw: one ? (tokens.raw[0] as string) : '',
+    kind: one ? (tokens.kind[0] as TokenKind) : TokenKind.Other,
+    id: one ? (ids[0] as number) : -1,
+    all: one ? undefined : { norm: tokens.norm, raw: tokens.raw, kind: tokens.kind, ids },
+  };
 }
 
 /**
@@ -282,7 +313,7 @@ function mayAttach(first: string | undefined): boolean {
 function newPiece(piece: string): Piece {
   const wink = readPiece(piece);
   const tokens = withIds({ norm: [], raw: [], kind: [], nWords: 0 }, wink, true);
-  const made: Piece = { text: piece, tokens };
+  const made: Piece = { text: piece, ...readingOf(tokens), afterBreak: undefined, annotationKey: undefined, annotation: undefined };
   if (!mayAttach(wink.values[0])) return made;
   // After a break the token before is a tab or line break, a control character, and no
   // character joins a control character into one grapheme (Unicode UAX #29, rules GB4 and
@@ -292,7 +323,7 @@ function newPiece(piece: string): Piece {
   afterBreak.raw.shift();
   afterBreak.kind.shift();
   (afterBreak.ids as number[]).shift();
-  if (afterBreak.nWords !== tokens.nWords || afterBreak.norm.some((n, k) => n !== tokens.norm[k])) made.afterBreak = afterBreak;
+  if (afterBreak.nWords !== tokens.nWords || afterBreak.norm.some((n, k) => n !== tokens.norm[k])) made.afterBreak = readingOf(afterBreak);
   return made;
 }
 
@@ -381,13 +412,21 @@ function tokenizeEnglishInto(out: Tokens, text: string, pieces: Piece[] | undefi
     const memoised = pieceAt(text, start, k, hash);
     pieces?.push(memoised);
     // Right after a tab or line break the first token may attach to it (see Piece.afterBreak).
-    const t = !spaced && m > 0 && memoised.afterBreak ? memoised.afterBreak : memoised.tokens;
-    const tIds = t.ids as number[];
-    for (let j = 0; j < t.raw.length; j++, m++) {
-      norm[m] = t.norm[j] as string;
-      raw[m] = t.raw[j] as string;
-      kind[m] = t.kind[j] as TokenKind;
-      idList[m] = tIds[j] as number;
+    const t: PieceReading = !spaced && m > 0 && memoised.afterBreak !== undefined ? memoised.afterBreak : memoised;
+    const all = t.all;
+    if (all === undefined) {
+      norm[m] = t.norm;
+      raw[m] = t.raw;
+      kind[m] = t.kind;
+      idList[m] = t.id;
+      m++;
+    } else {
+      for (let j = 0; j < t.count; j++, m++) {
+        norm[m] = all.norm[j] as string;
+        raw[m] = all.raw[j] as string;
+        kind[m] = all.kind[j] as TokenKind;
+        idList[m] = all.ids[j] as number;
+      }
     }
     out.nWords += t.nWords;
     spaced = false;
