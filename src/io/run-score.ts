@@ -72,6 +72,13 @@ export interface RunScoreResult {
 /** Entries per scoring batch. */
 const BATCH_SIZE = 256;
 
+/**
+ * Batches in flight per worker. Enough for this thread to go on reading (and scoring VADER) for
+ * the half second a worker takes to start, instead of waiting for it; ~8,000 entries per worker,
+ * so memory stays bounded.
+ */
+const INFLIGHT_PER_WORKER = 128;
+
 /** Batches waiting per worker from which this thread takes over the VADER lexicons of a batch. */
 const VADER_HERE_AFTER = 2;
 
@@ -124,7 +131,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     // (a few batches in flight per worker, so memory stays bounded), else in this thread.
     const inflight: Array<{ entries: RawEntry[]; scores: Promise<BatchScores> }> = [];
     let batch: RawEntry[] = [];
-    const maxInflight = pool ? 4 * pool.size + 4 : 0;
+    const maxInflight = pool ? INFLIGHT_PER_WORKER * pool.size + 4 : 0;
     const submit = (): void => {
       if (batch.length === 0) return;
       const entries = batch;

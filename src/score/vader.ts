@@ -17,7 +17,7 @@ import {
   VADER_QUESTION_BOOST_MAX,
 } from './vader-constants.js';
 import type { Piece } from '../text/tokenize.js';
-import { HASH_START, hashStep, PieceTable } from '../text/piece-table.js';
+import { GenerationalTable, HASH_START, hashStep } from '../text/piece-table.js';
 import { isSpace, stripToken, vaderTokens } from './vader-tokens.js';
 
 /** A VADER lexicon: lower-case token → mean valence (−4 … +4). */
@@ -217,9 +217,10 @@ function idiomValence(valence: number, raw: readonly string[], i: number, n: num
 export function scoreVader(text: string, lexicon: VaderLexicon): VaderScores {
   let cache = tokenCaches.get(lexicon);
   if (cache === undefined) {
-    cache = { table: new PieceTable(WORD_CACHE_LIMIT) };
+    cache = { table: new GenerationalTable(TOKEN_CACHE_LIMIT), read: (token) => vaderWord(stripToken(token), lexicon) };
     tokenCaches.set(lexicon, cache);
   }
+  const { table, read } = cache;
   scratch.n = 0;
   // vaderTokens, with each whitespace-separated token looked up by its range of the text: a
   // token met before costs no substring.
@@ -232,24 +233,16 @@ export function scoreVader(text: string, lexicon: VaderLexicon): VaderScores {
       hash = hashStep(hash, c);
       continue;
     }
-    if (k - start > 1) {
-      let word = cache.table.find(text, start, k, hash);
-      if (word === undefined) {
-        const token = text.slice(start, k);
-        word = vaderWord(stripToken(token), lexicon);
-        if (cache.table.full()) cache.table = new PieceTable(WORD_CACHE_LIMIT);
-        cache.table.add(token, hash, word);
-      }
-      pushWord(word);
-    }
+    if (k - start > 1) pushWord(table.get(text, start, k, hash, read));
     start = k + 1;
     hash = HASH_START;
   }
   return scoreScratch(text);
 }
 
-/** Per lexicon, the VaderWord of each whitespace-separated token met by scoreVader, by the token as written (bounded: emptied when full). */
-const tokenCaches = new WeakMap<VaderLexicon, { table: PieceTable<VaderWord> }>();
+/** Per lexicon, the VaderWord of each whitespace-separated token met by scoreVader, by the token as written (bounded: see GenerationalTable). */
+const tokenCaches = new WeakMap<VaderLexicon, { table: GenerationalTable<VaderWord>; read: (token: string) => VaderWord }>();
+const TOKEN_CACHE_LIMIT = 60_000;
 
 /**
  * scoreVader for a text given as its memoised pieces (see tokenizeEnglishPieces): VADER splits

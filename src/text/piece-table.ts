@@ -14,6 +14,8 @@ export class PieceTable<T> {
   /** Per entry: its key, then its value. */
   private readonly entries: Array<string | T> = [];
   private count = 0;
+  /** The key of the entry the last successful find() returned. */
+  foundKey = '';
 
   constructor(readonly limit: number) {
     let size = 16;
@@ -39,7 +41,10 @@ export class PieceTable<T> {
       if (entry === 0) return undefined;
       if (slots[2 * slot] !== hash) continue;
       const key = entries[2 * entry - 2] as string;
-      if (key.length === length && sameText(key, text, start)) return entries[2 * entry - 1] as T;
+      if (key.length === length && sameText(key, text, start)) {
+        this.foundKey = key;
+        return entries[2 * entry - 1] as T;
+      }
     }
   }
 
@@ -53,6 +58,42 @@ export class PieceTable<T> {
     this.count++;
     slots[2 * slot] = hash;
     slots[2 * slot + 1] = this.count;
+  }
+}
+
+/**
+ * Two PieceTables as generations, for a bounded memo: new entries go to `young`; when it is full
+ * it becomes `old` (the previous `old` is dropped) and an entry found in `old` moves back to
+ * `young`. Entries in use stay, entries not met for a generation go, and memory stays bounded (at
+ * most twice `limit` entries) without emptying the memo of common entries all at once.
+ */
+export class GenerationalTable<T> {
+  private young: PieceTable<T>;
+  private old: PieceTable<T>;
+
+  constructor(readonly limit: number) {
+    this.young = new PieceTable(limit);
+    this.old = new PieceTable(limit);
+  }
+
+  /** The value for `text.slice(start, end)` (hash: its hashOfRange), or `make(key)` stored for next time. */
+  get(text: string, start: number, end: number, hash: number, make: (key: string) => T): T {
+    const hit = this.young.find(text, start, end, hash);
+    if (hit !== undefined) return hit;
+    let value = this.old.find(text, start, end, hash);
+    let key: string;
+    if (value === undefined) {
+      key = text.slice(start, end);
+      value = make(key);
+    } else {
+      key = this.old.foundKey;
+    }
+    if (this.young.full()) {
+      this.old = this.young;
+      this.young = new PieceTable(this.limit);
+    }
+    this.young.add(key, hash, value);
+    return value;
   }
 }
 

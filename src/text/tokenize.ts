@@ -1,7 +1,7 @@
 import { createRequire } from 'node:module';
 import type winkNLP from 'wink-nlp';
 import type model from 'wink-eng-lite-web-model';
-import { HASH_START, hashStep, PieceTable } from './piece-table.js';
+import { GenerationalTable, HASH_START, hashStep } from './piece-table.js';
 import { loadCoreModel } from './wink-model.js';
 import { readPiece, type WinkTokens } from './wink-pieces.js';
 
@@ -253,16 +253,11 @@ function readingOf(tokens: Tokens): PieceReading {
 }
 
 /**
- * Pieces memoised in two generations: new pieces go to `young`; when it is full it becomes
- * `old` (the previous `old` is dropped) and a piece found in `old` moves back to `young`. Pieces
- * in use stay, pieces not met for a generation go, and memory stays bounded (at most twice
- * MEMO_LIMIT pieces) without emptying the memo of common words all at once. The tables are
- * looked up by a range of the text being tokenized (see PieceTable): a piece met before costs
- * no substring.
+ * Pieces memoised in two generations (see GenerationalTable), looked up by a range of the text
+ * being tokenized: a piece met before costs no substring.
  */
 const MEMO_LIMIT = 60_000;
-let young = new PieceTable<Piece>(MEMO_LIMIT);
-let old = new PieceTable<Piece>(MEMO_LIMIT);
+let memo = new GenerationalTable<Piece>(MEMO_LIMIT);
 /** Token ids (see Tokens.ids), kept apart from the memo; emptied with it when full. */
 const ids = new Map<string, number>();
 const IDS_LIMIT = 200_000;
@@ -270,8 +265,7 @@ let generation = 0;
 
 /** Empties the memo of pieces and the table of token ids (the next generation of ids begins). */
 export function clearTokenMemo(): void {
-  young = new PieceTable(MEMO_LIMIT);
-  old = new PieceTable(MEMO_LIMIT);
+  memo = new GenerationalTable(MEMO_LIMIT);
   ids.clear();
   generation++;
 }
@@ -327,19 +321,6 @@ function newPiece(piece: string): Piece {
   return made;
 }
 
-/** The memoised piece `text.slice(start, end)`, whose hashOfRange is `hash`. */
-function pieceAt(text: string, start: number, end: number, hash: number): Piece {
-  let hit = young.find(text, start, end, hash);
-  if (hit !== undefined) return hit;
-  hit = old.find(text, start, end, hash) ?? newPiece(text.slice(start, end));
-  if (young.full()) {
-    old = young;
-    young = new PieceTable(MEMO_LIMIT);
-  }
-  young.add(hit.text, hash, hit);
-  return hit;
-}
-
 /**
  * Tokenizes English text with wink-nlp (wink-eng-lite-web-model).
  *
@@ -352,7 +333,7 @@ function pieceAt(text: string, start: number, end: number, hash: number): Piece 
  * - Words counted: word, number, ordinal, hashtag, mention, email, URL, time, date and currency
  *   tokens; punctuation, emoji, emoticons and symbols are not words.
  *
- * wink tokenizes each space-separated piece on its own, so pieces are memoised (see pieceAt),
+ * wink tokenizes each space-separated piece on its own, so pieces are memoised (see GenerationalTable),
  * and each piece is read as by a freshly loaded wink-nlp (see IsolatedWink): the tokens are those
  * of one wink pass over the whole text (`tokenizeEnglishWhole`) except where, in that pass, one
  * piece's new words would have changed how a later piece of the same text is split.
@@ -409,7 +390,7 @@ function tokenizeEnglishInto(out: Tokens, text: string, pieces: Piece[] | undefi
       if (++k === n) break;
       c = text.charCodeAt(k);
     } while (breaks ? isBreakChar(c) : !isSpaceChar(c) && !isBreakChar(c));
-    const memoised = pieceAt(text, start, k, hash);
+    const memoised = memo.get(text, start, k, hash, newPiece);
     pieces?.push(memoised);
     // Right after a tab or line break the first token may attach to it (see Piece.afterBreak).
     const t: PieceReading = !spaced && m > 0 && memoised.afterBreak !== undefined ? memoised.afterBreak : memoised;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { HASH_START, hashOfRange, hashStep, PieceTable } from '../../src/text/piece-table.js';
+import { GenerationalTable, HASH_START, hashOfRange, hashStep, PieceTable } from '../../src/text/piece-table.js';
 
 describe('hashOfRange', () => {
   it('is 32-bit FNV-1a (reference: FNV test vectors of draft-eastlake-fnv, IETF; values recalled from memory and recomputed with a separate Python loop)', () => {
@@ -49,5 +49,28 @@ describe('PieceTable', () => {
     }
     expect(table.full()).toBe(true);
     expect(() => table.add('d', hashOfRange('d'), 3)).toThrow(/check full\(\) before add\(\)/);
+  });
+});
+
+describe('GenerationalTable', () => {
+  it('keeps entries met in the last generation, drops the rest, and makes each entry once while it is kept', () => {
+    const made: string[] = [];
+    const table = new GenerationalTable<string>(2);
+    const get = (word: string): string => {
+      const text = `<${word}>`;
+      return table.get(text, 1, 1 + word.length, hashOfRange(word), (key) => {
+        made.push(key);
+        return key.toUpperCase();
+      });
+    };
+    expect(['a', 'b', 'a', 'b'].map(get)).toEqual(['A', 'B', 'A', 'B']);
+    expect(made).toEqual(['a', 'b']);
+    get('c'); // young {a, b} full: it becomes old, c starts a new young
+    get('a'); // found in old, moved back to young {c, a}
+    expect(made).toEqual(['a', 'b', 'c']);
+    get('d'); // young {c, a} full: old {a, b} is dropped
+    get('b'); // b was only in the dropped generation: made again
+    get('a'); // a moved into the kept generation: still there
+    expect(made).toEqual(['a', 'b', 'c', 'd', 'b']);
   });
 });
