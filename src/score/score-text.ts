@@ -39,14 +39,6 @@ export function createBatchScores(n: number, columns: number, lexicons: number):
 export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): void {
   let byLanguage: Map<string, Tokens> | undefined;
   let english: Tokens | undefined;
-  const englishTokens = (): Tokens => (english ??= tokenizeEnglishShared(text, pieces));
-  const tokensFor = (language: string): Tokens => {
-    if (language === 'en' || language.startsWith('en-')) return englishTokens();
-    byLanguage ??= new Map();
-    let t = byLanguage.get(language);
-    if (!t) byLanguage.set(language, (t = tokenize(text, language)));
-    return t;
-  };
   let c = i * columns;
   for (let l = 0; l < lexicons.length; l++) {
     const lex = lexicons[l] as CompiledLexicon;
@@ -54,7 +46,7 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       // VADER splits the text its own way, but on whitespace only, so it can start from the
       // memoised pieces of the English tokens (see scoreVaderPieces).
       if (part === 'all') {
-        englishTokens();
+        english ??= tokenizeEnglishShared(text, pieces);
         writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence));
       } else if (part === 'vader') {
         writeVader(out, c, scoreVader(text, lex.valence));
@@ -66,7 +58,15 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       c += lex.categories.length;
       continue;
     }
-    const tokens = tokensFor(lex.language);
+    let tokens: Tokens;
+    if (isEnglish(lex.language)) {
+      tokens = english ??= tokenizeEnglishShared(text, pieces);
+    } else {
+      byLanguage ??= new Map();
+      let t = byLanguage.get(lex.language);
+      if (!t) byLanguage.set(lex.language, (t = tokenize(text, lex.language)));
+      tokens = t;
+    }
     const m = matchLexicon(tokens, lex, undefined, scratchFor(lex));
     out.negated[i * lexicons.length + l] = m.negated;
     for (let k = 0; k < lex.categories.length; k++, c++) {
@@ -80,8 +80,12 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
     }
   }
   if (part === 'vader') return;
-  const counted = english ?? (byLanguage ? (byLanguage.values().next().value as Tokens) : englishTokens());
+  const counted = english ?? (byLanguage ? (byLanguage.values().next().value as Tokens) : tokenizeEnglishShared(text, pieces));
   out.words[i] = counted.nWords;
+}
+
+function isEnglish(language: string): boolean {
+  return language === 'en' || language.startsWith('en-');
 }
 
 /** Per lexicon, the match result scoreTextInto reuses from text to text (its values are copied out at once). */
