@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { GenerationalTable, HASH_START, hashOfRange, hashStep, PieceTable } from '../../src/text/piece-table.js';
+import { detached, GenerationalTable, HASH_START, hashOfRange, hashStep, PieceTable } from '../../src/text/piece-table.js';
 
 describe('hashOfRange', () => {
   it('is 32-bit FNV-1a (reference: FNV test vectors of draft-eastlake-fnv, IETF; values recalled from memory and recomputed with a separate Python loop)', () => {
@@ -72,5 +72,13 @@ describe('GenerationalTable', () => {
     get('b'); // b was only in the dropped generation: made again
     get('a'); // a moved into the kept generation: still there
     expect(made).toEqual(['a', 'b', 'c', 'd', 'b']);
+  });
+});
+
+describe('detached', () => {
+  it('gives a string equal to its argument, short or long', () => {
+    const text = 'a long diary entry about a long day at the allotment';
+    for (const [a, b] of [[0, 1], [2, 6], [2, 40], [0, text.length]] as const) expect(detached(text.slice(a, b))).toBe(text.slice(a, b));
+    expect(detached('')).toBe('');
   });
 });
