@@ -65,19 +65,25 @@ export class PieceTable<T> {
  * Two PieceTables as generations, for a bounded memo: new entries go to `young`; when it is full
  * it becomes `old` (the previous `old` is dropped) and an entry found in `old` moves back to
  * `young`. Entries in use stay, entries not met for a generation go, and memory stays bounded (at
- * most twice `limit` entries) without emptying the memo of common entries all at once.
+ * most twice `limit` entries) without emptying the memo of common entries all at once. Keys
+ * longer than `maxKeyLength` are not kept (`make` runs each time), so memory is bounded in
+ * characters too, whatever the input (a 10 MB field without a space is one piece).
  */
 export class GenerationalTable<T> {
   private young: PieceTable<T>;
   private old: PieceTable<T>;
 
-  constructor(readonly limit: number) {
+  constructor(
+    readonly limit: number,
+    readonly maxKeyLength = 256,
+  ) {
     this.young = new PieceTable(limit);
     this.old = new PieceTable(limit);
   }
 
   /** The value for `text.slice(start, end)` (hash: its hashOfRange), or `make(key)` stored for next time. */
   get(text: string, start: number, end: number, hash: number, make: (key: string) => T): T {
+    if (end - start > this.maxKeyLength) return make(text.slice(start, end));
     const hit = this.young.find(text, start, end, hash);
     if (hit !== undefined) return hit;
     let value = this.old.find(text, start, end, hash);

@@ -75,6 +75,23 @@ describe('GenerationalTable', () => {
   });
 });
 
+describe('GenerationalTable with long keys', () => {
+  it('does not keep keys longer than maxKeyLength: they are made each time', () => {
+    let made = 0;
+    const table = new GenerationalTable<number>(10, 4);
+    const make = (key: string): number => {
+      made++;
+      return key.length;
+    };
+    const text = 'abcd abcde';
+    for (let k = 0; k < 3; k++) {
+      expect(table.get(text, 0, 4, hashOfRange(text, 0, 4), make)).toBe(4);
+      expect(table.get(text, 5, 10, hashOfRange(text, 5, 10), make)).toBe(5);
+    }
+    expect(made).toBe(1 + 3); // `abcd` once, `abcde` (5 > 4 characters) every time
+  });
+});
+
 describe('detached', () => {
   it('gives a string equal to its argument, short or long', () => {
     const text = 'a long diary entry about a long day at the allotment';
