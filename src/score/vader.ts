@@ -75,30 +75,6 @@ function vaderWord(w: string, lexicon: VaderLexicon): VaderWord {
   return { raw: w, lower, valence: lexicon.get(lower), caps: (bits & (UPPER | LOWER)) === UPPER };
 }
 
-/** The VaderWord of token `w` for `lexicon`, cached. */
-function cachedWord(w: string, lexicon: VaderLexicon, words: Map<string, VaderWord>): VaderWord {
-  let word = words.get(w);
-  if (word === undefined) {
-    word = vaderWord(w, lexicon);
-    if (words.size >= WORD_CACHE_LIMIT) words.clear();
-    words.set(w, word);
-  }
-  return word;
-}
-
-/** Per lexicon, its VaderWord of each token met (bounded: cleared at WORD_CACHE_LIMIT tokens). */
-const wordCaches = new WeakMap<VaderLexicon, Map<string, VaderWord>>();
-const WORD_CACHE_LIMIT = 50_000;
-
-function wordsOf(lexicon: VaderLexicon): Map<string, VaderWord> {
-  let words = wordCaches.get(lexicon);
-  if (words === undefined) {
-    words = new Map();
-    wordCaches.set(lexicon, words);
-  }
-  return words;
-}
-
 /** The tokens of the text being scored, reused from text to text (scoring is synchronous; entries from `n` on are stale). */
 const scratch = { n: 0, raw: [] as string[], lower: [] as string[], valenceOf: [] as Array<number | undefined>, caps: [] as boolean[], sentiments: [] as number[] };
 
@@ -251,12 +227,11 @@ const TOKEN_CACHE_LIMIT = 60_000;
  * `lexicon` in its annotation slot, so a recurring piece is split and looked up once.
  */
 export function scoreVaderPieces(pieces: readonly Piece[], text: string, lexicon: VaderLexicon): VaderScores {
-  const words = wordsOf(lexicon);
   scratch.n = 0;
   for (const piece of pieces) {
     let list = piece.annotationKey === lexicon ? (piece.annotation as VaderWord[]) : undefined;
     if (list === undefined) {
-      list = vaderTokens(piece.text).map((w) => cachedWord(w, lexicon, words));
+      list = vaderTokens(piece.text).map((w) => vaderWord(w, lexicon));
       piece.annotationKey = lexicon;
       piece.annotation = list;
     }

@@ -334,7 +334,7 @@ function newPiece(piece: string): Piece {
  *   tokens; punctuation, emoji, emoticons and symbols are not words.
  *
  * wink tokenizes each space-separated piece on its own, so pieces are memoised (see GenerationalTable),
- * and each piece is read as by a freshly loaded wink-nlp (see IsolatedWink): the tokens are those
+ * and each piece is read as by a freshly loaded wink-nlp (see readPiece): the tokens are those
  * of one wink pass over the whole text (`tokenizeEnglishWhole`) except where, in that pass, one
  * piece's new words would have changed how a later piece of the same text is split.
  */
