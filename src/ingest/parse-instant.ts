@@ -143,7 +143,19 @@ export function formatUtc(instant: number): string {
 export function formatLocal(instant: number, offsetMinutes: number): string {
   const wall = instant + offsetMinutes * 60000;
   const local = Number.isInteger(wall) ? isoWithoutZone(wall) : new Date(wall).toISOString().slice(0, 23);
-  const sign = offsetMinutes < 0 ? '-' : '+';
-  const abs = Math.abs(offsetMinutes);
-  return `${local}${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
+  return local + offsetText(offsetMinutes);
+}
+
+/** `+02:00` for 120 minutes (RFC 3339 `time-numoffset`), remembered per offset (a file has few). */
+const offsetTexts = new Map<number, string>();
+
+function offsetText(offsetMinutes: number): string {
+  let text = offsetTexts.get(offsetMinutes);
+  if (text === undefined) {
+    const sign = offsetMinutes < 0 ? '-' : '+';
+    const abs = Math.abs(offsetMinutes);
+    text = `${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
+    offsetTexts.set(offsetMinutes, text);
+  }
+  return text;
 }

@@ -7,7 +7,7 @@
  */
 export function formatNumber(value: number | undefined | null, digits = 10): string {
   if (value === undefined || value === null || !Number.isFinite(value)) return '';
-  if (Number.isInteger(value) && Math.abs(value) < 1e15) return String(value);
+  if (Number.isInteger(value) && Math.abs(value) < 1e15) return integerText(value);
   const magnitude = Math.abs(value);
   if (magnitude !== 0 && (magnitude < 1e-6 || magnitude >= 1e15)) return value.toPrecision(digits).replace(/\.?0+e/, 'e');
   let text = value.toPrecision(digits);
@@ -20,4 +20,12 @@ export function formatNumber(value: number | undefined | null, digits = 10): str
     text = text.slice(0, end);
   }
   return text === '-0' ? '0' : text;
+}
+
+/** Decimal texts of the integers −1024 … 1023, made once: counts and sums in output rows are mostly small. */
+const SMALL_INTEGERS = Array.from({ length: 2048 }, (_, k) => String(k - 1024));
+
+/** `String(value)` for an integer (−0 prints as 0), without a new string for small ones. */
+export function integerText(value: number): string {
+  return value >= -1024 && value < 1024 ? (SMALL_INTEGERS[value + 1024] as string) : String(value);
 }

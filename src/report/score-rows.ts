@@ -4,7 +4,7 @@ import type { ScoreColumn } from '../score/score-entry.js';
 import type { BatchScores } from '../score/score-text.js';
 import type { RawEntry } from '../types.js';
 import { csvField } from './csv.js';
-import { formatNumber } from './format-number.js';
+import { formatNumber, integerText } from './format-number.js';
 
 /** Fixed leading columns of a scores file (docs/architecture.md). */
 export const SCORE_ID_COLUMNS = ['entry_id', 'person', 'time_utc', 'zone', 'time_local', 'words'] as const;
@@ -38,18 +38,27 @@ export function scoreRowWriter(columns: readonly ScoreColumn[], lexicons: readon
     rules: lex.scoring !== 'vader',
     lexicon: l,
   }));
+  // The fields of one row, joined once (one string per row instead of one per field added).
+  const fields: string[] = [];
   return (entry, batch, i, text) => {
     // Numbers and RFC 3339 times never need quoting: only the id, person, zone and text go through csvField.
-    let line = `${csvField(entry.id)},${csvField(entry.person)},${formatUtc(entry.instant)},${csvField(entry.zone)},${formatLocal(entry.instant, entry.offsetMinutes)},${batch.words[i] as number}`;
+    let f = 0;
+    fields[f++] = csvField(entry.id);
+    fields[f++] = csvField(entry.person);
+    fields[f++] = formatUtc(entry.instant);
+    fields[f++] = csvField(entry.zone);
+    fields[f++] = formatLocal(entry.instant, entry.offsetMinutes);
+    fields[f++] = integerText(batch.words[i] as number);
     const row = i * n;
     for (const { columns: own, rules, lexicon } of layout) {
-      for (const c of own) line += `,${formatNumber(batch.values[row + c])}`;
+      for (const c of own) fields[f++] = formatNumber(batch.values[row + c]);
       if (rules) {
-        for (const c of own) line += `,${batch.matched[row + c] as number}`;
-        line += `,${batch.negated[i * nl + lexicon] as number}`;
+        for (const c of own) fields[f++] = integerText(batch.matched[row + c] as number);
+        fields[f++] = integerText(batch.negated[i * nl + lexicon] as number);
       }
     }
-    if (keepText) line += `,${csvField(text ?? '')}`;
-    return line;
+    if (keepText) fields[f++] = csvField(text ?? '');
+    fields.length = f;
+    return fields.join(',');
   };
 }
