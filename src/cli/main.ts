@@ -21,13 +21,17 @@ const COMMANDS: ReadonlyArray<[string, () => Promise<Register>]> = [
   ['lexicons', async () => (await import('./lexicons.js')).registerLexicons],
 ];
 
-/** Builds the commander program; with `only`, registers just that command when it exists. */
+/** Arguments that need no command registered (the version alone is printed). */
+const VERSION_FLAGS = new Set(['--version', '-V']);
+
+/** Builds the commander program; with `only`, registers just that command when it exists (none for --version). */
 export async function buildProgram(only?: string): Promise<Command> {
   const program = new Command('lexichron')
     .description('Per-person affect time series from timestamped text, validated against self-reports.')
     .version(TOOL_VERSION)
     .showHelpAfterError('(run with --help for the options)')
     .exitOverride();
+  if (only !== undefined && VERSION_FLAGS.has(only)) return program;
   const chosen = COMMANDS.filter(([name]) => name === only);
   for (const [, load] of chosen.length > 0 ? chosen : COMMANDS) (await load())(program);
   return program;
