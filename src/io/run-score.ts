@@ -129,7 +129,8 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     pool = createScorePool(options.lexicons, workers as number);
     const hasVader = options.lexicons.some((l) => l.scoring === 'vader');
     // Entries are scored in batches and written in input order, by the workers when there are any
-    // (a few batches in flight per worker, so memory stays bounded), else in this thread.
+    // (at most INFLIGHT_PER_WORKER batches in flight per worker, so memory stays bounded), else in
+    // this thread.
     const inflight: Array<{ entries: RawEntry[]; scores: Promise<BatchScores> }> = [];
     let batch: RawEntry[] = [];
     const maxInflight = pool ? INFLIGHT_PER_WORKER * pool.size + 4 : 0;
