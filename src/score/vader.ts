@@ -60,54 +60,95 @@ function shapeOf(word: string): number {
   return bits;
 }
 
-/** What VADER needs of one token as written: the token, its lower case, its valence, whether it is in capitals. */
+/**
+ * What the VADER rules ask of a token, worked out once per distinct token (VaderWord.flags), so
+ * scoring a text compares no strings except in idioms. "Lower" tests are on the token's lower
+ * case, the others on the token as written, as in the reference.
+ */
+const W = {
+  /** In the lexicon (lower case). */
+  Valenced: 1,
+  /** In capitals: some A–Z and no a–z (Python's `isupper` as the reference port tests it). */
+  Caps: 2,
+  /** A booster or dampener (lower). */
+  Booster: 4,
+  /** `kind` (lower). */
+  Kind: 8,
+  /** `of` (lower). */
+  Of: 16,
+  /** `least` (lower). */
+  Least: 32,
+  /** `at` or `very` (lower). */
+  AtOrVery: 64,
+  /** A negator or a token containing `n't`. */
+  Negator: 128,
+  /** `never`. */
+  Never: 256,
+  /** `so` or `this`. */
+  SoOrThis: 512,
+  /** `but`. */
+  But: 1024,
+  /** `BUT`. */
+  ButCaps: 2048,
+  /** A word of an idiom or a two-word dampener. */
+  Idiom: 4096,
+} as const;
+
+/** What VADER needs of one token as written: the token, its valence (0 unless W.Valenced), its booster value and its flags (see W). */
 export interface VaderWord {
   raw: string;
-  lower: string;
-  valence: number | undefined;
-  caps: boolean;
+  valence: number;
+  boost: number;
+  flags: number;
 }
 
 function vaderWord(w: string, lexicon: VaderLexicon): VaderWord {
-  // All caps as the reference port tests it (Python's `isupper` on A–Z): some A–Z and no a–z.
   const bits = shapeOf(w);
   const lower = bits & (UPPER | OTHER) ? w.toLowerCase() : w;
-  return { raw: w, lower, valence: lexicon.get(lower), caps: (bits & (UPPER | LOWER)) === UPPER };
+  const valence = lexicon.get(lower);
+  const boost = VADER_BOOSTERS.get(lower);
+  let flags = 0;
+  if (valence !== undefined) flags |= W.Valenced;
+  if ((bits & (UPPER | LOWER)) === UPPER) flags |= W.Caps;
+  if (boost !== undefined) flags |= W.Booster;
+  if (lower === 'kind') flags |= W.Kind;
+  if (lower === 'of') flags |= W.Of;
+  if (lower === 'least') flags |= W.Least;
+  if (lower === 'at' || lower === 'very') flags |= W.AtOrVery;
+  if (isNegator(w)) flags |= W.Negator;
+  if (w === 'never') flags |= W.Never;
+  if (w === 'so' || w === 'this') flags |= W.SoOrThis;
+  if (w === 'but') flags |= W.But;
+  if (w === 'BUT') flags |= W.ButCaps;
+  if (IDIOM_WORDS.has(w)) flags |= W.Idiom;
+  return { raw: w, valence: valence ?? 0, boost: boost ?? 0, flags };
 }
 
 /** The tokens of the text being scored, reused from text to text (scoring is synchronous; entries from `n` on are stale). */
-const scratch = { n: 0, raw: [] as string[], lower: [] as string[], valenceOf: [] as Array<number | undefined>, caps: [] as boolean[], sentiments: [] as number[] };
-
-/** `list` copied into a new array of `size` entries (the first scratch.n kept, the rest `fill`). */
-function grown<T>(list: readonly T[], size: number, fill: T): T[] {
-  const next = new Array<T>(size).fill(fill);
-  for (let k = 0; k < scratch.n; k++) next[k] = list[k] as T;
-  return next;
-}
+const scratch = { n: 0, words: [] as VaderWord[], sentiments: [] as number[] };
 
 function grow(n: number): void {
-  const size = Math.max(n, 2 * scratch.lower.length, 64);
-  scratch.raw = grown(scratch.raw, size, '');
-  scratch.lower = grown(scratch.lower, size, '');
-  scratch.valenceOf = grown<number | undefined>(scratch.valenceOf, size, undefined);
-  scratch.caps = grown(scratch.caps, size, false);
+  const size = Math.max(n, 2 * scratch.words.length, 64);
+  const words = new Array<VaderWord>(size).fill(NO_WORD);
+  for (let k = 0; k < scratch.n; k++) words[k] = scratch.words[k] as VaderWord;
+  scratch.words = words;
   scratch.sentiments = new Array<number>(size).fill(0);
 }
+
+/** Filler of unused scratch entries. */
+const NO_WORD: VaderWord = { raw: '', valence: 0, boost: 0, flags: 0 };
 
 /** Appends one token to the scratch arrays. */
 function pushWord(word: VaderWord): void {
   const k = scratch.n;
-  if (k >= scratch.lower.length) grow(k + 1);
-  scratch.raw[k] = word.raw;
-  scratch.lower[k] = word.lower;
-  scratch.valenceOf[k] = word.valence;
-  scratch.caps[k] = word.caps;
+  if (k >= scratch.words.length) grow(k + 1);
+  scratch.words[k] = word;
   scratch.n = k + 1;
 }
 
-/** The first index below `n` where `list` holds `value`, or −1. */
-function firstIndex(list: readonly string[], n: number, value: string): number {
-  for (let k = 0; k < n; k++) if (list[k] === value) return k;
+/** The first index below `n` of a token with `flag`, or −1. */
+function firstWith(words: readonly VaderWord[], n: number, flag: number): number {
+  for (let k = 0; k < n; k++) if ((words[k] as VaderWord).flags & flag) return k;
   return -1;
 }
 
@@ -122,16 +163,23 @@ function countChar(text: string, char: string): number {
   return count;
 }
 
-/** The special-idiom and two-word-dampener check, applied with the modifier three tokens back. */
-function idiomValence(valence: number, raw: readonly string[], i: number, n: number): number {
-  const w3 = raw[i - 3]!;
-  const w2 = raw[i - 2]!;
-  const w1 = raw[i - 1]!;
-  const w0 = raw[i]!;
-  const has0 = IDIOM_WORDS.has(w0);
-  const has1 = IDIOM_WORDS.has(w1);
-  const has2 = IDIOM_WORDS.has(w2);
-  const has3 = IDIOM_WORDS.has(w3);
+/**
+ * The special-idiom and two-word-dampener check, applied with the modifier three tokens back
+ * (only called when one of tokens i−3 … i is an idiom word: otherwise it changes nothing).
+ */
+function idiomValence(valence: number, words: readonly VaderWord[], i: number, n: number): number {
+  const t3 = words[i - 3]!;
+  const t2 = words[i - 2]!;
+  const t1 = words[i - 1]!;
+  const t0 = words[i]!;
+  const w3 = t3.raw;
+  const w2 = t2.raw;
+  const w1 = t1.raw;
+  const w0 = t0.raw;
+  const has0 = (t0.flags & W.Idiom) !== 0;
+  const has1 = (t1.flags & W.Idiom) !== 0;
+  const has2 = (t2.flags & W.Idiom) !== 0;
+  const has3 = (t3.flags & W.Idiom) !== 0;
   let v = valence;
   // The reference tries these in order and keeps the first idiom found; a
   // sequence can only be an idiom when each of its words occurs in one.
@@ -143,12 +191,12 @@ function idiomValence(valence: number, raw: readonly string[], i: number, n: num
   if (idiom === undefined && has3 && has2) idiom = VADER_IDIOMS.get(`${w3} ${w2}`);
   if (idiom !== undefined) v = idiom;
   if (has0 && n - 1 > i) {
-    const next = raw[i + 1]!;
-    if (IDIOM_WORDS.has(next)) {
-      const two = VADER_IDIOMS.get(`${w0} ${next}`);
+    const next = words[i + 1]!;
+    if (next.flags & W.Idiom) {
+      const two = VADER_IDIOMS.get(`${w0} ${next.raw}`);
       if (two !== undefined) v = two;
-      if (n - 1 > i + 1 && IDIOM_WORDS.has(raw[i + 2]!)) {
-        const three = VADER_IDIOMS.get(`${w0} ${next} ${raw[i + 2]!}`);
+      if (n - 1 > i + 1 && words[i + 2]!.flags & W.Idiom) {
+        const three = VADER_IDIOMS.get(`${w0} ${next.raw} ${words[i + 2]!.raw}`);
         if (three !== undefined) v = three;
       }
     }
@@ -224,18 +272,22 @@ const TOKEN_CACHE_LIMIT = 60_000;
  * scoreVader for a text given as its memoised pieces (see tokenizeEnglishPieces): VADER splits
  * on every whitespace character, which includes every separator of the pieces, so the VADER
  * tokens of the text are those of its pieces in order. Each piece keeps its VADER tokens for
- * `lexicon` in its annotation slot, so a recurring piece is split and looked up once.
+ * `lexicon` in its annotation slot (the VaderWord itself for a piece of one token, the usual
+ * case; else a list), so a recurring piece is split and looked up once.
  */
 export function scoreVaderPieces(pieces: readonly Piece[], text: string, lexicon: VaderLexicon): VaderScores {
   scratch.n = 0;
-  for (const piece of pieces) {
-    let list = piece.annotationKey === lexicon ? (piece.annotation as VaderWord[]) : undefined;
-    if (list === undefined) {
-      list = vaderTokens(piece.text).map((w) => vaderWord(w, lexicon));
+  for (let p = 0; p < pieces.length; p++) {
+    const piece = pieces[p] as Piece;
+    let annotation = piece.annotationKey === lexicon ? (piece.annotation as VaderWord | VaderWord[]) : undefined;
+    if (annotation === undefined) {
+      const list = vaderTokens(piece.text).map((w) => vaderWord(w, lexicon));
+      annotation = list.length === 1 ? (list[0] as VaderWord) : list;
       piece.annotationKey = lexicon;
-      piece.annotation = list;
+      piece.annotation = annotation;
     }
-    for (const word of list) pushWord(word);
+    if (!Array.isArray(annotation)) pushWord(annotation);
+    else for (let k = 0; k < annotation.length; k++) pushWord(annotation[k] as VaderWord);
   }
   return scoreScratch(text);
 }
@@ -244,45 +296,44 @@ export function scoreVaderPieces(pieces: readonly Piece[], text: string, lexicon
 function scoreScratch(text: string): VaderScores {
   const n = scratch.n;
   if (n === 0) return { compound: 0, pos: 0, neu: 0, neg: 0, tokens: 0, matched: 0 };
-  const { raw, lower, valenceOf, caps, sentiments } = scratch;
+  const { words, sentiments } = scratch;
   let capsCount = 0;
-  for (let k = 0; k < n; k++) if (caps[k]) capsCount++;
+  for (let k = 0; k < n; k++) if ((words[k] as VaderWord).flags & W.Caps) capsCount++;
   const capDiff = capsCount > 0 && capsCount < n;
 
   let matched = 0;
   for (let i = 0; i < n; i++) {
-    const lw = lower[i]!;
-    const base = valenceOf[i];
-    if (base === undefined || VADER_BOOSTERS.has(lw) || (lw === 'kind' && i < n - 1 && lower[i + 1] === 'of')) {
+    const word = words[i] as VaderWord;
+    const flags = word.flags;
+    if (!(flags & W.Valenced) || flags & W.Booster || (flags & W.Kind && i < n - 1 && (words[i + 1] as VaderWord).flags & W.Of)) {
       sentiments[i] = 0;
       continue;
     }
     matched++;
-    let v = base;
-    if (capDiff && caps[i]) v += v > 0 ? VADER_CAPS_BOOST : -VADER_CAPS_BOOST;
+    let v = word.valence;
+    if (capDiff && flags & W.Caps) v += v > 0 ? VADER_CAPS_BOOST : -VADER_CAPS_BOOST;
 
     for (let back = 0; back < 3 && back < i; back++) {
-      const j = i - back - 1;
-      if (valenceOf[j] !== undefined) continue;
-      const booster = VADER_BOOSTERS.get(lower[j]!);
-      if (booster !== undefined) {
-        let s = v < 0 ? -booster : booster;
-        if (capDiff && caps[j]) s += v > 0 ? VADER_CAPS_BOOST : -VADER_CAPS_BOOST;
+      const before = words[i - back - 1] as VaderWord;
+      if (before.flags & W.Valenced) continue;
+      if (before.flags & W.Booster) {
+        let s = v < 0 ? -before.boost : before.boost;
+        if (capDiff && before.flags & W.Caps) s += v > 0 ? VADER_CAPS_BOOST : -VADER_CAPS_BOOST;
         if (back > 0 && s !== 0) s *= VADER_DISTANCE_SCALE[back]!;
         v += s;
       }
-      v = negationCheck(v, raw, back, i);
-      if (back === 2) v = idiomValence(v, raw, i, n);
+      v = negationCheck(v, words, back, i);
+      if (back === 2 && (flags | (words[i - 1] as VaderWord).flags | (words[i - 2] as VaderWord).flags | before.flags) & W.Idiom) v = idiomValence(v, words, i, n);
     }
 
-    if (i > 0 && lower[i - 1] === 'least' && valenceOf[i - 1] === undefined) {
-      if (i === 1 || (lower[i - 2] !== 'at' && lower[i - 2] !== 'very')) v *= VADER_NEGATION_SCALAR;
+    if (i > 0 && (words[i - 1] as VaderWord).flags & W.Least && !((words[i - 1] as VaderWord).flags & W.Valenced)) {
+      if (i === 1 || !((words[i - 2] as VaderWord).flags & W.AtOrVery)) v *= VADER_NEGATION_SCALAR;
     }
     sentiments[i] = v;
   }
 
-  let but = firstIndex(raw, n, 'but');
-  if (but < 0) but = firstIndex(raw, n, 'BUT');
+  let but = firstWith(words, n, W.But);
+  if (but < 0) but = firstWith(words, n, W.ButCaps);
   if (but >= 0) {
     for (let i = 0; i < n; i++) {
       if (i < but) sentiments[i] = sentiments[i]! * VADER_BEFORE_BUT;
@@ -321,19 +372,17 @@ function scoreScratch(text: string): VaderScores {
 }
 
 /** Negation and "never so/this" with the modifier `back + 1` tokens before token i. */
-function negationCheck(v: number, raw: readonly string[], back: number, i: number): number {
-  if (back === 0) return isNegator(raw[i - 1]!) ? v * VADER_NEGATION_SCALAR : v;
+function negationCheck(v: number, words: readonly VaderWord[], back: number, i: number): number {
+  const t1 = words[i - 1] as VaderWord;
+  if (back === 0) return t1.flags & W.Negator ? v * VADER_NEGATION_SCALAR : v;
+  const t2 = words[i - 2] as VaderWord;
   if (back === 1) {
-    const w1 = raw[i - 1]!;
-    if (raw[i - 2] === 'never' && (w1 === 'so' || w1 === 'this')) return v * VADER_NEVER_SO_NEAR;
-    return isNegator(raw[i - 2]!) ? v * VADER_NEGATION_SCALAR : v;
+    if (t2.flags & W.Never && t1.flags & W.SoOrThis) return v * VADER_NEVER_SO_NEAR;
+    return t2.flags & W.Negator ? v * VADER_NEGATION_SCALAR : v;
   }
-  const w1 = raw[i - 1]!;
-  const w2 = raw[i - 2]!;
-  if ((raw[i - 3] === 'never' && (w2 === 'so' || w2 === 'this')) || w1 === 'so' || w1 === 'this') {
-    return v * VADER_NEVER_SO_FAR;
-  }
-  return isNegator(raw[i - 3]!) ? v * VADER_NEGATION_SCALAR : v;
+  const t3 = words[i - 3] as VaderWord;
+  if ((t3.flags & W.Never && t2.flags & W.SoOrThis) || t1.flags & W.SoOrThis) return v * VADER_NEVER_SO_FAR;
+  return t3.flags & W.Negator ? v * VADER_NEGATION_SCALAR : v;
 }
 
 /** Emphasis from "!" (0.292 each, up to 4) and "?" (2–3: 0.18 each; more: 0.96) anywhere in the text. */
