@@ -102,26 +102,43 @@ export interface VaderWord {
   flags: number;
 }
 
+/** Flags (see W) of the few tokens that have any by their lower case: boosters and the words some rule names. */
+const LOWER_FLAGS: ReadonlyMap<string, number> = flagTable([
+  [[...VADER_BOOSTERS.keys()], W.Booster],
+  [['kind'], W.Kind],
+  [['of'], W.Of],
+  [['least'], W.Least],
+  [['at', 'very'], W.AtOrVery],
+]);
+
+/**
+ * Flags (see W) of the few tokens that have any as written. A token negates when it is a negator
+ * or contains "n't" (case-sensitive, as published): the second test is in vaderWord.
+ */
+const RAW_FLAGS: ReadonlyMap<string, number> = flagTable([
+  [[...VADER_NEGATORS], W.Negator],
+  [['never'], W.Never],
+  [['so', 'this'], W.SoOrThis],
+  [['but'], W.But],
+  [['BUT'], W.ButCaps],
+  [[...IDIOM_WORDS], W.Idiom],
+]);
+
+function flagTable(groups: ReadonlyArray<readonly [readonly string[], number]>): Map<string, number> {
+  const table = new Map<string, number>();
+  for (const [words, flag] of groups) for (const word of words) table.set(word, (table.get(word) ?? 0) | flag);
+  return table;
+}
+
 function vaderWord(w: string, lexicon: VaderLexicon): VaderWord {
   const bits = shapeOf(w);
   const lower = bits & (UPPER | OTHER) ? w.toLowerCase() : w;
   const valence = lexicon.get(lower);
-  const boost = VADER_BOOSTERS.get(lower);
-  let flags = 0;
+  let flags = (LOWER_FLAGS.get(lower) ?? 0) | (RAW_FLAGS.get(w) ?? 0);
   if (valence !== undefined) flags |= W.Valenced;
   if ((bits & (UPPER | LOWER)) === UPPER) flags |= W.Caps;
-  if (boost !== undefined) flags |= W.Booster;
-  if (lower === 'kind') flags |= W.Kind;
-  if (lower === 'of') flags |= W.Of;
-  if (lower === 'least') flags |= W.Least;
-  if (lower === 'at' || lower === 'very') flags |= W.AtOrVery;
-  if (isNegator(w)) flags |= W.Negator;
-  if (w === 'never') flags |= W.Never;
-  if (w === 'so' || w === 'this') flags |= W.SoOrThis;
-  if (w === 'but') flags |= W.But;
-  if (w === 'BUT') flags |= W.ButCaps;
-  if (IDIOM_WORDS.has(w)) flags |= W.Idiom;
-  return { raw: w, valence: valence ?? 0, boost: boost ?? 0, flags };
+  if (w.includes("n't")) flags |= W.Negator;
+  return { raw: w, valence: valence ?? 0, boost: flags & W.Booster ? (VADER_BOOSTERS.get(lower) as number) : 0, flags };
 }
 
 /** The tokens of the text being scored, reused from text to text (scoring is synchronous; entries from `n` on are stale). */
@@ -150,11 +167,6 @@ function pushWord(word: VaderWord): void {
 function firstWith(words: readonly VaderWord[], n: number, flag: number): number {
   for (let k = 0; k < n; k++) if ((words[k] as VaderWord).flags & flag) return k;
   return -1;
-}
-
-/** A single token negates when it is a negator or contains "n't" (case-sensitive, as published). */
-function isNegator(word: string): boolean {
-  return VADER_NEGATORS.has(word) || word.includes("n't");
 }
 
 function countChar(text: string, char: string): number {
