@@ -2,7 +2,7 @@ import { basename } from 'node:path';
 import type { Diagnostic, RawEntry, ReadItem, SourceRef } from '../types.js';
 import { parseColumnMapping, resolveColumns, type ColumnMapping } from './column-mapping.js';
 import { DEFAULT_TIME_OPTIONS, parseInstant, type TimeOptions } from './parse-instant.js';
-import { readRecords, type ReadRecordsOptions } from './read-records.js';
+import { readRecordBatches, type ReadRecordsOptions } from './read-records.js';
 import { isValidZone, zoneOffset } from './zone-offset.js';
 import { zoneAtInstant, zoneOnLocalDate, type ZoneTable } from './zone-table.js';
 
@@ -63,23 +63,30 @@ export function recordToEntry(record: Record<string, string>, source: SourceRef,
  * column.
  */
 export async function* readEntries(path: string, options: ReadEntriesOptions): AsyncGenerator<ReadItem> {
+  for await (const batch of readEntryBatches(path, options)) yield* batch;
+}
+
+/** readEntries in batches: the entries and rejects of one chunk of the file at a time, in order, never empty. */
+export async function* readEntryBatches(path: string, options: ReadEntriesOptions): AsyncGenerator<ReadItem[]> {
   const time = options.time ?? DEFAULT_TIME_OPTIONS;
   const mapping = typeof options.columns === 'string' || options.columns === undefined ? parseColumnMapping(options.columns) : options.columns;
   let columns: ColumnMapping | undefined;
   const file = basename(path);
-  for await (const item of readRecords(path, options)) {
-    if (item.kind === 'header') {
-      if (item.columns.length > 0) columns = resolveColumns(mapping, item.columns, file);
-      continue;
-    }
-    if (item.kind === 'reject') {
-      yield { kind: 'reject', diagnostic: item.diagnostic };
-      continue;
-    }
-    if (!columns) {
+  for await (const records of readRecordBatches(path, options)) {
+    const items: ReadItem[] = [];
+    for (const item of records) {
+      if (item.kind === 'header') {
+        if (item.columns.length > 0) columns = resolveColumns(mapping, item.columns, file);
+        continue;
+      }
+      if (item.kind === 'reject') {
+        items.push({ kind: 'reject', diagnostic: item.diagnostic });
+        continue;
+      }
       // JSON sources have no header: resolve against the first record's keys.
-      columns = resolveColumns(mapping, Object.keys(item.record), file);
+      columns ??= resolveColumns(mapping, Object.keys(item.record), file);
+      items.push(recordToEntry(item.record, item.source, columns, options.zones, time));
     }
-    yield recordToEntry(item.record, item.source, columns, options.zones, time);
+    if (items.length > 0) yield items;
   }
 }

@@ -50,6 +50,15 @@ function reject(file: string, line: number, code: string, message: string): Reco
  * A byte-order mark is removed. Memory stays bounded by one row.
  */
 export async function* readRecords(path: string, options: ReadRecordsOptions = {}): AsyncGenerator<RecordItem> {
+  for await (const batch of readRecordBatches(path, options)) yield* batch;
+}
+
+/**
+ * readRecords in batches: the items of one chunk of the file at a time (a few hundred rows), in
+ * order, never empty. For readers that handle many rows per step of the event loop (scoring);
+ * memory stays bounded by a chunk plus one row.
+ */
+export async function* readRecordBatches(path: string, options: ReadRecordsOptions = {}): AsyncGenerator<RecordItem[]> {
   const format = options.format ?? formatFromPath(path);
   if (!format) {
     throw usageError(`Cannot tell the format of \`${path}\` from its extension; name it .csv, .tsv, .jsonl or .json, or pass --format csv|tsv|jsonl|json.`);
@@ -60,6 +69,9 @@ export async function* readRecords(path: string, options: ReadRecordsOptions = {
   else if (format === 'json') yield* readJsonArray(path, maxField);
   else yield* readDelimited(path, format === 'tsv' ? (options.delimiter ?? '\t') : (options.delimiter ?? ','), maxField);
 }
+
+/** Items per batch of the JSON readers. */
+const JSON_BATCH = 256;
 
 async function assertReadable(path: string): Promise<void> {
   try {
@@ -120,7 +132,7 @@ export function guessLineBreak(text: string, final = false): '\n' | '\r' | '\r\n
  * synchronously and the unfinished last row is carried into the next batch. A carried row is
  * parsed again only once the buffer has doubled, so a long quoted field costs linear time.
  */
-async function* readDelimited(path: string, delimiter: string, maxField: number): AsyncGenerator<RecordItem> {
+async function* readDelimited(path: string, delimiter: string, maxField: number): AsyncGenerator<RecordItem[]> {
   const file = basename(path);
   const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: 1 << 16 });
   let header: string[] | undefined;
@@ -130,7 +142,8 @@ async function* readDelimited(path: string, delimiter: string, maxField: number)
   let retryAt = 0;
   let first = true;
 
-  function* emit(rows: string[][], errors: Papa.ParseError[]): Generator<RecordItem> {
+  function emit(rows: string[][], errors: Papa.ParseError[]): RecordItem[] {
+    const items: RecordItem[] = [];
     const errorByRow = new Map<number, Papa.ParseError>();
     for (const e of errors) if ((e.code === 'MissingQuotes' || e.code === 'InvalidQuotes') && typeof e.row === 'number' && !errorByRow.has(e.row)) errorByRow.set(e.row, e);
     for (let r = 0; r < rows.length; r++) {
@@ -142,26 +155,27 @@ async function* readDelimited(path: string, delimiter: string, maxField: number)
       if (isBlank && !quoteError) continue;
       if (!header) {
         header = data.map((h) => h.trim());
-        yield { kind: 'header', columns: header, source: { file, line: start } };
+        items.push({ kind: 'header', columns: header, source: { file, line: start } });
         continue;
       }
       if (quoteError) {
-        yield reject(file, start, 'unclosed_quote', `a quoted field is not closed (${quoteError.message}); the file may be truncated or a quote is unescaped (double it as "")`);
+        items.push(reject(file, start, 'unclosed_quote', `a quoted field is not closed (${quoteError.message}); the file may be truncated or a quote is unescaped (double it as "")`));
         continue;
       }
       if (data.length !== header.length) {
-        yield reject(file, start, 'field_count', `the row has ${data.length} fields but the header has ${header.length}; check the delimiter and quoting of this row`);
+        items.push(reject(file, start, 'field_count', `the row has ${data.length} fields but the header has ${header.length}; check the delimiter and quoting of this row`));
         continue;
       }
       const problem = fieldProblem(data, maxField);
       if (problem) {
-        yield reject(file, start, problem.code, problem.message);
+        items.push(reject(file, start, problem.code, problem.message));
         continue;
       }
       const record: Record<string, string> = {};
       for (let i = 0; i < header.length; i++) record[header[i] as string] = data[i] as string;
-      yield { kind: 'record', record, source: { file, line: start } };
+      items.push({ kind: 'record', record, source: { file, line: start } });
     }
+    return items;
   }
 
   try {
@@ -177,12 +191,14 @@ async function* readDelimited(path: string, delimiter: string, maxField: number)
       if (pending.length > MAX_ROW_CHARS) {
         throw inputError(`Cannot read \`${path}\`: the row starting on line ${line} runs on for more than ${MAX_ROW_CHARS} characters; a quote is probably not closed (double quotes inside a field as "") or the file is not ${delimiter === '\t' ? 'tab' : `\`${delimiter}\``}-delimited text.`);
       }
-      yield* emit(parsed.data as string[][], parsed.errors);
+      const items = emit(parsed.data as string[][], parsed.errors);
+      if (items.length > 0) yield items;
     }
     if (pending !== '') {
       const parsed = new Papa.Parser({ delimiter, newline: newline ?? guessLineBreak(pending, true) }).parse(pending, 0, false);
       pending = '';
-      yield* emit(parsed.data as string[][], parsed.errors);
+      const items = emit(parsed.data as string[][], parsed.errors);
+      if (items.length > 0) yield items;
     }
     if (!header) throw inputError(`Cannot read \`${path}\`: the file is empty; expected a header row and at least one data row.`);
   } finally {
@@ -202,38 +218,44 @@ function toRecord(value: unknown): Record<string, string> | undefined {
 }
 
 /** Reads JSON Lines: one object per line; blank lines are skipped, bad lines rejected. */
-async function* readJsonLines(path: string, maxField: number): AsyncGenerator<RecordItem> {
+async function* readJsonLines(path: string, maxField: number): AsyncGenerator<RecordItem[]> {
   const file = basename(path);
   const lines = createInterface({ input: createReadStream(path, { encoding: 'utf8' }), crlfDelay: Infinity });
   let line = 0;
   let headerSent = false;
+  let items: RecordItem[] = [];
   for await (const raw of lines) {
+    if (items.length >= JSON_BATCH) {
+      yield items;
+      items = [];
+    }
     line++;
     const text = line === 1 ? stripBom(raw) : raw;
     if (text.trim() === '') continue;
     if (!headerSent) {
       headerSent = true;
-      yield { kind: 'header', columns: [], source: { file, line } };
+      items.push({ kind: 'header', columns: [], source: { file, line } });
     }
     let parsed: unknown;
     try {
       parsed = JSON.parse(text);
     } catch (error) {
-      yield reject(file, line, 'bad_json', `the line is not valid JSON (${(error as Error).message}); each line must hold one JSON object`);
+      items.push(reject(file, line, 'bad_json', `the line is not valid JSON (${(error as Error).message}); each line must hold one JSON object`));
       continue;
     }
     const record = toRecord(parsed);
     if (!record) {
-      yield reject(file, line, 'bad_json', 'the line holds JSON that is not an object; each line must hold one JSON object such as {"person": …, "time": …, "text": …}');
+      items.push(reject(file, line, 'bad_json', 'the line holds JSON that is not an object; each line must hold one JSON object such as {"person": …, "time": …, "text": …}'));
       continue;
     }
     const problem = fieldProblem(Object.values(record), maxField);
     if (problem) {
-      yield reject(file, line, problem.code, problem.message);
+      items.push(reject(file, line, problem.code, problem.message));
       continue;
     }
-    yield { kind: 'record', record, source: { file, line } };
+    items.push({ kind: 'record', record, source: { file, line } });
   }
+  if (items.length > 0) yield items;
   if (!headerSent) throw inputError(`Cannot read \`${path}\`: the file holds no JSON lines; expected one JSON object per line.`);
 }
 
@@ -242,7 +264,7 @@ async function* readJsonLines(path: string, maxField: number): AsyncGenerator<Re
  * streamed without a streaming parser); prefer JSON Lines for large inputs. Line numbers are
  * the 1-based position of each element in the array.
  */
-async function* readJsonArray(path: string, maxField: number): AsyncGenerator<RecordItem> {
+async function* readJsonArray(path: string, maxField: number): AsyncGenerator<RecordItem[]> {
   const file = basename(path);
   const { readFile } = await import('node:fs/promises');
   const text = stripBom(await readFile(path, 'utf8'));
@@ -253,18 +275,23 @@ async function* readJsonArray(path: string, maxField: number): AsyncGenerator<Re
     throw inputError(`Cannot read \`${path}\`: not valid JSON (${(error as Error).message}); expected an array of objects, or use JSON Lines (.jsonl).`);
   }
   if (!Array.isArray(parsed)) throw inputError(`Cannot read \`${path}\`: the JSON is not an array; expected [ {…}, {…} ] with one object per entry.`);
-  yield { kind: 'header', columns: [], source: { file, line: 1 } };
+  let items: RecordItem[] = [{ kind: 'header', columns: [], source: { file, line: 1 } }];
   for (let i = 0; i < parsed.length; i++) {
+    if (items.length >= JSON_BATCH) {
+      yield items;
+      items = [];
+    }
     const record = toRecord(parsed[i]);
     if (!record) {
-      yield reject(file, i + 1, 'bad_json', `element ${i + 1} of the array is not an object; each element must be an object such as {"person": …, "time": …, "text": …}`);
+      items.push(reject(file, i + 1, 'bad_json', `element ${i + 1} of the array is not an object; each element must be an object such as {"person": …, "time": …, "text": …}`));
       continue;
     }
     const problem = fieldProblem(Object.values(record), maxField);
     if (problem) {
-      yield reject(file, i + 1, problem.code, problem.message);
+      items.push(reject(file, i + 1, problem.code, problem.message));
       continue;
     }
-    yield { kind: 'record', record, source: { file, line: i + 1 } };
+    items.push({ kind: 'record', record, source: { file, line: i + 1 } });
   }
+  yield items;
 }

@@ -4,7 +4,7 @@ import { stat } from 'node:fs/promises';
 import { basename } from 'node:path';
 import type { ColumnMapping } from '../ingest/column-mapping.js';
 import type { TimeOptions } from '../ingest/parse-instant.js';
-import { readEntries } from '../ingest/read-entries.js';
+import { readEntryBatches } from '../ingest/read-entries.js';
 import type { TableFormat } from '../ingest/read-records.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
@@ -82,6 +82,11 @@ const INFLIGHT_PER_WORKER = 128;
 
 /** Batches waiting per worker from which this thread takes over the VADER lexicons of a batch. */
 const VADER_HERE_AFTER = 2;
+
+/** An importer's items as batches of one, for the loop that reads table files in batches. */
+async function* oneByOne<T>(items: AsyncIterable<T>): AsyncGenerator<T[]> {
+  for await (const item of items) yield [item];
+}
 
 /** Where the rejects and the sidecar of a scores file go. */
 export function scoreSidecars(out: string): { rejects: string; meta: string } {
@@ -175,26 +180,29 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     };
     for (const input of options.inputs) {
       let rows = 0;
-      const items = input.items ? await input.items() : readEntries(input.path, { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: options.zones, time: options.time });
-      for await (const item of items) {
-        rows++;
-        reconciliation.read++;
-        if (reconciliation.read % 1000 === 0) options.onProgress?.(reconciliation.read);
-        if (item.kind === 'drop') {
-          reconciliation.dropped[item.reason] = (reconciliation.dropped[item.reason] ?? 0) + 1;
-          continue;
-        }
-        if (item.kind === 'reject') {
-          await addReject(item.diagnostic);
-          continue;
-        }
-        const entry = item.entry;
-        entry.person = mapPerson(entry.person);
-        options.onRawEntry?.(entry);
-        batch.push(entry);
-        if (batch.length >= BATCH_SIZE) {
-          submit();
-          await drain(maxInflight);
+      // Table files are read a chunk of rows at a time (one step of the event loop per chunk, not per row).
+      const batches = input.items ? oneByOne(await input.items()) : readEntryBatches(input.path, { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: options.zones, time: options.time });
+      for await (const items of batches) {
+        for (const item of items) {
+          rows++;
+          reconciliation.read++;
+          if (reconciliation.read % 1000 === 0) options.onProgress?.(reconciliation.read);
+          if (item.kind === 'drop') {
+            reconciliation.dropped[item.reason] = (reconciliation.dropped[item.reason] ?? 0) + 1;
+            continue;
+          }
+          if (item.kind === 'reject') {
+            await addReject(item.diagnostic);
+            continue;
+          }
+          const entry = item.entry;
+          entry.person = mapPerson(entry.person);
+          options.onRawEntry?.(entry);
+          batch.push(entry);
+          if (batch.length >= BATCH_SIZE) {
+            submit();
+            if (inflight.length > maxInflight) await drain(maxInflight);
+          }
         }
       }
       submit();
