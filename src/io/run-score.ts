@@ -11,7 +11,7 @@ import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { csvRow } from '../report/csv.js';
 import { scoreRowWriter, scoresHeader } from '../report/score-rows.js';
 import { scoreColumns, scoredEntryFrom, type ScoreColumn } from '../score/score-entry.js';
-import { mergeVaderColumns, scoreTexts, type BatchScores } from '../score/score-text.js';
+import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../score/score-text.js';
 import { autoWorkers, createScorePool, type ScorePool } from './score-pool.js';
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
@@ -133,6 +133,8 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     }
     pool = createScorePool(options.lexicons, workers as number);
     const hasVader = options.lexicons.some((l) => l.scoring === 'vader');
+    /** Per worker, the VADER tokens of the pieces it has sent (see scoreVaderInto). */
+    const vaderCaches: PieceWordCaches[] = [];
     // Entries are scored in batches and written in input order, by the workers when there are any
     // (at most INFLIGHT_PER_WORKER batches in flight per worker, so memory stays bounded), else in
     // this thread.
@@ -145,17 +147,16 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       batch = [];
       const texts = entries.map((e) => e.text);
       // When the workers fall behind (they tokenize, which costs most on text with many rare
-      // words), this thread scores the batch's VADER lexicons itself, from the text, while the
-      // workers score the rest. Either way the scores are the same (tested), so the file is too.
+      // words), this thread scores the batch's VADER lexicons itself, from the pieces the worker
+      // found (no second pass over the text), while the workers score the rest. Either way the
+      // scores are the same (tested), so the file is too.
       let scored: Promise<BatchScores>;
       if (!pool) scored = Promise.resolve(scoreTexts(texts, options.lexicons, columns.length));
-      else if (!hasVader || pool.queued() < VADER_HERE_AFTER * pool.size) scored = pool.score(texts);
+      else if (!hasVader || pool.queued() < VADER_HERE_AFTER * pool.size) scored = pool.score(texts).then((r) => r.scores);
       else {
-        const fromWorkers = pool.score(texts, 'rules');
-        const vader = scoreTexts(texts, options.lexicons, columns.length, 'vader');
-        scored = fromWorkers.then((batch) => {
-          mergeVaderColumns(batch, vader, options.lexicons);
-          return batch;
+        scored = pool.score(texts, 'rules').then(({ scores, worker }) => {
+          scoreVaderInto(scores, texts, options.lexicons, columns.length, (vaderCaches[worker] ??= new Map()));
+          return scores;
         });
       }
       inflight.push({ entries, scores: scored });

@@ -8,8 +8,8 @@ import type { BatchScores, ScorePart } from '../score/score-text.js';
 /** Scoring workers that score batches of texts in parallel, results in submission order per call. */
 export interface ScorePool {
   size: number;
-  /** Scores `part` of the lexicons (see scoreTextInto) for these texts. */
-  score(texts: string[], part?: ScorePart): Promise<BatchScores>;
+  /** Scores `part` of the lexicons (see scoreTextInto) for these texts; also says which worker did (0 … size − 1). */
+  score(texts: string[], part?: ScorePart): Promise<{ scores: BatchScores; worker: number }>;
   /** Batches sent to the workers and not yet returned. */
   queued(): number;
   close(): Promise<void>;
@@ -42,13 +42,13 @@ export function createScorePool(lexicons: readonly CompiledLexicon[], size: numb
   if (size <= 0 || !existsSync(fileURLToPath(script))) return undefined;
   const data = { lexicons: lexicons.map((l) => l.lexicon) };
   const workers = Array.from({ length: size }, () => new Worker(script, { workerData: data, resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB } }));
-  const pending = workers.map(() => new Map<number, { resolve: (b: BatchScores) => void; reject: (e: Error) => void }>());
+  const pending = workers.map(() => new Map<number, { resolve: (b: { scores: BatchScores; worker: number }) => void; reject: (e: Error) => void }>());
   let failure: Error | undefined;
   workers.forEach((worker, w) => {
     worker.on('message', (m: BatchScores & { id: number }) => {
       const p = pending[w]?.get(m.id);
       pending[w]?.delete(m.id);
-      p?.resolve({ values: m.values, matched: m.matched, negated: m.negated, words: m.words });
+      p?.resolve({ scores: { values: m.values, matched: m.matched, negated: m.negated, words: m.words, pieces: m.pieces }, worker: w });
     });
     worker.on('error', (raw) => {
       const error =
@@ -70,7 +70,7 @@ export function createScorePool(lexicons: readonly CompiledLexicon[], size: numb
       let w = 0;
       for (let k = 1; k < workers.length; k++) if ((pending[k]?.size ?? 0) < (pending[w]?.size ?? 0)) w = k;
       const id = next++;
-      return new Promise<BatchScores>((resolve, reject) => {
+      return new Promise<{ scores: BatchScores; worker: number }>((resolve, reject) => {
         pending[w]?.set(id, { resolve, reject });
         workers[w]?.postMessage({ id, texts, part });
       });

@@ -13,5 +13,7 @@ const columns = scoreColumns(lexicons).length;
 
 parentPort?.on('message', (message: { id: number; texts: string[]; part: ScorePart }) => {
   const out = scoreTexts(message.texts, lexicons, columns, message.part);
-  parentPort?.postMessage({ id: message.id, ...out }, [out.values.buffer as ArrayBuffer, out.matched.buffer as ArrayBuffer, out.negated.buffer as ArrayBuffer, out.words.buffer as ArrayBuffer]);
+  const transfer = [out.values.buffer as ArrayBuffer, out.matched.buffer as ArrayBuffer, out.negated.buffer as ArrayBuffer, out.words.buffer as ArrayBuffer];
+  if (out.pieces) transfer.push(out.pieces.serials.buffer as ArrayBuffer, out.pieces.starts.buffer as ArrayBuffer, out.pieces.counts.buffer as ArrayBuffer);
+  parentPort?.postMessage({ id: message.id, ...out }, transfer);
 });

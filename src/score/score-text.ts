@@ -1,8 +1,9 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
-import { tokenize, tokenizeEnglishShared, type Piece, type Tokens } from '../text/tokenize.js';
+import { SerialCache } from '../text/serial-cache.js';
+import { pieceSerialEpoch, tokenize, tokenizeEnglishShared, type Piece, type Tokens } from '../text/tokenize.js';
 import { matchLexicon, type LexiconMatch } from './match-lexicon.js';
-import { scoreColumns, VADER_COLUMNS } from './score-columns.js';
-import { scoreVader, scoreVaderPieces, type VaderScores } from './vader.js';
+import { VADER_COLUMNS } from './score-columns.js';
+import { scoreVader, scoreVaderPieces, scoreVaderSerials, type PieceWords, type VaderLexicon, type VaderScores } from './vader.js';
 
 /**
  * Scores of a batch of texts as flat typed arrays (row-major), the form the scoring workers send
@@ -15,6 +16,13 @@ export interface BatchScores {
   matched: Int32Array;
   negated: Int32Array;
   words: Int32Array;
+  /**
+   * For a batch scored without its VADER lexicons (part `rules`): the pieces of each text (see
+   * Piece.serial), so that the thread that scores VADER need not find them again. Text i has
+   * `counts[i]` pieces (−1: none were made, score VADER from the text), listed in order after
+   * those of the texts before it: serial in `serials`, offset in the text in `starts`.
+   */
+  pieces?: { serials: Int32Array; starts: Int32Array; counts: Int32Array; epoch: number };
 }
 
 /** Empty batch arrays for `n` texts. */
@@ -34,9 +42,10 @@ export function createBatchScores(n: number, columns: number, lexicons: number):
  * only other-language lexicons are used.
  *
  * `part` splits the work between threads: `rules` scores every lexicon but VADER (and counts
- * words), `vader` only the VADER lexicons (from the text itself: no tokenizing), `all` both.
+ * words; see scoreVaderInto for the rest), `all` every lexicon. Returns whether the text was
+ * tokenized in English (its pieces are then listed in `pieces` and `pieceStarts`).
  */
-export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): void {
+export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): boolean {
   let byLanguage: Map<string, Tokens> | undefined;
   let english: Tokens | undefined;
   let c = i * columns;
@@ -46,21 +55,15 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       // VADER splits the text its own way, but on whitespace only, so it can start from the
       // memoised pieces of the English tokens (see scoreVaderPieces).
       if (part === 'all') {
-        english ??= tokenizeEnglishShared(text, pieces);
+        english ??= tokenizeEnglishShared(text, pieces, pieceStarts);
         writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence));
-      } else if (part === 'vader') {
-        writeVader(out, c, scoreVader(text, lex.valence));
       }
       c += VADER_COLUMNS.length;
       continue;
     }
-    if (part === 'vader') {
-      c += lex.categories.length;
-      continue;
-    }
     let tokens: Tokens;
     if (isEnglish(lex.language)) {
-      tokens = english ??= tokenizeEnglishShared(text, pieces);
+      tokens = english ??= tokenizeEnglishShared(text, pieces, pieceStarts);
     } else {
       byLanguage ??= new Map();
       let t = byLanguage.get(lex.language);
@@ -79,9 +82,10 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       else out.values[c] = sum;
     }
   }
-  if (part === 'vader') return;
-  const counted = english ?? (byLanguage ? (byLanguage.values().next().value as Tokens) : tokenizeEnglishShared(text, pieces));
+  if (english === undefined && byLanguage === undefined) english = tokenizeEnglishShared(text, pieces, pieceStarts);
+  const counted = english ?? (byLanguage?.values().next().value as Tokens);
   out.words[i] = counted.nWords;
+  return english !== undefined;
 }
 
 function isEnglish(language: string): boolean {
@@ -101,11 +105,12 @@ function scratchFor(lexicon: CompiledLexicon): LexiconMatch {
   return m;
 }
 
-/** The memoised pieces of the text being scored (scoring is synchronous). */
+/** The memoised pieces of the text being scored and their offsets in it (scoring is synchronous). */
 const pieces: Piece[] = [];
+const pieceStarts: number[] = [];
 
-/** Which lexicons scoreTextInto scores: all, all but VADER (`rules`), or only VADER. */
-export type ScorePart = 'all' | 'rules' | 'vader';
+/** Which lexicons scoreTextInto scores: all, or all but VADER (`rules`). */
+export type ScorePart = 'all' | 'rules';
 
 /** VADER's four columns at `c` (NaN for a text without VADER tokens). */
 function writeVader(out: BatchScores, c: number, v: VaderScores): void {
@@ -116,18 +121,77 @@ function writeVader(out: BatchScores, c: number, v: VaderScores): void {
   out.values[c + 3] = has ? v.neg : NaN;
 }
 
-/** Scores a batch of texts (see scoreTextInto for `part`). */
+/**
+ * Scores a batch of texts (see scoreTextInto for `part`). Scored by part `rules` with VADER
+ * lexicons among `lexicons`, the batch also lists the pieces of its texts (BatchScores.pieces),
+ * for scoreVaderInto.
+ */
 export function scoreTexts(texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number, part: ScorePart = 'all'): BatchScores {
   const out = createBatchScores(texts.length, columns, lexicons.length);
-  for (let i = 0; i < texts.length; i++) scoreTextInto(texts[i] as string, lexicons, out, i, columns, part);
+  if (part !== 'rules' || !lexicons.some((l) => l.scoring === 'vader')) {
+    for (let i = 0; i < texts.length; i++) scoreTextInto(texts[i] as string, lexicons, out, i, columns, part);
+    return out;
+  }
+  const counts = new Int32Array(texts.length);
+  let serials = new Int32Array(64 * texts.length);
+  let starts = new Int32Array(64 * texts.length);
+  let n = 0;
+  for (let i = 0; i < texts.length; i++) {
+    if (!scoreTextInto(texts[i] as string, lexicons, out, i, columns, part)) {
+      counts[i] = -1;
+      continue;
+    }
+    counts[i] = pieces.length;
+    if (n + pieces.length > serials.length) {
+      const size = 2 * (n + pieces.length);
+      serials = grownTo(serials, size);
+      starts = grownTo(starts, size);
+    }
+    for (let k = 0; k < pieces.length; k++, n++) {
+      serials[n] = (pieces[k] as Piece).serial;
+      starts[n] = pieceStarts[k] as number;
+    }
+  }
+  out.pieces = { serials: serials.slice(0, n), starts: starts.slice(0, n), counts, epoch: pieceSerialEpoch() };
   return out;
 }
 
-/** Copies the VADER columns of `from` into `into` (batches of the same texts, scored by parts). */
-export function mergeVaderColumns(into: BatchScores, from: BatchScores, lexicons: readonly CompiledLexicon[]): void {
-  const columns = scoreColumns(lexicons);
-  const vader = columns.flatMap((column, k) => (column.aggregation === 'vader' ? [k] : []));
-  for (let row = 0; row < into.words.length * columns.length; row += columns.length) {
-    for (const k of vader) into.values[row + k] = from.values[row + k] as number;
+function grownTo(list: Int32Array<ArrayBuffer>, size: number): Int32Array<ArrayBuffer> {
+  const next = new Int32Array(size);
+  next.set(list);
+  return next;
+}
+
+/** Per VADER lexicon, the VADER tokens of the pieces one scoring thread has sent, by serial (see scoreVaderInto). */
+export type PieceWordCaches = Map<VaderLexicon, SerialCache<PieceWords>>;
+
+/**
+ * Fills the VADER columns of a batch that was scored by part `rules` (in another thread): from
+ * the pieces the batch lists, kept in `caches` by serial, or from the text itself where it lists
+ * none. The scores equal those of part `all` (tested).
+ */
+export function scoreVaderInto(batch: BatchScores, texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number, caches: PieceWordCaches): void {
+  const pieceList = batch.pieces;
+  let first = 0;
+  for (let i = 0; i < texts.length; i++) {
+    const text = texts[i] as string;
+    const count = pieceList ? (pieceList.counts[i] as number) : -1;
+    let c = i * columns;
+    for (const lex of lexicons) {
+      if (lex.scoring !== 'vader') {
+        c += lex.categories.length;
+        continue;
+      }
+      if (count < 0 || !pieceList) {
+        writeVader(batch, c, scoreVader(text, lex.valence));
+      } else {
+        let cache = caches.get(lex.valence);
+        if (cache === undefined) caches.set(lex.valence, (cache = new SerialCache<PieceWords>()));
+        cache.useEpoch(pieceList.epoch);
+        writeVader(batch, c, scoreVaderSerials(text, pieceList.serials, pieceList.starts, first, count, lex.valence, cache));
+      }
+      c += VADER_COLUMNS.length;
+    }
+    if (count > 0) first += count;
   }
 }

@@ -16,8 +16,9 @@ import {
   VADER_QUESTION_BOOST,
   VADER_QUESTION_BOOST_MAX,
 } from './vader-constants.js';
-import type { Piece } from '../text/tokenize.js';
-import { GenerationalTable, HASH_START, hashStep } from '../text/piece-table.js';
+import { pieceEnd, type Piece } from '../text/tokenize.js';
+import type { SerialCache } from '../text/serial-cache.js';
+import { detached, GenerationalTable, HASH_START, hashStep } from '../text/piece-table.js';
 import { isSpace, stripToken, vaderTokens } from './vader-tokens.js';
 
 /** A VADER lexicon: lower-case token → mean valence (−4 … +4). */
@@ -291,15 +292,48 @@ export function scoreVaderPieces(pieces: readonly Piece[], text: string, lexicon
   scratch.n = 0;
   for (let p = 0; p < pieces.length; p++) {
     const piece = pieces[p] as Piece;
-    let annotation = piece.annotationKey === lexicon ? (piece.annotation as VaderWord | VaderWord[]) : undefined;
+    let annotation = piece.annotationKey === lexicon ? (piece.annotation as PieceWords) : undefined;
     if (annotation === undefined) {
-      const list = vaderTokens(piece.text).map((w) => vaderWord(w, lexicon));
-      annotation = list.length === 1 ? (list[0] as VaderWord) : list;
+      annotation = pieceWords(piece.text, lexicon);
       piece.annotationKey = lexicon;
       piece.annotation = annotation;
     }
-    if (!Array.isArray(annotation)) pushWord(annotation);
-    else for (let k = 0; k < annotation.length; k++) pushWord(annotation[k] as VaderWord);
+    pushPieceWords(annotation);
+  }
+  return scoreScratch(text);
+}
+
+/** VADER's tokens of one piece of text: the VaderWord itself for one token (the usual case), else a list. */
+export type PieceWords = VaderWord | VaderWord[];
+
+function pieceWords(piece: string, lexicon: VaderLexicon): PieceWords {
+  const list = vaderTokens(piece).map((w) => vaderWord(w, lexicon));
+  return list.length === 1 ? (list[0] as VaderWord) : list;
+}
+
+function pushPieceWords(words: PieceWords): void {
+  if (!Array.isArray(words)) pushWord(words);
+  else for (let k = 0; k < words.length; k++) pushWord(words[k] as VaderWord);
+}
+
+/**
+ * scoreVaderPieces for a text whose pieces another thread found (see Piece.serial): pieces
+ * `from` … `from + count − 1` of `serials` and `starts` (their offsets in `text`). A piece's VADER
+ * tokens are kept in `cache` by its serial, and worked out from the text when the cache lacks
+ * them, so the scores equal scoreVader's whatever the cache holds (tested).
+ */
+export function scoreVaderSerials(text: string, serials: Int32Array, starts: Int32Array, from: number, count: number, lexicon: VaderLexicon, cache: SerialCache<PieceWords>): VaderScores {
+  scratch.n = 0;
+  for (let k = from; k < from + count; k++) {
+    const serial = serials[k] as number;
+    let words = cache.get(serial);
+    if (words === undefined) {
+      const start = starts[k] as number;
+      // A copy: words cut from the text itself would keep the whole text alive in the cache.
+      words = pieceWords(detached(text.slice(start, pieceEnd(text, start))), lexicon);
+      cache.set(serial, words);
+    }
+    pushPieceWords(words);
   }
   return scoreScratch(text);
 }

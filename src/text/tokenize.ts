@@ -204,6 +204,18 @@ function isBreakChar(c: number): boolean {
   return c === 0x0a || c === 0x0d || c === 0x09;
 }
 
+/** Where the piece of `text` that starts at `start` ends (see tokenizeEnglishInto): at the next separator, or after a run of tabs and line breaks. */
+export function pieceEnd(text: string, start: number): number {
+  const n = text.length;
+  let k = start;
+  if (k < n && isBreakChar(text.charCodeAt(k))) {
+    while (k < n && isBreakChar(text.charCodeAt(k))) k++;
+    return k;
+  }
+  while (k < n && !isSpaceChar(text.charCodeAt(k)) && !isBreakChar(text.charCodeAt(k))) k++;
+  return k;
+}
+
 /**
  * Our tokens of a piece in one reading, laid out for the loop that copies them into a text's
  * tokens: a piece of one token (most pieces) holds it in its own fields, so copying it reads one
@@ -228,6 +240,12 @@ export interface PieceReading {
  */
 export interface Piece extends PieceReading {
   text: string;
+  /**
+   * A number given to this piece when it was read, never given to another piece read by this
+   * thread (until pieceSerialEpoch() changes): lets another thread that sees only the text and
+   * the serial keep what it works out for the piece (see SerialCache).
+   */
+  serial: number;
   /**
    * Our tokens of the piece right after a tab or line break, when they differ: a first token such
    * as `'em` then attaches to the token before and counts no word.
@@ -303,11 +321,29 @@ function mayAttach(first: string | undefined): boolean {
   return c === 0x27 || c === 0x2019 || ((c === 0x6e || c === 0x4e) && first.length === 3 && /^n['’]t$/i.test(first));
 }
 
+/** Serials of pieces (see Piece.serial): the next one, and how often they started again from 0. */
+let nextSerial = 0;
+let serialEpoch = 0;
+const MAX_SERIAL = 0x3fffffff;
+
+function takeSerial(): number {
+  if (nextSerial > MAX_SERIAL) {
+    nextSerial = 0;
+    serialEpoch++;
+  }
+  return nextSerial++;
+}
+
+/** Changes when piece serials start again from 0 (after about a billion pieces): a serial means a piece only together with its epoch. */
+export function pieceSerialEpoch(): number {
+  return serialEpoch;
+}
+
 /** A piece read by wink (see readPiece), with our tokens of it after spaces and, where they differ, after a break. */
 function newPiece(piece: string): Piece {
   const wink = readPiece(piece);
   const tokens = withIds({ norm: [], raw: [], kind: [], nWords: 0 }, wink, true);
-  const made: Piece = { text: piece, ...readingOf(tokens), afterBreak: undefined, annotationKey: undefined, annotation: undefined };
+  const made: Piece = { text: piece, serial: takeSerial(), ...readingOf(tokens), afterBreak: undefined, annotationKey: undefined, annotation: undefined };
   if (!mayAttach(wink.values[0])) return made;
   // After a break the token before is a tab or line break, a control character, and no
   // character joins a control character into one grapheme (Unicode UAX #29, rules GB4 and
@@ -358,18 +394,22 @@ const shared: Tokens = { norm: [], raw: [], kind: [], nWords: 0, ids: [], genera
  * with the tokens of a text before it tokenizes the next one (the scoring loop), it saves four
  * arrays per text. The tokens are valid until the next call.
  */
-export function tokenizeEnglishShared(text: string, pieces?: Piece[]): Tokens {
-  return tokenizeEnglishInto(shared, text, pieces);
+export function tokenizeEnglishShared(text: string, pieces?: Piece[], starts?: number[]): Tokens {
+  return tokenizeEnglishInto(shared, text, pieces, starts);
 }
 
-/** Tokenizes `text` into `out`, overwriting what it held (see tokenizeEnglishPieces). */
-function tokenizeEnglishInto(out: Tokens, text: string, pieces: Piece[] | undefined): Tokens {
+/**
+ * Tokenizes `text` into `out`, overwriting what it held (see tokenizeEnglishPieces); with
+ * `starts`, also the offset in `text` of each piece listed in `pieces`.
+ */
+function tokenizeEnglishInto(out: Tokens, text: string, pieces: Piece[] | undefined, starts?: number[]): Tokens {
   if (ids.size >= IDS_LIMIT) clearTokenMemo();
   const { norm, raw, kind } = out;
   const idList = out.ids as number[];
   out.generation = generation;
   out.nWords = 0;
   if (pieces) pieces.length = 0;
+  if (starts) starts.length = 0;
   const n = text.length;
   let m = 0; // tokens written
   let spaced = false;
@@ -392,6 +432,7 @@ function tokenizeEnglishInto(out: Tokens, text: string, pieces: Piece[] | undefi
     } while (breaks ? isBreakChar(c) : !isSpaceChar(c) && !isBreakChar(c));
     const memoised = memo.get(text, start, k, hash, newPiece);
     pieces?.push(memoised);
+    starts?.push(start);
     // Right after a tab or line break the first token may attach to it (see Piece.afterBreak).
     const t: PieceReading = !spaced && m > 0 && memoised.afterBreak !== undefined ? memoised.afterBreak : memoised;
     const all = t.all;

@@ -4,23 +4,100 @@ import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { loadLexicons } from '../../src/io/load-lexicon.js';
 import { scoreColumns } from '../../src/score/score-columns.js';
-import { mergeVaderColumns, scoreTexts } from '../../src/score/score-text.js';
+import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../../src/score/score-text.js';
+import { SerialCache } from '../../src/text/serial-cache.js';
+import type { PieceWords } from '../../src/score/vader.js';
+
+const lexiconsPromise = loadLexicons(['afinn-165', 'vader', 'daily-constructs']);
+const demo = Papa.parse<{ text: string }>(readFileSync(resolve(__dirname, '../../demo-data/messages.csv'), 'utf8'), { header: true, skipEmptyLines: true }).data.map((r) => r.text);
+// Edge cases of how wink's pieces and VADER's tokens line up: VADER splits on every JavaScript
+// whitespace character (some of which wink keeps inside a piece), drops one-character tokens,
+// strips punctuation; a piece over 256 characters is not memoised; runs of line breaks are pieces.
+const edges = [
+  'good\u2028bad day',
+  'so\u3000happy\u1680today!!',
+  'not\tbad\n\n\nat all',
+  'I am a b c ok',
+  `${'x'.repeat(300)} great ${'y'.repeat(300)}great`,
+  '"good," she said (funny) :) BUT sad',
+  'kind of nice, the least bad',
+];
+
+function vaderColumnsOf(batch: BatchScores, columns: number, vader: number[]): number[] {
+  const out: number[] = [];
+  for (let row = 0; row < batch.words.length; row++) for (const k of vader) out.push(batch.values[row * columns + k] as number);
+  return out;
+}
 
 describe('scoreTexts by parts (how the reading thread and the workers share a batch)', () => {
-  it('the `rules` part with the `vader` part merged in equals `all`, on the demo messages', async () => {
-    const lexicons = await loadLexicons(['afinn-165', 'vader', 'daily-constructs']);
-    const columns = scoreColumns(lexicons).length;
-    const rows = Papa.parse<{ text: string }>(readFileSync(resolve(__dirname, '../../demo-data/messages.csv'), 'utf8'), { header: true, skipEmptyLines: true }).data;
-    const texts = rows.slice(0, 1500).map((r) => r.text);
+  it('the `rules` part, with scoreVaderInto from the pieces it lists, equals `all` on the demo messages and edge cases, whatever the cache holds', async () => {
+    const lexicons = await lexiconsPromise;
+    const layout = scoreColumns(lexicons);
+    const columns = layout.length;
+    const vader = layout.flatMap((c, k) => (c.aggregation === 'vader' ? [k] : []));
+    const texts = [...edges, ...demo.slice(0, 1500), ...edges];
     const all = scoreTexts(texts, lexicons, columns);
     const rules = scoreTexts(texts, lexicons, columns, 'rules');
-    const vader = scoreTexts(texts, lexicons, columns, 'vader');
-    // Before merging, the rules part leaves the VADER columns unscored (0) and the vader part everything else.
-    const vaderColumn = scoreColumns(lexicons).findIndex((c) => c.name === 'vader.compound');
-    expect(rules.values[vaderColumn]).toBe(0);
-    expect(vader.words.every((w) => w === 0)).toBe(true);
-    mergeVaderColumns(rules, vader, lexicons);
-    expect(rules).toEqual(all);
-    expect(all.values.some((v, k) => k % columns === vaderColumn && v !== 0 && !Number.isNaN(v))).toBe(true);
+    // Before, the rules part leaves the VADER columns unscored (0) and lists every text's pieces.
+    expect(vader.every((k) => rules.values[k] === 0)).toBe(true);
+    expect(rules.pieces?.counts.every((n) => n > 0)).toBe(true);
+    // An empty cache, the same cache again (every piece found), a tiny cache (pieces keep
+    // displacing one another), and a cache of another serial epoch (emptied first).
+    const caches: PieceWordCaches = new Map();
+    const tiny: PieceWordCaches = new Map([[lexicons[1]!.valence, new SerialCache<PieceWords>(16)]]);
+    const stale = new SerialCache<PieceWords>(1 << 17);
+    stale.set(rules.pieces!.serials[0]!, { raw: 'awful', valence: -3.4, boost: 0, flags: 1 });
+    stale.useEpoch(rules.pieces!.epoch + 1);
+    stale.set(rules.pieces!.serials[0]!, { raw: 'awful', valence: -3.4, boost: 0, flags: 1 });
+    const epochs: PieceWordCaches = new Map([[lexicons[1]!.valence, stale]]);
+    for (const cache of [caches, caches, tiny, epochs]) {
+      const batch: BatchScores = { ...rules, values: rules.values.slice() };
+      scoreVaderInto(batch, texts, lexicons, columns, cache);
+      expect(batch.values).toEqual(all.values);
+    }
+    expect(vaderColumnsOf(all, columns, vader).some((v) => v !== 0 && !Number.isNaN(v))).toBe(true);
+  });
+
+  it('scores VADER from the text itself for texts that list no pieces', async () => {
+    const lexicons = await lexiconsPromise;
+    const columns = scoreColumns(lexicons).length;
+    const texts = [...edges, ...demo.slice(0, 200)];
+    const all = scoreTexts(texts, lexicons, columns);
+    const rules = scoreTexts(texts, lexicons, columns, 'rules');
+    const pieces = rules.pieces!;
+    // Texts 0 and 2 listed no pieces (as when only other-language lexicons tokenize them).
+    let skip = 0;
+    const keep: number[] = [];
+    for (let i = 0; i < texts.length; i++) {
+      const n = pieces.counts[i]!;
+      if (i !== 0 && i !== 2) for (let k = 0; k < n; k++) keep.push(skip + k);
+      skip += n;
+    }
+    const counts = pieces.counts.slice();
+    counts[0] = -1;
+    counts[2] = -1;
+    const batch: BatchScores = { ...rules, pieces: { serials: Int32Array.from(keep, (k) => pieces.serials[k]!), starts: Int32Array.from(keep, (k) => pieces.starts[k]!), counts, epoch: pieces.epoch } };
+    scoreVaderInto(batch, texts, lexicons, columns, new Map());
+    expect(batch.values).toEqual(all.values);
+    delete batch.pieces;
+    batch.values.fill(0);
+    scoreVaderInto(batch, texts, lexicons, columns, new Map());
+    for (let k = 0; k < batch.values.length; k++) if (scoreColumns(lexicons)[k % columns]!.aggregation === 'vader') expect(batch.values[k]).toBe(all.values[k]);
+  });
+});
+
+describe('SerialCache', () => {
+  it('keeps a value by serial, lets a newer serial of the same slot take its place, and empties on a new epoch', () => {
+    const cache = new SerialCache<string>(16);
+    cache.set(3, 'three');
+    expect(cache.get(3)).toBe('three');
+    expect(cache.get(19)).toBeUndefined(); // same slot (19 mod 16), other serial
+    cache.set(19, 'nineteen');
+    expect(cache.get(3)).toBeUndefined();
+    expect(cache.get(19)).toBe('nineteen');
+    cache.useEpoch(0);
+    expect(cache.get(19)).toBe('nineteen');
+    cache.useEpoch(1);
+    expect(cache.get(19)).toBeUndefined();
   });
 });
