@@ -2,7 +2,10 @@ import { Option, type Command } from 'commander';
 import { inputError, usageError } from '../errors.js';
 import { loadLexicons } from '../io/load-lexicon.js';
 import { readZoneFile } from '../io/read-zone-file.js';
-import { runScore } from '../io/run-score.js';
+import { runScore, scoreWorkerCount } from '../io/run-score.js';
+import { startScorePool } from '../io/score-pool.js';
+import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
+import type { ZoneTable } from '../ingest/zone-table.js';
 import { readNamesFile } from '../io/read-names-file.js';
 import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
 import { createRedactor } from '../privacy/create-redactor.js';
@@ -43,11 +46,21 @@ export function registerScore(program: Command): void {
     const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
     const redact = createRedactor({ names: await readNamesFile(opts.redactNames as string | undefined) });
     const limit = opts.strict ? { count: 0 } : parseMaxRejects(String(opts.maxRejects));
-    const lexicons = await loadLexicons((opts.lexicon as string[] | undefined) ?? ['afinn-165', 'vader']);
-    const zones = await readZoneFile(opts.zones as string | undefined, opts.timeZone as string | undefined);
+    const scoreInputs = inputs.map((path) => ({ path, columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) }));
+    // The scoring threads start now and load wink-nlp's model while this thread loads the lexicons.
+    const pool = startScorePool(await scoreWorkerCount(scoreInputs, parseWorkers(String(opts.workers))));
+    let lexicons: CompiledLexicon[];
+    let zones: ZoneTable;
+    try {
+      lexicons = await loadLexicons((opts.lexicon as string[] | undefined) ?? ['afinn-165', 'vader']);
+      zones = await readZoneFile(opts.zones as string | undefined, opts.timeZone as string | undefined);
+    } catch (error) {
+      await pool?.close();
+      throw error;
+    }
     const progress = progressReporter('scored');
     const result = await runScore({
-      inputs: inputs.map((path) => ({ path, columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) })),
+      inputs: scoreInputs,
       lexicons,
       zones,
       time: timeOptionsFrom(opts),
@@ -56,6 +69,7 @@ export function registerScore(program: Command): void {
       redact,
       ...(key ? { person: (id: string) => pseudonymizePerson(id, key) } : {}),
       workers: parseWorkers(String(opts.workers)),
+      pool,
       onProgress: progress.update,
     }).finally(progress.stop);
     process.stderr.write(`${reconciliationText(result.reconciliation)}\n`);

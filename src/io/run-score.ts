@@ -15,7 +15,7 @@ import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } fr
 import { autoWorkers, createScorePool, type ScorePool } from './score-pool.js';
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
-import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
+import { openAtomicLineWriter, writeFileAtomic, type AtomicLineWriter } from './atomic-write.js';
 
 /** One input file with how to read it. */
 export interface ScoreInput {
@@ -45,6 +45,12 @@ export interface RunScoreOptions {
   onProgress?: (rows: number) => void;
   /** Scoring workers: a number (0 = score in this thread) or `auto` (the default: by input size and cores). */
   workers?: number | 'auto';
+  /**
+   * Workers already started (startScorePool with scoreWorkerCount's number), used instead of
+   * `workers`: a caller that starts them before loading the lexicons saves their start-up time.
+   * runScore sends them the lexicons and stops them when done.
+   */
+  pool?: ScorePool;
   /** Also receives each scored entry. */
   onEntry?: (entry: ScoredEntry) => void;
   /** Also receives each entry with its text, after pseudonymization and before scoring (for the term audit of `run`). */
@@ -88,6 +94,14 @@ async function* oneByOne<T>(items: AsyncIterable<T>): AsyncGenerator<T[]> {
   for await (const item of items) yield [item];
 }
 
+/** The number of scoring workers for `workers` (`auto`: by the inputs' total size and the cores). */
+export async function scoreWorkerCount(inputs: readonly ScoreInput[], workers: number | 'auto' = 'auto'): Promise<number> {
+  if (workers !== 'auto') return workers;
+  let bytes = 0;
+  for (const input of inputs) bytes += await stat(input.path).then((s) => s.size, () => 0);
+  return autoWorkers(bytes);
+}
+
 /** Where the rejects and the sidecar of a scores file go. */
 export function scoreSidecars(out: string): { rejects: string; meta: string } {
   const stem = out.replace(/\.csv$/i, '');
@@ -111,13 +125,20 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
   const columns = scoreColumns(options.lexicons);
   const keepText = options.keepText === true;
   const sidecars = scoreSidecars(options.out);
-  const scores = await openAtomicLineWriter(options.out);
-  const rejects = await openAtomicLineWriter(sidecars.rejects);
+  let pool: ScorePool | undefined = options.pool;
+  let scores: AtomicLineWriter;
+  let rejects: AtomicLineWriter;
+  try {
+    scores = await openAtomicLineWriter(options.out);
+    rejects = await openAtomicLineWriter(sidecars.rejects);
+  } catch (error) {
+    await pool?.close();
+    throw error;
+  }
   const reconciliation: Reconciliation = { read: 0, scored: 0, rejected: {}, dropped: {} };
   const inputs: InputRecord[] = [];
   const mapPerson = options.person ?? ((id: string) => id);
   const formatRow = scoreRowWriter(columns, options.lexicons, keepText);
-  let pool: ScorePool | undefined;
   try {
     await scores.write(csvRow(scoresHeader(columns, options.lexicons, keepText)));
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
@@ -125,13 +146,8 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       reconciliation.rejected[d.code] = (reconciliation.rejected[d.code] ?? 0) + 1;
       await rejects.write(csvRow([d.source?.file ?? '', String(d.source?.line ?? ''), d.stage, d.code, d.message]));
     };
-    let workers = options.workers ?? 0;
-    if (options.workers === undefined || options.workers === 'auto') {
-      let bytes = 0;
-      for (const input of options.inputs) bytes += await stat(input.path).then((s) => s.size, () => 0);
-      workers = autoWorkers(bytes);
-    }
-    pool = createScorePool(options.lexicons, workers as number);
+    if (pool) pool.setLexicons(options.lexicons);
+    else pool = createScorePool(options.lexicons, await scoreWorkerCount(options.inputs, options.workers));
     const hasVader = options.lexicons.some((l) => l.scoring === 'vader');
     /** Per worker, the VADER tokens of the pieces it has sent (see scoreVaderInto). */
     const vaderCaches: PieceWordCaches[] = [];

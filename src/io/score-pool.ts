@@ -12,6 +12,8 @@ export interface ScorePool {
   score(texts: string[], part?: ScorePart): Promise<{ scores: BatchScores; worker: number }>;
   /** Batches sent to the workers and not yet returned. */
   queued(): number;
+  /** Sends the workers the lexicons to score with; called once, before the first batch (see startScorePool). */
+  setLexicons(lexicons: readonly CompiledLexicon[]): void;
   close(): Promise<void>;
 }
 
@@ -38,10 +40,20 @@ export function autoWorkers(inputBytes: number, cores = availableParallelism()):
  * as in unit tests): the caller then scores in process, with identical results.
  */
 export function createScorePool(lexicons: readonly CompiledLexicon[], size: number): ScorePool | undefined {
+  const pool = startScorePool(size);
+  pool?.setLexicons(lexicons);
+  return pool;
+}
+
+/**
+ * Starts `size` scoring workers before the lexicons are known, so that they load wink-nlp's model
+ * while this thread loads the lexicons; setLexicons must be called before the first batch. As
+ * createScorePool otherwise.
+ */
+export function startScorePool(size: number): ScorePool | undefined {
   const script = new URL('./score-worker.js', import.meta.url);
   if (size <= 0 || !existsSync(fileURLToPath(script))) return undefined;
-  const data = { lexicons: lexicons.map((l) => l.lexicon) };
-  const workers = Array.from({ length: size }, () => new Worker(script, { workerData: data, resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB } }));
+  const workers = Array.from({ length: size }, () => new Worker(script, { resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB } }));
   const pending = workers.map(() => new Map<number, { resolve: (b: { scores: BatchScores; worker: number }) => void; reject: (e: Error) => void }>());
   let failure: Error | undefined;
   workers.forEach((worker, w) => {
@@ -64,6 +76,10 @@ export function createScorePool(lexicons: readonly CompiledLexicon[], size: numb
   return {
     size,
     queued: () => pending.reduce((sum, p) => sum + p.size, 0),
+    setLexicons(lexicons) {
+      const data = { lexicons: lexicons.map((l) => l.lexicon) };
+      for (const worker of workers) worker.postMessage(data);
+    },
     score(texts, part = 'all') {
       if (failure) return Promise.reject(failure);
       // the least busy worker takes the batch

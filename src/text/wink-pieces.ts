@@ -122,6 +122,11 @@ function loadPieceReader(): PieceReader {
 /** Bits of a token's second number (wink-nlp src/its.js): preceding spaces below, a contraction's normal above. */
 const SPACES_MASK = 0xffff;
 
+/** Loads wink's model and tokenizer now rather than at the first piece (a scoring thread does this while it waits for work). */
+export function preparePieceReader(): void {
+  reader ??= loadPieceReader();
+}
+
 /** wink's tokens of one piece of text (no spaces, or one run of tabs and line breaks), as a freshly loaded wink-nlp reads it. */
 export function readPiece(text: string): WinkTokens {
   reader ??= loadPieceReader();

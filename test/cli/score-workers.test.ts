@@ -40,6 +40,14 @@ describe('scoring threads', () => {
     expect(readFileSync(tmp.path('w3.csv'), 'utf8')).toBe(w0);
   });
 
+  it('stops the threads it started when a lexicon cannot be loaded (the command ends with its message instead of hanging)', () => {
+    tmp.write('one.csv', 'id,person,time,text\ne1,p1,2026-03-01T08:00:00+01:00,fine\n');
+    const r = spawnSync(process.execPath, [bin, 'score', tmp.path('one.csv'), '--time-zone', 'UTC', '-l', 'no-such-lexicon', '--workers', '2', '-o', tmp.path('none.csv')], { encoding: 'utf8', timeout: 30_000 });
+    expect(r.error).toBeUndefined();
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('no-such-lexicon');
+  });
+
   it('rejects a --workers value that is not auto or a small whole number', () => {
     const r = spawnSync(process.execPath, [bin, 'score', 'x.csv', '--time-zone', 'UTC', '--workers', 'many', '-o', tmp.path('x.csv')], { encoding: 'utf8' });
     expect(r.status).toBe(2);
