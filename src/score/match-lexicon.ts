@@ -105,7 +105,7 @@ function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon, known: Ans
     if (start.phrases) {
       for (const phrase of start.phrases) {
         const n = phrase.tokens.length;
-        if (i + n > tokens.norm.length) continue;
+        if (i + n > (tokens.size ?? tokens.norm.length)) continue;
         let ok = true;
         for (let k = 1; k < n; k++) {
           if (tokens.norm[i + k] !== phrase.tokens[k]) {
@@ -171,7 +171,7 @@ export function matchLexicon(tokens: Tokens, lexicon: CompiledLexicon, onHit?: H
     counts = new Int32Array(nc);
   }
   let negated = 0;
-  const n = tokens.norm.length;
+  const n = tokens.size ?? tokens.norm.length;
   const hasNegation = lexicon.negation !== 'ignore' || lexicon.window > 0;
   // Answers by token id when the tokens carry ids of the current generation; else by text.
   const known = tokens.ids !== undefined && tokens.generation === tokenGeneration() ? answersOf(lexicon, tokens.generation) : undefined;

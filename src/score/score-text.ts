@@ -56,7 +56,7 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       // memoised pieces of the English tokens (see scoreVaderPieces).
       if (part === 'all') {
         english ??= tokenizeEnglishShared(text, pieces, pieceStarts);
-        writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence));
+        writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence, english.pieceCount));
       }
       c += VADER_COLUMNS.length;
       continue;
@@ -85,6 +85,7 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
   if (english === undefined && byLanguage === undefined) english = tokenizeEnglishShared(text, pieces, pieceStarts);
   const counted = english ?? (byLanguage?.values().next().value as Tokens);
   out.words[i] = counted.nWords;
+  piecesListed = english?.pieceCount ?? 0;
   return english !== undefined;
 }
 
@@ -105,9 +106,13 @@ function scratchFor(lexicon: CompiledLexicon): LexiconMatch {
   return m;
 }
 
-/** The memoised pieces of the text being scored and their offsets in it (scoring is synchronous). */
+/**
+ * The memoised pieces of the text being scored and their offsets in it (scoring is synchronous):
+ * the first `piecesListed` entries (see tokenizeEnglishShared).
+ */
 const pieces: Piece[] = [];
 const pieceStarts: number[] = [];
+let piecesListed = 0;
 
 /** Which lexicons scoreTextInto scores: all, or all but VADER (`rules`). */
 export type ScorePart = 'all' | 'rules';
@@ -141,13 +146,14 @@ export function scoreTexts(texts: readonly string[], lexicons: readonly Compiled
       counts[i] = -1;
       continue;
     }
-    counts[i] = pieces.length;
-    if (n + pieces.length > serials.length) {
-      const size = 2 * (n + pieces.length);
+    const count = piecesListed;
+    counts[i] = count;
+    if (n + count > serials.length) {
+      const size = 2 * (n + count);
       serials = grownTo(serials, size);
       starts = grownTo(starts, size);
     }
-    for (let k = 0; k < pieces.length; k++, n++) {
+    for (let k = 0; k < count; k++, n++) {
       serials[n] = (pieces[k] as Piece).serial;
       starts[n] = pieceStarts[k] as number;
     }

@@ -284,13 +284,13 @@ const TOKEN_CACHE_LIMIT = 60_000;
 /**
  * scoreVader for a text given as its memoised pieces (see tokenizeEnglishPieces): VADER splits
  * on every whitespace character, which includes every separator of the pieces, so the VADER
- * tokens of the text are those of its pieces in order. Each piece keeps its VADER tokens for
+ * tokens of the text are those of its pieces in order (the first `count` of `pieces`). Each piece keeps its VADER tokens for
  * `lexicon` in its annotation slot (the VaderWord itself for a piece of one token, the usual
  * case; else a list), so a recurring piece is split and looked up once.
  */
-export function scoreVaderPieces(pieces: readonly Piece[], text: string, lexicon: VaderLexicon): VaderScores {
+export function scoreVaderPieces(pieces: readonly Piece[], text: string, lexicon: VaderLexicon, count = pieces.length): VaderScores {
   scratch.n = 0;
-  for (let p = 0; p < pieces.length; p++) {
+  for (let p = 0; p < count; p++) {
     const piece = pieces[p] as Piece;
     let annotation = piece.annotationKey === lexicon ? (piece.annotation as PieceWords) : undefined;
     if (annotation === undefined) {

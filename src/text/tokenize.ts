@@ -29,6 +29,13 @@ export interface Tokens {
    */
   ids?: number[];
   generation?: number;
+  /**
+   * The number of tokens when the arrays are reused from text to text and may be longer (see
+   * tokenizeEnglishShared); otherwise undefined and the arrays hold exactly the tokens.
+   */
+  size?: number;
+  /** With tokenizeEnglishShared's piece lists: how many of their entries belong to this text. */
+  pieceCount?: number;
 }
 
 type Nlp = ReturnType<typeof winkNLP>;
@@ -387,12 +394,14 @@ export function tokenizeEnglishPieces(text: string, pieces?: Piece[]): Tokens {
 }
 
 /** The Tokens that tokenizeEnglishShared fills, text after text. */
-const shared: Tokens = { norm: [], raw: [], kind: [], nWords: 0, ids: [], generation };
+const shared: Tokens = { norm: [], raw: [], kind: [], nWords: 0, ids: [], generation, size: 0, pieceCount: 0 };
 
 /**
  * tokenizeEnglishPieces into one Tokens object that every call refills: for a caller that is done
- * with the tokens of a text before it tokenizes the next one (the scoring loop), it saves four
- * arrays per text. The tokens are valid until the next call.
+ * with the tokens of a text before it tokenizes the next one (the scoring loop), it saves
+ * allocating arrays per text. The arrays are never shortened, so they may hold stale tokens
+ * past `size` (the number of tokens of this text), and the first `pieceCount` entries of
+ * `pieces` and `starts` are this text's. Valid until the next call.
  */
 export function tokenizeEnglishShared(text: string, pieces?: Piece[], starts?: number[]): Tokens {
   return tokenizeEnglishInto(shared, text, pieces, starts);
@@ -408,9 +417,8 @@ function tokenizeEnglishInto(out: Tokens, text: string, pieces: Piece[] | undefi
   const idList = out.ids as number[];
   out.generation = generation;
   out.nWords = 0;
-  if (pieces) pieces.length = 0;
-  if (starts) starts.length = 0;
   const n = text.length;
+  let p = 0; // pieces listed
   let m = 0; // tokens written
   let spaced = false;
   let k = 0;
@@ -431,8 +439,9 @@ function tokenizeEnglishInto(out: Tokens, text: string, pieces: Piece[] | undefi
       c = text.charCodeAt(k);
     } while (breaks ? isBreakChar(c) : !isSpaceChar(c) && !isBreakChar(c));
     const memoised = memo.get(text, start, k, hash, newPiece);
-    pieces?.push(memoised);
-    starts?.push(start);
+    if (pieces) pieces[p] = memoised;
+    if (starts) starts[p] = start;
+    p++;
     // Right after a tab or line break the first token may attach to it (see Piece.afterBreak).
     const t: PieceReading = !spaced && m > 0 && memoised.afterBreak !== undefined ? memoised.afterBreak : memoised;
     const all = t.all;
@@ -453,11 +462,13 @@ function tokenizeEnglishInto(out: Tokens, text: string, pieces: Piece[] | undefi
     out.nWords += t.nWords;
     spaced = false;
   }
-  if (norm.length !== m) {
-    norm.length = m;
-    raw.length = m;
-    kind.length = m;
-    idList.length = m;
+  if (out.size !== undefined) {
+    // Reused arrays keep their length (shortening them would make the next longer text grow them again).
+    out.size = m;
+    out.pieceCount = p;
+  } else {
+    if (pieces) pieces.length = p;
+    if (starts) starts.length = p;
   }
   return out;
 }
