@@ -138,8 +138,6 @@ export function scoreTexts(texts: readonly string[], lexicons: readonly Compiled
     return out;
   }
   const counts = new Int32Array(texts.length);
-  let serials = new Int32Array(64 * texts.length);
-  let starts = new Int32Array(64 * texts.length);
   let n = 0;
   for (let i = 0; i < texts.length; i++) {
     if (!scoreTextInto(texts[i] as string, lexicons, out, i, columns, part)) {
@@ -148,19 +146,22 @@ export function scoreTexts(texts: readonly string[], lexicons: readonly Compiled
     }
     const count = piecesListed;
     counts[i] = count;
-    if (n + count > serials.length) {
-      const size = 2 * (n + count);
-      serials = grownTo(serials, size);
-      starts = grownTo(starts, size);
+    if (n + count > serialBuffer.length) {
+      serialBuffer = grownTo(serialBuffer, 2 * (n + count));
+      startBuffer = grownTo(startBuffer, 2 * (n + count));
     }
     for (let k = 0; k < count; k++, n++) {
-      serials[n] = (pieces[k] as Piece).serial;
-      starts[n] = pieceStarts[k] as number;
+      serialBuffer[n] = (pieces[k] as Piece).serial;
+      startBuffer[n] = pieceStarts[k] as number;
     }
   }
-  out.pieces = { serials: serials.slice(0, n), starts: starts.slice(0, n), counts, epoch: pieceSerialEpoch() };
+  out.pieces = { serials: serialBuffer.slice(0, n), starts: startBuffer.slice(0, n), counts, epoch: pieceSerialEpoch() };
   return out;
 }
+
+/** Where scoreTexts lists the pieces of a batch before copying them out (reused: it only grows). */
+let serialBuffer = new Int32Array(8192);
+let startBuffer = new Int32Array(8192);
 
 function grownTo(list: Int32Array<ArrayBuffer>, size: number): Int32Array<ArrayBuffer> {
   const next = new Int32Array(size);
