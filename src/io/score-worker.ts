@@ -7,7 +7,7 @@ import { parentPort } from 'node:worker_threads';
 import { compileLexicon, type CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import type { Lexicon } from '../lexicon/lexicon-types.js';
 import { scoreColumns } from '../score/score-columns.js';
-import { scoreTexts, type ScorePart } from '../score/score-text.js';
+import { batchBuffers, scoreTexts, type ScorePart } from '../score/score-text.js';
 import { preparePieceReader } from '../text/wink-pieces.js';
 
 let lexicons: CompiledLexicon[] = [];
@@ -20,9 +20,7 @@ parentPort?.on('message', (message: { lexicons: Lexicon[] } | { id: number; text
     return;
   }
   const out = scoreTexts(message.texts, lexicons, columns, message.part);
-  const transfer = [out.values.buffer as ArrayBuffer, out.matched.buffer as ArrayBuffer, out.negated.buffer as ArrayBuffer, out.words.buffer as ArrayBuffer];
-  if (out.pieces) transfer.push(out.pieces.serials.buffer as ArrayBuffer, out.pieces.starts.buffer as ArrayBuffer, out.pieces.counts.buffer as ArrayBuffer);
-  parentPort?.postMessage({ id: message.id, ...out }, transfer);
+  parentPort?.postMessage({ id: message.id, ...out }, batchBuffers(out));
 });
 
 // The model takes a fifth of a second to load: done while the reading thread loads the lexicons

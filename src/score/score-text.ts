@@ -25,9 +25,28 @@ export interface BatchScores {
   pieces?: { serials: Int32Array; starts: Int32Array; counts: Int32Array; epoch: number };
 }
 
-/** Empty batch arrays for `n` texts. */
+/**
+ * Empty batch arrays for `n` texts, views of one ArrayBuffer (one allocation, and one buffer to
+ * transfer between threads: see batchBuffers).
+ */
 export function createBatchScores(n: number, columns: number, lexicons: number): BatchScores {
-  return { values: new Float64Array(n * columns), matched: new Int32Array(n * columns), negated: new Int32Array(n * lexicons), words: new Int32Array(n) };
+  const buffer = new ArrayBuffer(8 * n * columns + 4 * (n * columns + n * lexicons + n));
+  let at = 0;
+  const values = new Float64Array(buffer, at, n * columns);
+  at += 8 * n * columns;
+  const matched = new Int32Array(buffer, at, n * columns);
+  at += 4 * n * columns;
+  const negated = new Int32Array(buffer, at, n * lexicons);
+  at += 4 * n * lexicons;
+  return { values, matched, negated, words: new Int32Array(buffer, at, n) };
+}
+
+/** The distinct ArrayBuffers under a batch's arrays: what a thread transfers when it sends the batch. */
+export function batchBuffers(batch: BatchScores): ArrayBuffer[] {
+  const buffers = new Set<ArrayBuffer>();
+  for (const list of [batch.values, batch.matched, batch.negated, batch.words]) buffers.add(list.buffer as ArrayBuffer);
+  if (batch.pieces) for (const list of [batch.pieces.serials, batch.pieces.starts, batch.pieces.counts]) buffers.add(list.buffer as ArrayBuffer);
+  return [...buffers];
 }
 
 /**
@@ -155,7 +174,10 @@ export function scoreTexts(texts: readonly string[], lexicons: readonly Compiled
       startBuffer[n] = pieceStarts[k] as number;
     }
   }
-  out.pieces = { serials: serialBuffer.slice(0, n), starts: startBuffer.slice(0, n), counts, epoch: pieceSerialEpoch() };
+  const listed = new Int32Array(2 * n);
+  listed.set(serialBuffer.subarray(0, n));
+  listed.set(startBuffer.subarray(0, n), n);
+  out.pieces = { serials: listed.subarray(0, n), starts: listed.subarray(n), counts, epoch: pieceSerialEpoch() };
   return out;
 }
 
