@@ -48,7 +48,8 @@ export function registerScore(program: Command): void {
     const limit = opts.strict ? { count: 0 } : parseMaxRejects(String(opts.maxRejects));
     const scoreInputs = inputs.map((path) => ({ path, columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) }));
     // The scoring threads start now and load wink-nlp's model while this thread loads the lexicons.
-    const pool = startScorePool(await scoreWorkerCount(scoreInputs, parseWorkers(String(opts.workers))));
+    const workers = await scoreWorkerCount(scoreInputs, parseWorkers(String(opts.workers)));
+    const pool = startScorePool(workers);
     let lexicons: CompiledLexicon[];
     let zones: ZoneTable;
     try {
@@ -68,7 +69,7 @@ export function registerScore(program: Command): void {
       keepText: opts.keepText === true && opts.aggregatesOnly !== true,
       redact,
       ...(key ? { person: (id: string) => pseudonymizePerson(id, key) } : {}),
-      workers: parseWorkers(String(opts.workers)),
+      workers,
       pool,
       onProgress: progress.update,
     }).finally(progress.stop);

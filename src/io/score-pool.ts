@@ -57,10 +57,10 @@ export function startScorePool(size: number): ScorePool | undefined {
   const pending = workers.map(() => new Map<number, { resolve: (b: { scores: BatchScores; worker: number }) => void; reject: (e: Error) => void }>());
   let failure: Error | undefined;
   workers.forEach((worker, w) => {
-    worker.on('message', (m: BatchScores & { id: number }) => {
-      const p = pending[w]?.get(m.id);
-      pending[w]?.delete(m.id);
-      p?.resolve({ scores: { values: m.values, matched: m.matched, negated: m.negated, words: m.words, pieces: m.pieces }, worker: w });
+    worker.on('message', ({ id, ...scores }: BatchScores & { id: number }) => {
+      const p = pending[w]?.get(id);
+      pending[w]?.delete(id);
+      p?.resolve({ scores, worker: w });
     });
     worker.on('error', (raw) => {
       const error =

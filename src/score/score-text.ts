@@ -61,10 +61,11 @@ export function batchBuffers(batch: BatchScores): ArrayBuffer[] {
  * only other-language lexicons are used.
  *
  * `part` splits the work between threads: `rules` scores every lexicon but VADER (and counts
- * words; see scoreVaderInto for the rest), `all` every lexicon. Returns whether the text was
- * tokenized in English (its pieces are then listed in `pieces` and `pieceStarts`).
+ * words; see scoreVaderInto for the rest), `all` every lexicon. Returns how many pieces the text
+ * was split into by the English tokenizer (listed in the first entries of `pieces` and
+ * `pieceStarts`), or −1 when it was not tokenized in English.
  */
-export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): boolean {
+export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): number {
   let byLanguage: Map<string, Tokens> | undefined;
   let english: Tokens | undefined;
   let c = i * columns;
@@ -104,8 +105,7 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
   if (english === undefined && byLanguage === undefined) english = tokenizeEnglishShared(text, pieces, pieceStarts);
   const counted = english ?? (byLanguage?.values().next().value as Tokens);
   out.words[i] = counted.nWords;
-  piecesListed = english?.pieceCount ?? 0;
-  return english !== undefined;
+  return english === undefined ? -1 : (english.pieceCount as number);
 }
 
 function isEnglish(language: string): boolean {
@@ -127,11 +127,10 @@ function scratchFor(lexicon: CompiledLexicon): LexiconMatch {
 
 /**
  * The memoised pieces of the text being scored and their offsets in it (scoring is synchronous):
- * the first `piecesListed` entries (see tokenizeEnglishShared).
+ * the first entries, as many as scoreTextInto returns (see tokenizeEnglishShared).
  */
 const pieces: Piece[] = [];
 const pieceStarts: number[] = [];
-let piecesListed = 0;
 
 /** Which lexicons scoreTextInto scores: all, or all but VADER (`rules`). */
 export type ScorePart = 'all' | 'rules';
@@ -159,12 +158,9 @@ export function scoreTexts(texts: readonly string[], lexicons: readonly Compiled
   const counts = new Int32Array(texts.length);
   let n = 0;
   for (let i = 0; i < texts.length; i++) {
-    if (!scoreTextInto(texts[i] as string, lexicons, out, i, columns, part)) {
-      counts[i] = -1;
-      continue;
-    }
-    const count = piecesListed;
+    const count = scoreTextInto(texts[i] as string, lexicons, out, i, columns, part);
     counts[i] = count;
+    if (count < 0) continue;
     if (n + count > serialBuffer.length) {
       serialBuffer = grownTo(serialBuffer, 2 * (n + count));
       startBuffer = grownTo(startBuffer, 2 * (n + count));
@@ -201,24 +197,28 @@ export type PieceWordCaches = Map<VaderLexicon, SerialCache<PieceWords>>;
  */
 export function scoreVaderInto(batch: BatchScores, texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number, caches: PieceWordCaches): void {
   const pieceList = batch.pieces;
+  // Per lexicon: its VADER cache for this batch's serials, or undefined for a rules lexicon.
+  const vaderCaches = lexicons.map((lex) => {
+    if (lex.scoring !== 'vader' || !pieceList) return undefined;
+    let cache = caches.get(lex.valence);
+    if (cache === undefined) caches.set(lex.valence, (cache = new SerialCache<PieceWords>()));
+    cache.useEpoch(pieceList.epoch);
+    return cache;
+  });
   let first = 0;
   for (let i = 0; i < texts.length; i++) {
     const text = texts[i] as string;
     const count = pieceList ? (pieceList.counts[i] as number) : -1;
     let c = i * columns;
-    for (const lex of lexicons) {
+    for (let l = 0; l < lexicons.length; l++) {
+      const lex = lexicons[l] as CompiledLexicon;
       if (lex.scoring !== 'vader') {
         c += lex.categories.length;
         continue;
       }
-      if (count < 0 || !pieceList) {
-        writeVader(batch, c, scoreVader(text, lex.valence));
-      } else {
-        let cache = caches.get(lex.valence);
-        if (cache === undefined) caches.set(lex.valence, (cache = new SerialCache<PieceWords>()));
-        cache.useEpoch(pieceList.epoch);
-        writeVader(batch, c, scoreVaderSerials(text, pieceList.serials, pieceList.starts, first, count, lex.valence, cache));
-      }
+      const cache = vaderCaches[l];
+      if (count < 0 || !pieceList || !cache) writeVader(batch, c, scoreVader(text, lex.valence));
+      else writeVader(batch, c, scoreVaderSerials(text, pieceList.serials, pieceList.starts, first, count, lex.valence, cache));
       c += VADER_COLUMNS.length;
     }
     if (count > 0) first += count;
