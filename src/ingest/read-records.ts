@@ -2,6 +2,8 @@ import { createReadStream } from 'node:fs';
 import { open } from 'node:fs/promises';
 import { basename, extname } from 'node:path';
 import { createInterface } from 'node:readline';
+import { Readable } from 'node:stream';
+import { StringDecoder } from 'node:string_decoder';
 import Papa from 'papaparse';
 import { inputError, usageError } from '../errors.js';
 import type { Diagnostic, SourceRef } from '../types.js';
@@ -16,6 +18,11 @@ export interface ReadRecordsOptions {
   delimiter?: string;
   /** Longest accepted field in characters; longer rows are rejected with `field_too_long`. Default 1,000,000. */
   maxFieldLength?: number;
+  /**
+   * Called with the file's bytes as they are read, in order (all of them once the reading has
+   * ended without an error): lets a caller take the file's digest from the same read.
+   */
+  onBytes?: (bytes: Buffer) => void;
 }
 
 /** One row read from a table, with its source line, or the reason it was rejected. */
@@ -65,9 +72,31 @@ export async function* readRecordBatches(path: string, options: ReadRecordsOptio
   }
   await assertReadable(path);
   const maxField = options.maxFieldLength ?? DEFAULT_MAX_FIELD;
-  if (format === 'jsonl') yield* readJsonLines(path, maxField);
-  else if (format === 'json') yield* readJsonArray(path, maxField);
-  else yield* readDelimited(path, format === 'tsv' ? (options.delimiter ?? '\t') : (options.delimiter ?? ','), maxField);
+  const onBytes = options.onBytes;
+  if (format === 'jsonl') yield* readJsonLines(path, maxField, onBytes);
+  else if (format === 'json') yield* readJsonArray(path, maxField, onBytes);
+  else yield* readDelimited(path, format === 'tsv' ? (options.delimiter ?? '\t') : (options.delimiter ?? ','), maxField, onBytes);
+}
+
+/**
+ * The text of a file in chunks as it is read (UTF-8; a character split between chunks is
+ * joined, invalid bytes become U+FFFD, as for a stream read with encoding `utf8`), handing the
+ * bytes to `onBytes` on the way.
+ */
+async function* readTextChunks(path: string, onBytes: ((bytes: Buffer) => void) | undefined): AsyncGenerator<string> {
+  const stream = createReadStream(path, { highWaterMark: 1 << 16 });
+  const decoder = new StringDecoder('utf8');
+  try {
+    for await (const bytes of stream as AsyncIterable<Buffer>) {
+      onBytes?.(bytes);
+      const text = decoder.write(bytes);
+      if (text !== '') yield text;
+    }
+    const rest = decoder.end();
+    if (rest !== '') yield rest;
+  } finally {
+    stream.destroy();
+  }
 }
 
 /** Items per batch of the JSON readers. */
@@ -132,9 +161,9 @@ export function guessLineBreak(text: string, final = false): '\n' | '\r' | '\r\n
  * synchronously and the unfinished last row is carried into the next batch. A carried row is
  * parsed again only once the buffer has doubled, so a long quoted field costs linear time.
  */
-async function* readDelimited(path: string, delimiter: string, maxField: number): AsyncGenerator<RecordItem[]> {
+async function* readDelimited(path: string, delimiter: string, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
   const file = basename(path);
-  const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: 1 << 16 });
+  const chunks = readTextChunks(path, onBytes);
   let header: string[] | undefined;
   let line = 1;
   let newline: '\n' | '\r' | '\r\n' | undefined;
@@ -179,7 +208,7 @@ async function* readDelimited(path: string, delimiter: string, maxField: number)
   }
 
   try {
-    for await (const chunk of stream as AsyncIterable<string>) {
+    for await (const chunk of chunks) {
       pending += first ? stripBom(chunk) : chunk;
       first = false;
       newline ??= guessLineBreak(pending);
@@ -202,7 +231,7 @@ async function* readDelimited(path: string, delimiter: string, maxField: number)
     }
     if (!header) throw inputError(`Cannot read \`${path}\`: the file is empty; expected a header row and at least one data row.`);
   } finally {
-    stream.destroy();
+    await chunks.return(undefined);
   }
 }
 
@@ -218,9 +247,9 @@ function toRecord(value: unknown): Record<string, string> | undefined {
 }
 
 /** Reads JSON Lines: one object per line; blank lines are skipped, bad lines rejected. */
-async function* readJsonLines(path: string, maxField: number): AsyncGenerator<RecordItem[]> {
+async function* readJsonLines(path: string, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
   const file = basename(path);
-  const lines = createInterface({ input: createReadStream(path, { encoding: 'utf8' }), crlfDelay: Infinity });
+  const lines = createInterface({ input: Readable.from(readTextChunks(path, onBytes)), crlfDelay: Infinity });
   let line = 0;
   let headerSent = false;
   let items: RecordItem[] = [];
@@ -264,10 +293,12 @@ async function* readJsonLines(path: string, maxField: number): AsyncGenerator<Re
  * streamed without a streaming parser); prefer JSON Lines for large inputs. Line numbers are
  * the 1-based position of each element in the array.
  */
-async function* readJsonArray(path: string, maxField: number): AsyncGenerator<RecordItem[]> {
+async function* readJsonArray(path: string, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
   const file = basename(path);
   const { readFile } = await import('node:fs/promises');
-  const text = stripBom(await readFile(path, 'utf8'));
+  const bytes = await readFile(path);
+  onBytes?.(bytes);
+  const text = stripBom(bytes.toString('utf8'));
   let parsed: unknown;
   try {
     parsed = JSON.parse(text);

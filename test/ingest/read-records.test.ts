@@ -1,3 +1,5 @@
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { guessLineBreak, readRecords, type RecordItem } from '../../src/ingest/read-records.js';
 import { collect, tempFolder } from '../support/temp-files.js';
@@ -169,6 +171,36 @@ describe('readRecords reads JSON Lines and JSON arrays', () => {
 
   it('throws when a .json file is not an array', async () => {
     await expect(read('obj.json', '{"person":"p1"}')).rejects.toThrow(/not an array/);
+  });
+});
+
+describe('readRecords hands the bytes it reads to onBytes', () => {
+  // 8 + 2 + 65,524 bytes before the emoji: its four bytes straddle the end of the first 64 KiB chunk.
+  const straddle = 'id,text\n1,' + 'a'.repeat(65524) + '\u{1F600} ok\n2,fine\n';
+
+  it('gives every byte once, in order, and decodes a character split between chunks whole', async () => {
+    const seen: Buffer[] = [];
+    const path = tmp.write('straddle.csv', straddle);
+    const items = await collect(readRecords(path, { onBytes: (b: Buffer) => seen.push(b) }));
+    expect(seen.length).toBeGreaterThan(1);
+    expect(Buffer.concat(seen).equals(readFileSync(path))).toBe(true);
+    expect(rejects(items)).toEqual([]);
+    expect(records(items).map((r) => r.text?.slice(-5))).toEqual(['\u{1F600} ok', 'fine']);
+    // Reference: `sha256sum` (GNU coreutils 9) of the same 65,549 bytes.
+    expect(createHash('sha256').update(Buffer.concat(seen)).digest('hex')).toBe('23981b71703658cdae17321a075938360039fa5aa92ae3a6124fea337f35e0fa');
+  });
+
+  it('does so for JSON Lines and JSON arrays too', async () => {
+    for (const [name, content] of [
+      ['b.jsonl', '{"person":"p1","text":"caf\u00e9 \u{1F600}"}\n{"person":"p2","text":"x"}\n'],
+      ['b.json', '[{"person":"p1","text":"caf\u00e9"}]'],
+    ] as const) {
+      const seen: Buffer[] = [];
+      const path = tmp.write(name, content);
+      const items = await collect(readRecords(path, { onBytes: (b: Buffer) => seen.push(b) }));
+      expect(Buffer.concat(seen).equals(readFileSync(path)), name).toBe(true);
+      expect(records(items)[0]?.text, name).toMatch(/^café/);
+    }
   });
 });
 
