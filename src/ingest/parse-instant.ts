@@ -38,6 +38,92 @@ function parseOffset(text: string): number {
   return sign * (Number(digits.slice(0, 2)) * 60 + Number(digits.slice(2, 4) || '0'));
 }
 
+/** The fields of an RFC 3339 date-time as read (not yet checked for range); offset in minutes, undefined when absent. */
+interface DateTimeFields {
+  year: number;
+  month: number;
+  day: number;
+  hour: number;
+  minute: number;
+  second: number;
+  /** The digits after the decimal mark, or undefined. */
+  fraction: string | undefined;
+  offset: number | undefined;
+}
+
+/** The fields of `value` by the RFC3339 pattern (the general reader), or undefined when it does not match. */
+function regexFields(value: string): DateTimeFields | undefined {
+  const m = RFC3339.exec(value);
+  if (!m) return undefined;
+  return {
+    year: Number(m[1]),
+    month: Number(m[2]),
+    day: Number(m[3]),
+    hour: Number(m[4] ?? 0),
+    minute: Number(m[5] ?? 0),
+    second: Number(m[6] ?? 0),
+    fraction: m[7] || undefined,
+    offset: m[8] !== undefined ? parseOffset(m[8]) : undefined,
+  };
+}
+
+/** The value of the ASCII digits of `text` from `start` to `end` (exclusive), or −1 when one is not a digit. */
+function digitsAt(text: string, start: number, end: number): number {
+  let n = 0;
+  for (let k = start; k < end; k++) {
+    const d = text.charCodeAt(k) - 48; // NaN past the end
+    if (!(d >= 0 && d <= 9)) return -1;
+    n = n * 10 + d;
+  }
+  return n;
+}
+
+/**
+ * The fields of the most common form, `YYYY-MM-DDTHH:MM:SS`, with an optional fraction and an
+ * optional `Z` or `±hh:mm` / `±hhmm` / `±hh` offset right after, read without the regular
+ * expression (most files write every time this way); undefined for anything else, which
+ * regexFields then reads. Accepts exactly what RFC3339 accepts for these forms (tested).
+ */
+function commonFields(value: string): DateTimeFields | undefined {
+  const n = value.length;
+  if (n < 19 || value.charCodeAt(4) !== 45 || value.charCodeAt(7) !== 45 || value.charCodeAt(13) !== 58 || value.charCodeAt(16) !== 58) return undefined;
+  const t = value.charCodeAt(10);
+  if (t !== 84 && t !== 116 && t !== 32) return undefined; // T, t or a space
+  const year = digitsAt(value, 0, 4);
+  const month = digitsAt(value, 5, 7);
+  const day = digitsAt(value, 8, 10);
+  const hour = digitsAt(value, 11, 13);
+  const minute = digitsAt(value, 14, 16);
+  const second = digitsAt(value, 17, 19);
+  if (year < 0 || month < 0 || day < 0 || hour < 0 || minute < 0 || second < 0) return undefined;
+  let k = 19;
+  let fraction: string | undefined;
+  if (k < n && (value.charCodeAt(k) === 46 || value.charCodeAt(k) === 44)) {
+    let end = k + 1;
+    while (end < n && end - k <= 9 && digitsAt(value, end, end + 1) >= 0) end++;
+    if (end === k + 1) return undefined;
+    fraction = value.slice(k + 1, end);
+    k = end;
+  }
+  let offset: number | undefined;
+  if (k < n) {
+    const c = value.charCodeAt(k);
+    if ((c === 90 || c === 122) && k + 1 === n) offset = 0; // Z or z
+    else if (c === 43 || c === 45) {
+      const sign = c === 45 ? -1 : 1;
+      const hours = digitsAt(value, k + 1, k + 3);
+      const rest = n - (k + 3);
+      let minutes = 0;
+      if (rest === 3 && value.charCodeAt(k + 3) === 58) minutes = digitsAt(value, k + 4, k + 6);
+      else if (rest === 2) minutes = digitsAt(value, k + 3, k + 5);
+      else if (rest !== 0) return undefined;
+      if (hours < 0 || minutes < 0) return undefined;
+      offset = sign * (hours * 60 + minutes);
+    } else return undefined;
+  }
+  return { year, month, day, hour, minute, second, fraction, offset };
+}
+
 function bad(value: string, what: string): InstantResult {
   return { ok: false, code: 'bad_time', message: `cannot read the time \`${value.slice(0, 60)}\`: ${what}` };
 }
@@ -63,21 +149,16 @@ export function parseInstant(raw: string, zone: string, options: TimeOptions = D
     const ms = options.epoch === 'ms' || (options.epoch === 'auto' && digits >= 12) ? n : n * 1000;
     return { ok: true, instant: Math.round(ms), offsetMinutes: zoneOffset(zone, Math.round(ms)), hadOffset: true };
   }
-  const m = RFC3339.exec(value);
-  if (m) {
-    const year = Number(m[1]);
-    const month = Number(m[2]);
-    const day = Number(m[3]);
-    const hour = Number(m[4] ?? 0);
-    const minute = Number(m[5] ?? 0);
-    const second = Number(m[6] ?? 0);
-    const fraction = m[7] ? Math.round(Number(`0.${m[7]}`) * 1000) : 0;
+  const f = commonFields(value) ?? regexFields(value);
+  if (f) {
+    const { year, month, day, hour, minute, second } = f;
+    const fraction = f.fraction !== undefined ? Math.round(Number(`0.${f.fraction}`) * 1000) : 0;
     if (month < 1 || month > 12) return bad(value, `month ${month} is not 1–12`);
     if (day < 1 || day > daysInMonth(year, month)) return bad(value, `day ${day} does not exist in ${year}-${String(month).padStart(2, '0')}`);
     if (hour > 23 || minute > 59 || second > 60) return bad(value, 'the clock time is out of range (hours 00–23, minutes 00–59, seconds 00–60)');
     const wall = Date.UTC(year, month - 1, day, hour, minute, second, fraction);
-    if (m[8] !== undefined) {
-      const offset = parseOffset(m[8]);
+    if (f.offset !== undefined) {
+      const offset = f.offset;
       if (Math.abs(offset) >= 24 * 60) return bad(value, 'the UTC offset is out of range');
       return { ok: true, instant: wall - offset * 60000, offsetMinutes: offset, hadOffset: true };
     }

@@ -48,6 +48,15 @@ describe('parseInstant reads the RFC 3339 section 5.8 examples', () => {
     expect(instant(parseInstant('1985-04-12 23:20:50.52Z', 'UTC'))).toBe(482196050520);
   });
 
+  it('reads the ISO 8601 decimal comma, basic ±hhmm and hour-only ±hh offsets, and rounds fractions to milliseconds (ISO 8601-1:2019 §4.2.2.4, §4.2.5.1; worked by hand)', () => {
+    expect(parseInstant('2026-03-01T08:00:00,5-05', 'UTC')).toEqual({ ok: true, instant: Date.UTC(2026, 2, 1, 13, 0, 0, 500), offsetMinutes: -300, hadOffset: true });
+    expect(parseInstant('2026-03-01T08:00:00.123456789+0130', 'UTC')).toEqual({ ok: true, instant: Date.UTC(2026, 2, 1, 6, 30, 0, 123), offsetMinutes: 90, hadOffset: true });
+    expect(instant(parseInstant('2026-03-01T08:00:00.9996Z', 'UTC'))).toBe(Date.UTC(2026, 2, 1, 8, 0, 1, 0));
+    for (const broken of ['2026-03-01T08:00:00.Z', '2026-03-01T08:00:00Zx', '2026-03-01T08:00:00+1', '2026-03-01T08:00:00+01:0', '2026-03-01T08:0a:00Z']) {
+      expect(parseInstant(broken, 'UTC'), broken).toMatchObject({ ok: false, code: 'bad_time' });
+    }
+  });
+
   it('rejects impossible dates and clock times with bad_time', () => {
     expect(parseInstant('2026-02-29T10:00:00Z', 'UTC')).toMatchObject({ ok: false, code: 'bad_time', message: expect.stringContaining('day 29 does not exist in 2026-02') });
     expect(parseInstant('2026-13-01T10:00:00Z', 'UTC')).toMatchObject({ ok: false, code: 'bad_time' });
