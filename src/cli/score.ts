@@ -1,9 +1,6 @@
 import { Option, type Command } from 'commander';
 import { inputError, usageError } from '../errors.js';
-import { loadLexicons } from '../io/load-lexicon.js';
-import { readZoneFile } from '../io/read-zone-file.js';
-import { runScore, scoreWorkerCount } from '../io/run-score.js';
-import { startScorePool } from '../io/score-pool.js';
+import { scoreWorkerCount, startScorePool } from '../io/score-pool.js';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import { readNamesFile } from '../io/read-names-file.js';
@@ -47,14 +44,18 @@ export function registerScore(program: Command): void {
     const redact = createRedactor({ names: await readNamesFile(opts.redactNames as string | undefined) });
     const limit = opts.strict ? { count: 0 } : parseMaxRejects(String(opts.maxRejects));
     const scoreInputs = inputs.map((path) => ({ path, columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) }));
-    // The scoring threads start now and load wink-nlp's model while this thread loads the lexicons.
-    const workers = await scoreWorkerCount(scoreInputs, parseWorkers(String(opts.workers)));
+    // The scoring threads start now and load wink-nlp's model while this thread loads the code
+    // that reads and scores (imported only now, for that reason) and the lexicons.
+    const workers = await scoreWorkerCount(inputs, parseWorkers(String(opts.workers)));
     const pool = startScorePool(workers);
     let lexicons: CompiledLexicon[];
     let zones: ZoneTable;
+    let runScore: typeof import('../io/run-score.js').runScore;
     try {
-      lexicons = await loadLexicons((opts.lexicon as string[] | undefined) ?? ['afinn-165', 'vader']);
-      zones = await readZoneFile(opts.zones as string | undefined, opts.timeZone as string | undefined);
+      const [score, lexiconLoader, zoneReader] = await Promise.all([import('../io/run-score.js'), import('../io/load-lexicon.js'), import('../io/read-zone-file.js')]);
+      runScore = score.runScore;
+      lexicons = await lexiconLoader.loadLexicons((opts.lexicon as string[] | undefined) ?? ['afinn-165', 'vader']);
+      zones = await zoneReader.readZoneFile(opts.zones as string | undefined, opts.timeZone as string | undefined);
     } catch (error) {
       await pool?.close();
       throw error;

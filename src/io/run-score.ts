@@ -12,7 +12,7 @@ import { csvRow } from '../report/csv.js';
 import { scoreRowWriter, scoresHeader } from '../report/score-rows.js';
 import { scoreColumns, scoredEntryFrom, type ScoreColumn } from '../score/score-entry.js';
 import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../score/score-text.js';
-import { autoWorkers, createScorePool, type ScorePool } from './score-pool.js';
+import { createScorePool, scoreWorkerCount, type ScorePool } from './score-pool.js';
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
 import { openAtomicLineWriter, writeFileAtomic, type AtomicLineWriter } from './atomic-write.js';
@@ -94,14 +94,6 @@ async function* oneByOne<T>(items: AsyncIterable<T>): AsyncGenerator<T[]> {
   for await (const item of items) yield [item];
 }
 
-/** The number of scoring workers for `workers` (`auto`: by the inputs' total size and the cores). */
-export async function scoreWorkerCount(inputs: readonly ScoreInput[], workers: number | 'auto' = 'auto'): Promise<number> {
-  if (workers !== 'auto') return workers;
-  let bytes = 0;
-  for (const input of inputs) bytes += await stat(input.path).then((s) => s.size, () => 0);
-  return autoWorkers(bytes);
-}
-
 /** Where the rejects and the sidecar of a scores file go. */
 export function scoreSidecars(out: string): { rejects: string; meta: string } {
   const stem = out.replace(/\.csv$/i, '');
@@ -147,7 +139,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       await rejects.write(csvRow([d.source?.file ?? '', String(d.source?.line ?? ''), d.stage, d.code, d.message]));
     };
     if (pool) pool.setLexicons(options.lexicons);
-    else pool = createScorePool(options.lexicons, await scoreWorkerCount(options.inputs, options.workers));
+    else pool = createScorePool(options.lexicons, await scoreWorkerCount(options.inputs.map((input) => input.path), options.workers));
     const hasVader = options.lexicons.some((l) => l.scoring === 'vader');
     /** Per worker, the VADER tokens of the pieces it has sent (see scoreVaderInto). */
     const vaderCaches: PieceWordCaches[] = [];

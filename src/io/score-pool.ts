@@ -1,4 +1,5 @@
 import { existsSync } from 'node:fs';
+import { stat } from 'node:fs/promises';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
@@ -32,6 +33,14 @@ const WORKER_HEAP_MB = 512;
 export function autoWorkers(inputBytes: number, cores = availableParallelism()): number {
   if (inputBytes < AUTO_WORKERS_MIN_BYTES || cores < 2) return 0;
   return Math.min(cores - 1, 4);
+}
+
+/** The number of scoring workers for `workers` (`auto`: by the total size of the input files and the cores). */
+export async function scoreWorkerCount(paths: readonly string[], workers: number | 'auto' = 'auto'): Promise<number> {
+  if (workers !== 'auto') return workers;
+  let bytes = 0;
+  for (const path of paths) bytes += await stat(path).then((s) => s.size, () => 0);
+  return autoWorkers(bytes);
 }
 
 /**
