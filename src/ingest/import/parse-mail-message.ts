@@ -35,9 +35,11 @@ function truncation(raw: Buffer, bodyStart: number | undefined, contentType: str
  *
  * 1. From (RFC 5322 section 3.6.2) is parsed with parseAddressList; a message whose From holds
  *    none of the participant's addresses is dropped as `third_party` before its body is decoded.
- * 2. Date (section 3.6.1) is read with parseMailDate, keeping its offset: missing → `mail_no_date`,
+ * 2. A cut-off message (no end of headers, or a multipart body without its closing boundary) →
+ *    `mail_truncated`, before the Date is looked at: a header section cut off in or before its
+ *    Date line would otherwise be reported as a bad or missing date.
+ * 3. Date (section 3.6.1) is read with parseMailDate, keeping its offset: missing → `mail_no_date`,
  *    unreadable → `mail_bad_date`.
- * 3. A cut-off message (no end of headers, or a multipart body without its closing boundary) → `mail_truncated`.
  * 4. The body is decoded by mailparser (MIME per RFC 2045–2049, quoted-printable and base64, charsets,
  *    RFC 2047 encoded words); text/plain is preferred, otherwise mailparser's text rendering of the HTML.
  *    Double-encoded UTF-8 is repaired; replacement characters are noted (`undecodable_bytes`).
@@ -50,12 +52,12 @@ export async function parseMailMessage(raw: Buffer, context: MailContext): Promi
   if (from === undefined) return importReject(file, line, 'mail_no_from', 'the message has no From header, so its sender is unknown');
   const senders = parseAddressList(from).map((m) => normalizeAddress(m.address));
   if (!senders.some((address) => context.addresses.has(address))) return { kind: 'drop', reason: 'third_party', source: { file, line } };
+  const cut = truncation(raw, block.bodyStart, mailHeader(block, 'content-type'));
+  if (cut) return importReject(file, line, 'mail_truncated', cut);
   const dateValue = mailHeader(block, 'date');
   if (dateValue === undefined) return importReject(file, line, 'mail_no_date', 'the message has no Date header, so its time is unknown');
   const date = parseMailDate(dateValue);
   if (!date.ok) return importReject(file, line, date.code, date.message);
-  const cut = truncation(raw, block.bodyStart, mailHeader(block, 'content-type'));
-  if (cut) return importReject(file, line, 'mail_truncated', cut);
   let text: string;
   try {
     const parsed = await simpleParser(raw, { skipImageLinks: true, skipTextLinks: true, skipTextToHtml: true, keepCidLinks: true });

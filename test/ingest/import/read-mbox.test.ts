@@ -100,6 +100,11 @@ describe('readMbox keeps the participant\'s own messages only', () => {
     const cutHeaders = 'From ann@example.org Mon Mar  3 09:00:00 2025\nFrom: ann@example.org\nDate: Mon, 3 Mar 2025 09:30:00 +0100\nSubj';
     const cutMultipart = message('ann@example.org', 'Mon, 3 Mar 2025 09:40:00 +0100', '--XX\nContent-Type: text/plain\n\nhalf a mess', 'MIME-Version: 1.0\nContent-Type: multipart/mixed; boundary=XX\n').trimEnd();
     expect(codes(await read(good, cutHeaders))).toEqual(['mail_truncated']);
+    // Cut off inside the Date line, or before it: the message is truncated, not badly dated or undated.
+    const cutInDate = 'From ann@example.org Mon Mar  3 09:00:00 2025\nFrom: ann@example.org\nDate: Mon, 3 Mar 20';
+    const cutBeforeDate = 'From ann@example.org Mon Mar  3 09:00:00 2025\nFrom: ann@example.org\nSubj';
+    expect(codes(await read(good, cutInDate))).toEqual(['mail_truncated']);
+    expect(codes(await read(good, cutBeforeDate))).toEqual(['mail_truncated']);
     const items = await read(good, cutMultipart);
     expect(texts(items)).toEqual(['complete']);
     expect(codes(items)).toEqual(['mail_truncated']);
