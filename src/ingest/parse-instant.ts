@@ -158,7 +158,8 @@ export function parseInstant(raw: string, zone: string, options: TimeOptions = D
     if (hour > 23 || minute > 59 || second > 60) return bad(value, 'the clock time is out of range (hours 00–23, minutes 00–59, seconds 00–60)');
     const wall = Date.UTC(year, month - 1, day, hour, minute, second, fraction);
     if (f.offset !== undefined) {
-      const offset = f.offset;
+      // `-00:00` (RFC 3339 section 4.3: UTC, local offset unknown) gives 0, not −0.
+      const offset = f.offset === 0 ? 0 : f.offset;
       if (Math.abs(offset) >= 24 * 60) return bad(value, 'the UTC offset is out of range');
       return { ok: true, instant: wall - offset * 60000, offsetMinutes: offset, hadOffset: true };
     }

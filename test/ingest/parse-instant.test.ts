@@ -1,3 +1,4 @@
+import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_TIME_OPTIONS, formatLocal, formatUtc, parseInstant, type InstantResult, type TimeOptions } from '../../src/ingest/parse-instant.js';
 
@@ -54,6 +55,27 @@ describe('parseInstant reads the RFC 3339 section 5.8 examples', () => {
     expect(instant(parseInstant('2026-03-01T08:00:00.9996Z', 'UTC'))).toBe(Date.UTC(2026, 2, 1, 8, 0, 1, 0));
     for (const broken of ['2026-03-01T08:00:00.Z', '2026-03-01T08:00:00Zx', '2026-03-01T08:00:00+1', '2026-03-01T08:00:00+01:0', '2026-03-01T08:0a:00Z']) {
       expect(parseInstant(broken, 'UTC'), broken).toMatchObject({ ok: false, code: 'bad_time' });
+    }
+  });
+
+  it('agrees with luxon\'s ISO 8601 reader on 2,000 generated date-times with offsets (reference: luxon DateTime.fromISO, npm)', () => {
+    // Seeded generator (common practice): years 1900–2099, fractions of 0–3 digits with a point or
+    // a comma, offsets as Z, ±hh:mm, ±hhmm and ±hh, the forms most files use.
+    let seed = 12345;
+    const random = (): number => (seed = (Math.imul(seed, 1103515245) + 12345) >>> 0) / 2 ** 32;
+    const pick = (n: number): number => Math.floor(random() * n);
+    const pad = (n: number, width: number): string => String(n).padStart(width, '0');
+    for (let i = 0; i < 2000; i++) {
+      const digits = pick(4);
+      const fraction = digits === 0 ? '' : (random() < 0.5 ? '.' : ',') + Array.from({ length: digits }, () => pick(10)).join('');
+      const sign = random() < 0.5 ? '+' : '-';
+      const hours = pad(pick(14), 2);
+      const minutes = pad([0, 15, 30, 45][pick(4)] as number, 2);
+      const offset = ['Z', `${sign}${hours}:${minutes}`, `${sign}${hours}${minutes}`, `${sign}${hours}`][pick(4)];
+      const value = `${pad(1900 + pick(200), 4)}-${pad(1 + pick(12), 2)}-${pad(1 + pick(28), 2)}T${pad(pick(24), 2)}:${pad(pick(60), 2)}:${pad(pick(60), 2)}${fraction}${offset}`;
+      const reference = DateTime.fromISO(value, { setZone: true });
+      expect(reference.isValid, value).toBe(true);
+      expect(parseInstant(value, 'Europe/Brussels'), value).toEqual({ ok: true, instant: reference.toMillis(), offsetMinutes: reference.offset, hadOffset: true });
     }
   });
 
