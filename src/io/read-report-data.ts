@@ -29,6 +29,8 @@ export function locateReportFiles(files: readonly string[]): {
   alignedCsv?: string;
   topTermsCsv?: string;
   termsJson?: string;
+  /** Each lexicon's term-hits.csv (in a folder named after the lexicon). */
+  termHits: string[];
   dynamics: string[];
 } {
   const name = (f: string): string => f.split('/').pop() as string;
@@ -42,6 +44,7 @@ export function locateReportFiles(files: readonly string[]): {
     alignedCsv: pick((f) => inValidation(f) && f.endsWith('.csv') && /pair|align/i.test(name(f))),
     topTermsCsv: pick((f) => name(f) === 'top-terms.csv'),
     termsJson: pick((f) => name(f) === 'term-audit.json') ?? pick((f) => /term|audit/i.test(f) && f.endsWith('.json') && !/meta\.json$|datapackage/.test(f)),
+    termHits: files.filter((f) => name(f) === 'term-hits.csv' && f.includes('/')).sort(),
     dynamics: files.filter((f) => /dynamic/i.test(f) && f.endsWith('.csv') && !/rejects|diagnostic/i.test(name(f))).sort(),
   };
 }
@@ -91,6 +94,7 @@ export async function readReportData(outDir: string, options: ReportOptions = {}
     if (t.value !== undefined) inputs.termsJson = t.value;
     else if (t.reason) reasons.lexicons = t.reason;
   }
+  if (found.termHits.length) inputs.termHitsFiles = await Promise.all(found.termHits.map(async (f) => ({ lexicon: f.split('/').slice(-2, -1)[0] as string, text: await readFile(at(f), 'utf8') })));
   if (found.dynamics.length) inputs.dynamicsFiles = await Promise.all(found.dynamics.map(async (f) => ({ name: relative(dir, at(f)), text: await readFile(at(f), 'utf8') })));
   return buildReportData(inputs, options);
 }

@@ -151,7 +151,11 @@ export interface CategoryAudit {
   lexicon: string;
   category: string;
   totalHits: number;
+  /** Matched terms (none when no term of the category matched). */
   terms: AuditedTerm[];
+  /** Terms that never matched in the corpus, and all terms of the category, when the audit lists them. */
+  neverMatched?: string[];
+  termCount?: number;
 }
 
 /** Data of the lexicon section. */

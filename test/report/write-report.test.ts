@@ -18,7 +18,7 @@ writeFileSync(join(dir, 'validation', 'validation.json'), '{ not json');
 
 describe('locateReportFiles', () => {
   it('finds each stage\'s files by name, preferring top-level ones', () => {
-    const found = locateReportFiles(['manifest.json', 'series-long.csv', 'sub/series-long.csv', 'scores.csv.meta.json', 'validation/validation.json', 'validation/validation-pairs.csv', 'validation/datapackage.json', 'dynamics/dynamics-summary.csv', 'terms/term-audit.json']);
+    const found = locateReportFiles(['manifest.json', 'series-long.csv', 'sub/series-long.csv', 'scores.csv.meta.json', 'validation/validation.json', 'validation/validation-pairs.csv', 'validation/datapackage.json', 'dynamics/dynamics-summary.csv', 'terms/term-audit.json', 'terms/dc/term-hits.csv', 'term-hits.csv']);
     expect(found).toEqual({
       series: 'series-long.csv',
       manifest: 'manifest.json',
@@ -27,6 +27,7 @@ describe('locateReportFiles', () => {
       alignedCsv: 'validation/validation-pairs.csv',
       topTermsCsv: undefined,
       termsJson: 'terms/term-audit.json',
+      termHits: ['terms/dc/term-hits.csv'],
       dynamics: ['dynamics/dynamics-summary.csv'],
     });
   });

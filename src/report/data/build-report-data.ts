@@ -8,6 +8,7 @@ import { parseCsvTable } from './parse-csv-table.js';
 import { parseSeriesLong } from './parse-series-long.js';
 import { personTracks, type BinRatings } from './person-tracks.js';
 import { readinessFromRows } from './readiness-from-rows.js';
+import { withNeverMatched } from './never-matched-terms.js';
 import { termsFromJson } from './terms-from-json.js';
 import { termsFromTopTerms } from './terms-from-top-terms.js';
 import { validationFromJson } from './validation-from-json.js';
@@ -38,6 +39,8 @@ export interface ReportInputs {
   topTermsCsv?: string;
   /** Parsed term audit JSON, used when there is no top-terms.csv (see termsFromJson). */
   termsJson?: unknown;
+  /** Each audited lexicon's term-hits.csv, for the terms that never matched (see withNeverMatched). */
+  termHitsFiles?: { lexicon: string; text: string }[];
   /** CSV files of the dynamics stage (see dynamicsResultTables). */
   dynamicsFiles?: { name: string; text: string }[];
   /** Why an input is absent or unreadable, by section (`validation`, `lexicons`, `dynamics`, …). */
@@ -132,7 +135,8 @@ export function buildReportData(inputs: ReportInputs, options: ReportOptions = {
   const manifestReconciliation = inputs.manifest?.reconciliation as Reconciliation | undefined;
   const reconciliation = manifestReconciliation ?? inputs.reconciliation;
   const studyName = ((inputs.manifest?.parameters as Record<string, unknown> | undefined)?.study as Record<string, unknown> | undefined)?.name;
-  const terms = (inputs.topTermsCsv === undefined ? undefined : termsFromTopTerms(inputs.topTermsCsv)) ?? (inputs.termsJson === undefined ? undefined : termsFromJson(inputs.termsJson));
+  const topTerms = (inputs.topTermsCsv === undefined ? undefined : termsFromTopTerms(inputs.topTermsCsv)) ?? (inputs.termsJson === undefined ? undefined : termsFromJson(inputs.termsJson));
+  const terms = withNeverMatched(topTerms, inputs.termHitsFiles ?? []);
   const dynamics = inputs.dynamicsFiles ? dynamicsResultTables(inputs.dynamicsFiles) : undefined;
   return {
     title: options.title ?? (typeof studyName === 'string' ? `${studyName}: study report` : `Study report: ${inputs.source}`),

@@ -12,8 +12,8 @@ export const FLAG_MEANINGS: Record<string, string> = {
 
 /**
  * The lexicon section's data from term audit JSON: one `TermAudit` (src/terms/term-auditor.ts),
- * an array of them, or `{ audits: [...] }`. Terms without hits are left out of the charts (their
- * count stays in the category total); keyword-in-context samples are never carried into the
+ * an array of them, or `{ audits: [...] }`. Terms without hits are listed as never matched
+ * (CategoryAudit.neverMatched), not drawn; keyword-in-context samples are never carried into the
  * report, so no raw text reaches the page. Returns undefined when nothing usable is found.
  */
 export function termsFromJson(json: unknown): LexiconAuditData | undefined {
@@ -30,14 +30,18 @@ export function termsFromJson(json: unknown): LexiconAuditData | undefined {
       const c = byCategory.get(t.category) ?? { lexicon, category: t.category, totalHits: 0, terms: [] };
       byCategory.set(t.category, c);
       c.totalHits += hits;
-      if (hits <= 0) continue;
+      c.termCount = (c.termCount ?? 0) + 1;
+      if (hits <= 0) {
+        (c.neverMatched ??= []).push(t.term);
+        continue;
+      }
       const flags = Array.isArray(t.flags) ? t.flags.filter((f): f is string => typeof f === 'string') : [];
       for (const f of flags) seenFlags.add(f);
       c.terms.push({ term: t.term, hits, share: typeof t.share === 'number' ? t.share : 0, flags });
     }
     for (const c of byCategory.values()) {
       if (c.totalHits > 0) for (const t of c.terms) if (t.share === 0) t.share = t.hits / c.totalHits;
-      if (c.terms.length) categories.push(c);
+      if (c.terms.length || c.neverMatched?.length) categories.push(c);
     }
   }
   if (categories.length === 0) return undefined;

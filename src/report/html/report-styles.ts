@@ -65,6 +65,8 @@ tr.not-ready td:last-child{color:#8a5a00;font-weight:600}
 dl.flags{display:grid;grid-template-columns:max-content 1fr;gap:2px 14px;font-size:14px}
 dl.flags dt{color:#8a5a00;font-weight:600}
 dl.flags dd{margin:0}
+ul.never-matched{font-size:14px;padding-left:20px}
+ul.never-matched li{margin:2px 0}
 .manifest{overflow-x:auto;font-size:13px}
 dl.json{display:grid;grid-template-columns:max-content 1fr;gap:2px 14px;margin:0}
 dl.json dt{font-weight:600;color:var(--muted)}

@@ -84,6 +84,7 @@ describe('buildReportData', () => {
     const fatigue = data.lexicons.value.categories.find((c) => c.category === 'fatigue')!;
     expect(fatigue.totalHits).toBe(50);
     expect(fatigue.terms.map((t) => t.term)).toEqual(['tired', 'exhausted', 'sleepy']);
+    expect(fatigue).toMatchObject({ neverMatched: ['drained'], termCount: 4 });
     expect(Object.keys(data.lexicons.value.flagMeanings)).toEqual(['few_persons', 'over_share']);
   });
 
@@ -110,5 +111,22 @@ describe('buildReportData with top-terms.csv (docs/architecture.md "Term audit" 
       ['fatigue', 4, 1],
     ]);
     expect(data.lexicons.value.categories[0]!.terms[1]).toEqual({ term: 'nervous', hits: 10, share: 0.2, flags: ['few_persons', 'over_share'] });
+  });
+
+  it('adds the never-matched terms from each lexicon\'s term-hits.csv, and a category none of whose terms matched', () => {
+    const top = 'lexicon,lexicon_sha256,category,rank,term,hits,share,entries,persons,flags\n' + 'dc,abc,worry,1,worr*,30,0.75,20,5,over_share\n' + 'dc,abc,worry,2,nervous,10,0.25,8,2,\n';
+    const hits =
+      'category,term,wildcard,hits,share,rank,entries,persons,top_person_share,negated,flags\n' +
+      'worry,worr*,1,30,0.75,1,20,5,0.4,0,over_share\n' +
+      'worry,nervous,0,10,0.25,2,8,2,0.5,0,\n' +
+      'worry,on edge,0,0,0,3,0,0,,0,no_hits\n' +
+      'fatigue,drained,0,0,0,1,0,0,,0,no_hits\n' +
+      'fatigue,tired,0,0,0,2,0,0,,0,no_hits\n';
+    const data = buildReportData({ source: 'out', tool, topTermsCsv: top, termHitsFiles: [{ lexicon: 'dc', text: hits }] });
+    if (!data.lexicons.ok) throw new Error('no terms');
+    expect(data.lexicons.value.categories.map((c) => [c.category, c.terms.length, c.termCount, c.neverMatched])).toEqual([
+      ['worry', 2, 3, ['on edge']],
+      ['fatigue', 0, 2, ['drained', 'tired']],
+    ]);
   });
 });

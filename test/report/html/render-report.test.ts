@@ -73,6 +73,18 @@ describe('renderReport', () => {
     expect(bare).toContain('The input reconciliation is not available.');
   });
 
+  it('lists the terms that never matched per category, escaped, with a count of those not shown', () => {
+    const many = Array.from({ length: 15 }, (_, k) => `w${k}`);
+    const hits = 'category,term,hits\n' + ['worry,worr*,8', 'worry,<b>bold</b>,0', ...many.map((w) => `calm,${w},0`)].join('\n') + '\n';
+    const page = renderReport(buildReportData({ source: 'out', tool, termsJson: termsFixture(), termHitsFiles: [{ lexicon: 'daily-constructs', text: hits }] }));
+    const list = page.slice(page.indexOf('<ul class="never-matched">'));
+    expect(list).toContain('<b>daily-constructs · worry</b>: 1 of 2 terms never matched: <code>&lt;b&gt;bold&lt;/b&gt;</code>');
+    expect(list).toContain('<b>daily-constructs · fatigue</b>: 1 of 4 terms never matched: <code>drained</code>');
+    expect(list).toContain('<b>daily-constructs · calm</b>: none of its 15 terms matched: <code>w0</code>');
+    expect(list).toContain('<code>w11</code> and 3 more</li>');
+    expect(page).not.toContain('data-chart="terms-daily-constructs-calm"');
+  });
+
   it('escapes person ids and terms taken from the data', () => {
     const csv = seriesCsv({ persons: 1, days: 3 }).replace(/p01/g, '<img src=x onerror=alert(1)>');
     const page = renderReport(buildReportData({ source: 'out', tool, seriesCsv: csv }));
