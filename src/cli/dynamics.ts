@@ -70,9 +70,11 @@ export function registerDynamics(program: Command): void {
       await writeFileAtomic(join(out, 'datapackage.json'), JSON.stringify(dataPackage('lexichron-dynamics', 'lexichron dynamics', resources), null, 2) + '\n');
       const ready = result.summaries.filter((s) => s.ready).length;
       const converging = result.ccm.filter((c) => c.converges).length;
+      const unskilled = result.embedding.filter((e) => e.note !== undefined).length;
       process.stderr.write(
         `${persons} persons × ${variables.length} variables: ${ready} of ${result.summaries.length} series ready (≥ ${options.minLagPairs ?? 50} lag pairs); ` +
           `${result.options.pairs.length} pairs; CCM directions converging: ${converging} of ${result.ccm.length}` +
+          (unskilled > 0 ? `; ${unskilled} series without a positive forecast skill at any E, whose cross maps say little (see the embedding notes in dynamics.json)` : '') +
           (diagnostics.length > 0 ? `; ${diagnostics.length} row problems (see dynamics.json)` : '') +
           `\nout: ${out}\n`,
       );

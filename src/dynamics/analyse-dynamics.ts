@@ -81,11 +81,22 @@ export interface DynamicsResult {
   var: VarRow[];
   ccm: CcmRow[];
   /** Embedding dimension chosen per person and variable (by simplex forecast skill). */
-  embedding: Array<{ person: string; variable: string; E: number | undefined; skills: DimensionSkill[]; reason?: string }>;
+  /** Per person (or the stacked set) and series: the chosen E, the skill of every E tried, and a note when no E gave a positive skill. */
+  embedding: Array<{ person: string; variable: string; E: number | undefined; skills: DimensionSkill[]; reason?: string; note?: string }>;
   notes: string[];
 }
 
 const STACKED = '';
+
+/**
+ * The note for a series whose best simplex forecast skill is not above 0: it shows no
+ * low-dimensional deterministic dynamics at this resolution (a positive forecast skill is the
+ * usual first check before cross mapping in empirical dynamic modelling; Chang, Ushio & Hsieh
+ * 2017, Ecological Research 32:785–796, cited from memory).
+ */
+function noSkillNote(rho: number, E: number): string {
+  return `no embedding dimension gives this series a positive forecast skill one bin ahead (best ρ = ${rho.toFixed(3)} at E = ${E}): it shows no low-dimensional dynamics at this resolution, and cross maps from its embedding say little`;
+}
 
 /**
  * Runs the dynamics analyses over persons' series: per person and variable the descriptive
@@ -143,7 +154,14 @@ export function analyseDynamics(persons: readonly PersonSeriesInput[], options: 
       if (!chosenE.has(variable)) {
         const choice = chooseEmbeddingDimension(series(variable), { maxE: ccmOptions.maxE ?? 8, tau: ccmOptions.tau ?? 1, exclusionRadius: ccmOptions.exclusionRadius ?? 0 });
         chosenE.set(variable, choice.ok ? choice.E : undefined);
-        embedding.push({ person: personId, variable, E: choice.ok ? choice.E : undefined, skills: choice.ok ? choice.skills : [], ...(choice.ok ? {} : { reason: choice.reason }) });
+        embedding.push({
+          person: personId,
+          variable,
+          E: choice.ok ? choice.E : undefined,
+          skills: choice.ok ? choice.skills : [],
+          ...(choice.ok ? {} : { reason: choice.reason }),
+          ...(choice.ok && !(choice.rho > 0) ? { note: noSkillNote(choice.rho, choice.E) } : {}),
+        });
       }
       return chosenE.get(variable);
     };
@@ -172,6 +190,10 @@ export function analyseDynamics(persons: readonly PersonSeriesInput[], options: 
         return cache.get(variable) as PhasedSeries;
       });
     }
+  }
+  const unskilled = embedding.filter((e) => e.note !== undefined).length;
+  if (unskilled > 0) {
+    notes.push(`${unskilled} of ${embedding.length} series have no positive forecast skill one bin ahead at any embedding dimension (see the embedding notes): the cross-map rows with such a series as effect say little about causation.`);
   }
   return {
     options: { variables, pairs, minLagPairs, ccm: ccmOptions, skipCrossMapping: Boolean(options.skipCrossMapping), stack: Boolean(options.stack), seasonPeriod, seed: options.seed },

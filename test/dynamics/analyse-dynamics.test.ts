@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseDynamics } from '../../src/dynamics/analyse-dynamics.js';
 import { dynamicsTables } from '../../src/dynamics/dynamics-tables.js';
+import { random } from '../../src/stats/random.js';
 import { syntheticPersons } from './synthetic-series.js';
 
 const ccm = { samples: 10, surrogates: 9, librarySizeCount: 5 };
@@ -43,6 +44,22 @@ describe('analyseDynamics', () => {
     const stacked = result.ccm.filter((c) => c.scope === 'stacked');
     expect(stacked).toHaveLength(2);
     expect(stacked[0]!.points).toBeGreaterThan(result.ccm.find((c) => c.person === 'P1' && c.cause === stacked[0]!.cause)!.points);
+  });
+
+  it('notes a series with no positive forecast skill at any E, and not a chaotic one (common practice: a positive simplex skill before cross mapping)', () => {
+    // Invented: uniform noise (seed 20; its best simplex skill over E = 1…8 is −0.040, at E = 1)
+    // beside the logistic map x ← 3.7x(1 − x), whose one-bin-ahead skill is high (Sugihara & May 1990).
+    const source = random(20);
+    const noise = Array.from({ length: 120 }, () => source());
+    let x = 0.2;
+    const chaos = Array.from({ length: 120 }, () => (x = 3.7 * x * (1 - x)));
+    const person = { person: 'P1', t: noise.map((_, t) => t), values: { noise, chaos }, lagValid: noise.map((_, t) => t > 0) };
+    const result = analyseDynamics([person], { seed: 1, ccm });
+    const byVariable = new Map(result.embedding.map((e) => [e.variable, e]));
+    expect(byVariable.get('noise')?.note).toMatch(/^no embedding dimension gives this series a positive forecast skill one bin ahead \(best ρ = -0\.040 at E = 1\)/);
+    expect(byVariable.get('chaos')?.note).toBeUndefined();
+    expect(Math.max(...(byVariable.get('chaos')?.skills ?? []).map((s) => s.rho ?? -1))).toBeGreaterThan(0.9);
+    expect(result.notes).toContain('1 of 2 series have no positive forecast skill one bin ahead at any embedding dimension (see the embedding notes): the cross-map rows with such a series as effect say little about causation.');
   });
 
   it('renders tidy tables with one row per person × variable, coefficient, direction and library size', () => {
