@@ -31,7 +31,7 @@ export function lexiconSection(lexicons: Part<LexiconAuditData>): string {
 }
 
 /** Never-matched terms shown per category before "and N more". */
-export const NEVER_MATCHED_SHOWN = 12;
+const NEVER_MATCHED_SHOWN = 12;
 
 /** One category's line of the never-matched list. */
 function neverMatchedItem(c: CategoryAudit): string {
