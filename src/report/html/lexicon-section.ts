@@ -7,8 +7,8 @@ import { termShareChart } from './term-share-chart.js';
 
 /**
  * Section 4: per lexicon category, the terms that carry most of its hits with their shares and
- * the audit's flags, and what each flag means; then the terms that never matched, per category. A category driven by one or two words measures
- * those words, whatever its name says.
+ * the audit's flags, and what each flag means; then the terms that never matched, per category.
+ * A category driven by one or two words measures those words, whatever its name says.
  */
 export function lexiconSection(lexicons: Part<LexiconAuditData>): string {
   const purpose = 'Which words actually produce each category\'s score, and which of them the audit flags for a closer look.';
@@ -23,7 +23,7 @@ export function lexiconSection(lexicons: Part<LexiconAuditData>): string {
   const unmatched = l.categories.filter((c) => (c.neverMatched?.length ?? 0) > 0);
   if (unmatched.length) {
     parts.push(
-      '<h3>Terms that never matched</h3><p>A term that never matches adds nothing to its category here; many such terms, or a category with none matched, say the list does not fit how these people write (full lists in each lexicon\'s <code>term-hits.csv</code>).</p>' +
+      '<h3>Terms that never matched</h3><p>A term that never matches adds nothing to its category here. In a short construct list, many such terms, or a category with none matched, suggest the list does not fit how these people write; in a large general lexicon most terms never occur in any one corpus. Full lists are in each lexicon\'s <code>term-hits.csv</code>.</p>' +
         `<ul class="never-matched">${unmatched.map(neverMatchedItem).join('')}</ul>`,
     );
   }
