@@ -1,9 +1,8 @@
-import { studentTTwoSidedP } from '../stats/distributions.js';
 import { notEstimable, type StatResult } from '../stats/stat-result.js';
 import { leastSquares } from './least-squares.js';
 import { personCentre } from './person-centre.js';
 import { var1Rows } from './var1-rows.js';
-import type { Var1Coefficient, Var1Fit } from './var1.js';
+import { var1Coefficients, type Var1Fit } from './var1.js';
 
 /** A pooled fixed-effects VAR(1). */
 export interface PooledVar1Fit extends Var1Fit {
@@ -56,13 +55,5 @@ export function pooledVar1(persons: readonly PooledVar1Person[], variables: read
   if (contributing === 0) return notEstimable('no_lag_pairs', 'no person has a complete lag pair');
   const fit = leastSquares(design, responses, contributing);
   if (!fit.ok) return fit;
-  const coefficients: Var1Coefficient[] = [];
-  fit.fits.forEach((equation, j) => {
-    equation.coefficients.forEach((estimate, i) => {
-      const se = equation.standardErrors[i] as number;
-      const t = estimate / se;
-      coefficients.push({ outcome: variables[j] as string, predictor: variables[i] as string, estimate, se, t, p: studentTTwoSidedP(t, fit.df) });
-    });
-  });
-  return { ok: true, variables: [...variables], pairs: fit.n, df: fit.df, persons: contributing, coefficients };
+  return { ok: true, variables: [...variables], pairs: fit.n, df: fit.df, persons: contributing, coefficients: var1Coefficients(fit, variables, variables) };
 }

@@ -1,6 +1,6 @@
 import { studentTTwoSidedP } from '../stats/distributions.js';
 import { notEstimable, type StatResult } from '../stats/stat-result.js';
-import { leastSquares } from './least-squares.js';
+import { leastSquares, type LeastSquares } from './least-squares.js';
 import { personCentre } from './person-centre.js';
 import { var1Rows } from './var1-rows.js';
 
@@ -64,14 +64,18 @@ export function var1(
   const responses = variables.map((_, j) => rows.current.map((now) => now[j] as number));
   const fit = leastSquares(design, responses);
   if (!fit.ok) return fit;
-  const predictors = ['(intercept)', ...variables];
+  return { ok: true, variables: [...variables], pairs: rows.t.length, df: fit.df, coefficients: var1Coefficients(fit, variables, ['(intercept)', ...variables]) };
+}
+
+/** The coefficient table of a VAR(1) fitted equation by equation: equation j explains `outcomes[j]`, coefficient i belongs to `predictors[i]`; t and two-sided p on the fit's df. */
+export function var1Coefficients(fit: LeastSquares, outcomes: readonly string[], predictors: readonly string[]): Var1Coefficient[] {
   const coefficients: Var1Coefficient[] = [];
   fit.fits.forEach((equation, j) => {
     equation.coefficients.forEach((estimate, i) => {
       const se = equation.standardErrors[i] as number;
       const t = estimate / se;
-      coefficients.push({ outcome: variables[j] as string, predictor: predictors[i] as string, estimate, se, t, p: studentTTwoSidedP(t, fit.df) });
+      coefficients.push({ outcome: outcomes[j] as string, predictor: predictors[i] as string, estimate, se, t, p: studentTTwoSidedP(t, fit.df) });
     });
   });
-  return { ok: true, variables: [...variables], pairs: rows.t.length, df: fit.df, coefficients };
+  return coefficients;
 }
