@@ -37,6 +37,8 @@ export function registerImport(program: Command): void {
     .option('--heading <regex>', 'diary: pattern of a heading line, its first group (or group `date`) holding the date', '^#*\\s*(\\d{4}-\\d{2}-\\d{2})\\s*$')
     .option('--date-format <format>', 'diary: luxon format of the heading date', 'yyyy-MM-dd')
     .option('--locale <locale>', 'diary: locale of month and day names in headings', 'en')
+    .option('--entry-time <regex>', 'diary: pattern of a line that starts a timed entry under a heading, its first group (or group `time`) holding the clock time, e.g. \'^(\\d{1,2}:\\d{2})\\s*[-–—]\\s*\'')
+    .option('--entry-time-format <format>', 'diary: luxon format of the entry time', 'H:mm')
     .option('--sender-field <name>', 'chat-table: field holding the sender')
     .option('--time-field <name>', 'chat-table: field holding the time')
     .option('--text-field <name>', 'chat-table: field holding the text')
@@ -73,6 +75,8 @@ export function registerImport(program: Command): void {
           heading: opts.heading as string,
           dateFormat: opts.dateFormat as string,
           locale: opts.locale as string,
+          entryTime: opts.entryTime as string | undefined,
+          entryTimeFormat: opts.entryTimeFormat as string,
           senderField: opts.senderField as string | undefined,
           timeField: opts.timeField as string | undefined,
           textField: opts.textField as string | undefined,

@@ -7,7 +7,7 @@ import type { ImportItem } from '../ingest/import/import-item.js';
 import { parseChatLine, type ChatStamp } from '../ingest/import/parse-chat-line.js';
 import { readChatLines } from '../ingest/import/read-chat-lines.js';
 import { readChatTable } from '../ingest/import/read-chat-table.js';
-import { compileDiaryHeading, DEFAULT_DIARY_DATE_FORMAT, DEFAULT_DIARY_HEADING, readDiary } from '../ingest/import/read-diary.js';
+import { compileDiaryEntryTime, compileDiaryHeading, DEFAULT_DIARY_DATE_FORMAT, DEFAULT_DIARY_HEADING, readDiary } from '../ingest/import/read-diary.js';
 import { readMbox } from '../ingest/import/read-mbox.js';
 import { settleDateOrder, type DateOrder } from '../ingest/import/settle-date-order.js';
 import { readByteLines, readDecodedLines } from './read-byte-lines.js';
@@ -30,10 +30,12 @@ export interface ImportSourceSpec {
   senders?: readonly string[];
   /** chat-lines: date order; settled from the file when absent. */
   dateOrder?: DateOrder;
-  /** diary: heading pattern, luxon date format and locale. */
+  /** diary: heading pattern, luxon date format and locale; pattern and luxon format of a timed entry's line. */
   heading?: string;
   dateFormat?: string;
   locale?: string;
+  entryTime?: string;
+  entryTimeFormat?: string;
   /** chat-table: field names and time format. */
   senderField?: string;
   timeField?: string;
@@ -98,7 +100,8 @@ export async function openImportSource(spec: ImportSourceSpec): Promise<OpenedIm
     }
     case 'diary': {
       const heading = compileDiaryHeading(spec.heading ?? DEFAULT_DIARY_HEADING);
-      const options = { file, person: spec.person, zone: spec.zone, heading, dateFormat: spec.dateFormat ?? DEFAULT_DIARY_DATE_FORMAT, locale: spec.locale ?? 'en', dst };
+      const entryTime = spec.entryTime !== undefined ? compileDiaryEntryTime(spec.entryTime) : undefined;
+      const options = { file, person: spec.person, zone: spec.zone, heading, dateFormat: spec.dateFormat ?? DEFAULT_DIARY_DATE_FORMAT, locale: spec.locale ?? 'en', dst, entryTime, entryTimeFormat: spec.entryTimeFormat };
       return { items: readDiary(readDecodedLines(spec.path), options) };
     }
     default:

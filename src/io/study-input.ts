@@ -41,6 +41,8 @@ export function studyInput(input: StudyInput, path: string, zones: ZoneTable, ti
         heading: input.heading,
         dateFormat: input.dateFormat,
         locale: input.locale,
+        entryTime: input.entryTime,
+        entryTimeFormat: input.entryTimeFormat,
         senderField: input.senderField,
         timeField: input.timeField,
         textField: input.textField,

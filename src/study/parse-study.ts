@@ -10,7 +10,7 @@ import { auditSettings, dynamicsSettings, ratingsSettings, reportSettings, type 
 export const STUDY_IMPORT_FORMATS = ['mbox', 'diary', 'chat-lines', 'chat-table'] as const;
 
 /** The importer options a donated-export input may carry, as on the command line (camel case). */
-type ImportFields = Partial<Pick<ImportSourceSpec, 'addresses' | 'senders' | 'dateOrder' | 'heading' | 'dateFormat' | 'locale' | 'senderField' | 'timeField' | 'textField' | 'timeFormat'>>;
+type ImportFields = Partial<Pick<ImportSourceSpec, 'addresses' | 'senders' | 'dateOrder' | 'heading' | 'dateFormat' | 'locale' | 'entryTime' | 'entryTimeFormat' | 'senderField' | 'timeField' | 'textField' | 'timeFormat'>>;
 
 export interface StudyInput extends ImportFields {
   path: string;
@@ -69,7 +69,7 @@ export interface StudyProblem {
 }
 
 const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
-const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
+const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
 const TIME_KEYS = ['format', 'epoch', 'dstGap', 'dstOverlap'];
 const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'windows'];
 const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names', 'aggregatesOnly'];
@@ -138,7 +138,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
         if (input.format === 'mbox') need(Array.isArray(input.addresses) && input.addresses.length > 0 && input.addresses.every(str), `${p}.addresses`, 'expected the participant\'s e-mail addresses, e.g. ["ana@example.org"]');
         if (input.format === 'chat-lines' || input.format === 'chat-table') need(Array.isArray(input.senders) && input.senders.length > 0 && input.senders.every(str), `${p}.senders`, 'expected the participant\'s sender names as they appear in the export, e.g. ["Ana"]');
       }
-      for (const key of ['person', 'heading', 'dateFormat', 'locale', 'senderField', 'timeField', 'textField', 'timeFormat']) need(input[key] === undefined || str(input[key]), `${p}.${key}`, 'expected a string');
+      for (const key of ['person', 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat', 'senderField', 'timeField', 'textField', 'timeFormat']) need(input[key] === undefined || str(input[key]), `${p}.${key}`, 'expected a string');
       need(input.dateOrder === undefined || input.dateOrder === 'dmy' || input.dateOrder === 'mdy', `${p}.dateOrder`, 'expected dmy or mdy');
       need(input.dedupe === undefined || typeof input.dedupe === 'boolean', `${p}.dedupe`, 'expected true or false');
       need(input.mergeBurstMinutes === undefined || (typeof input.mergeBurstMinutes === 'number' && input.mergeBurstMinutes > 0), `${p}.mergeBurstMinutes`, 'expected a number of minutes > 0');

@@ -150,6 +150,16 @@ describe('lexichron import', () => {
     expect(readFileSync(`${out}.rejects.csv`, 'utf8')).toMatch(/diary\.md,3,diary_bad_date,/);
   });
 
+  it('splits a diary day into timed entries with --entry-time and --entry-time-format (IANA tz: New York on EST, -05:00, before 9 March 2025)', async () => {
+    const input = tmp.write('timed.md', '## 3 March 2025\n[9.05] Coffee.\n[21.40] Bed early.\n');
+    const out = tmp.path('timed.jsonl');
+    const { code } = await cli('import', 'diary', input, '--person', 'P02', '--time-zone', 'America/New_York', '--heading', '^## (.+)$', '--date-format', 'd MMMM yyyy', '--entry-time', '^\\[(\\d{1,2}\\.\\d{2})\\] ', '--entry-time-format', 'H.mm', '--out', out);
+    expect(code).toBe(0);
+    expect(readFileSync(out, 'utf8')).toBe(
+      '{"id":"timed.md:2","person":"P02","time":"2025-03-03T09:05:00-05:00","zone":"America/New_York","text":"Coffee."}\n' + '{"id":"timed.md:3","person":"P02","time":"2025-03-03T21:40:00-05:00","zone":"America/New_York","text":"Bed early."}\n',
+    );
+  });
+
   it('runs a whole study (score, series, validation, dynamics, term audit, report) without any network use', async () => {
     const rows = ['person,time,text'];
     const ratings = ['person,time,mood'];

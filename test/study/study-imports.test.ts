@@ -50,6 +50,13 @@ describe('study files that name donated exports', () => {
     expect(problems[1]?.message).toContain('sender names');
   });
 
+  it('accepts a diary\'s entry-time pattern and format, and asks for strings', () => {
+    const ok = parseStudy({ inputs: [{ path: 'd.md', format: 'diary', person: 'P1', entryTime: '^(\\d{1,2}:\\d{2}) - ', entryTimeFormat: 'H:mm' }], timeZone: 'UTC', out: 'out' });
+    expect(ok.problems).toEqual([]);
+    const bad = parseStudy({ inputs: [{ path: 'd.md', format: 'diary', person: 'P1', entryTime: 9 }], timeZone: 'UTC', out: 'out' });
+    expect(bad.problems).toEqual([{ path: '$.inputs[0].entryTime', message: 'expected a string' }]);
+  });
+
   it('names a mistyped key with its JSON path and the key it probably means', () => {
     const { problems } = parseStudy({ inputs: ['a.csv'], timeZone: 'UTC', out: 'out', seires: {} });
     expect(problems).toEqual([{ path: '$.seires', message: 'unknown key `seires`; did you mean `series`?' }]);

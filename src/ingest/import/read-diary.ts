@@ -18,6 +18,14 @@ export interface DiaryOptions {
   locale?: string;
   /** Clock time given to headings whose format has no time of day (default 12:00, the middle of the day). */
   defaultTime?: { hour: number; minute: number };
+  /**
+   * Pattern of a line that starts a timed entry under a heading (several entries a day); its
+   * group `time` (or else its first group) holds the clock time, and the rest of the line after
+   * the match begins the entry's text. Without it, a heading starts one entry.
+   */
+  entryTime?: RegExp;
+  /** luxon format of the captured clock time (default `H:mm`, which also reads `09:15`). */
+  entryTimeFormat?: string;
   dst: { gap: WallClockPolicy; overlap: WallClockPolicy };
 }
 
@@ -26,21 +34,36 @@ export const DEFAULT_DIARY_HEADING = '^#*\\s*(\\d{4}-\\d{2}-\\d{2})\\s*$';
 /** The luxon format of the default heading's date. */
 export const DEFAULT_DIARY_DATE_FORMAT = 'yyyy-MM-dd';
 
+/** An example entry-time pattern: a line starting with a clock time and a dash, e.g. `09:15 – Walked to work.` */
+export const EXAMPLE_DIARY_ENTRY_TIME = '^(\\d{1,2}:\\d{2})\\s*[-–—]\\s*';
+/** The luxon format of a captured entry time by default. */
+export const DEFAULT_DIARY_ENTRY_TIME_FORMAT = 'H:mm';
+
 /**
- * Compiles a user's heading pattern (Unicode mode), which must hold a capture group for the date.
- * Throws a usage error naming the problem otherwise.
+ * Compiles a user's diary pattern (Unicode mode), which must hold a capture group for `part` (the
+ * date of a heading, the clock time of an entry). Throws a usage error naming the problem otherwise.
  */
-export function compileDiaryHeading(pattern: string): RegExp {
+function compileWithGroup(pattern: string, what: string, part: string, example: string, groupExample: string): RegExp {
   let re: RegExp;
   try {
     re = new RegExp(pattern, 'u');
   } catch (error) {
-    throw usageError(`Cannot use the diary heading pattern \`${pattern}\`: ${(error as Error).message}; write a JavaScript regular expression such as \`${DEFAULT_DIARY_HEADING}\`.`);
+    throw usageError(`Cannot use the diary ${what} pattern \`${pattern}\`: ${(error as Error).message}; write a JavaScript regular expression such as \`${example}\`.`);
   }
   if (new RegExp(`${re.source}|`, 'u').exec('')!.length < 2) {
-    throw usageError(`Cannot use the diary heading pattern \`${pattern}\`: it has no capture group for the date; put the date part in parentheses, e.g. \`^== (.+) ==$\`.`);
+    throw usageError(`Cannot use the diary ${what} pattern \`${pattern}\`: it has no capture group for the ${part}; put the ${part} in parentheses, e.g. \`${groupExample}\`.`);
   }
   return re;
+}
+
+/** Compiles a heading pattern, which must hold a capture group for the date (see compileWithGroup). */
+export function compileDiaryHeading(pattern: string): RegExp {
+  return compileWithGroup(pattern, 'heading', 'date', DEFAULT_DIARY_HEADING, '^== (.+) ==$');
+}
+
+/** Compiles an entry-time pattern, which must hold a capture group for the clock time (see compileWithGroup). */
+export function compileDiaryEntryTime(pattern: string): RegExp {
+  return compileWithGroup(pattern, 'entry time', 'time', EXAMPLE_DIARY_ENTRY_TIME, '^(\\d{1,2}:\\d{2}) - ');
 }
 
 /** True when a luxon format holds a time-of-day token (outside quoted literals). */
@@ -52,15 +75,21 @@ function hasClockTime(format: string): boolean {
  * Reads a plain-text diary whose entries start with dated headings. Each heading line starts an
  * entry that runs to the next heading; the date is read with luxon's `fromFormat` in
  * `locale`, and a date without a time of day is placed at `defaultTime` (12:00) in the person's zone.
+ * With `entryTime`, a line under a heading that matches it starts a further entry at that clock
+ * time on the heading's date (several entries a day); text between a heading and its first timed
+ * line stays an entry at the heading's time, and is simply absent when there is none.
  *
  * Rejects: a heading whose date does not parse or does not exist (30 February) → `diary_bad_date`
- * (with luxon's explanation), an entry without text → `diary_empty_entry`, text before the first
- * heading → one `diary_before_first_heading`, a local time in a daylight-saving gap or overlap as `dst` says.
+ * (with luxon's explanation), an entry time that does not fit `entryTimeFormat` → `diary_bad_time`,
+ * an entry without text → `diary_empty_entry`, text before the first heading → one
+ * `diary_before_first_heading`, a local time in a daylight-saving gap or overlap as `dst` says.
  */
 export async function* readDiary(lines: AsyncIterable<NumberedLine> | Iterable<NumberedLine>, options: DiaryOptions): AsyncGenerator<ImportItem> {
   const withTime = hasClockTime(options.dateFormat);
   const fallback = options.defaultTime ?? { hour: 12, minute: 0 };
-  type Pending = { line: number; date: string; parts: string[]; notes: Set<EntryNote> };
+  const timeFormat = options.entryTimeFormat ?? DEFAULT_DIARY_ENTRY_TIME_FORMAT;
+  /** An entry being collected: its heading's date, and its own clock time when a timed line started it. */
+  type Pending = { line: number; date: string; time?: string; parts: string[]; notes: Set<EntryNote> };
   let pending: Pending | undefined;
   let before = 0;
   let beforeStart = 0;
@@ -70,12 +99,18 @@ export async function* readDiary(lines: AsyncIterable<NumberedLine> | Iterable<N
     if (!dt.isValid) {
       return importReject(file, p.line, 'diary_bad_date', `the heading date \`${p.date.trim().slice(0, 60)}\` does not fit the format \`${options.dateFormat}\` or does not exist (${dt.invalidExplanation ?? dt.invalidReason ?? 'no reason given'})`);
     }
-    const hour = withTime ? dt.hour : fallback.hour;
-    const minute = withTime ? dt.minute : fallback.minute;
-    const resolved = resolveWallClock(Date.UTC(dt.year, dt.month - 1, dt.day, hour, minute, withTime ? dt.second : 0), options.zone, options.dst);
+    let clock = { hour: withTime ? dt.hour : fallback.hour, minute: withTime ? dt.minute : fallback.minute, second: withTime ? dt.second : 0 };
+    if (p.time !== undefined) {
+      const t = DateTime.fromFormat(p.time.trim(), timeFormat, { zone: 'UTC', locale: options.locale ?? 'en' });
+      if (!t.isValid) {
+        return importReject(file, p.line, 'diary_bad_time', `the entry time \`${p.time.trim().slice(0, 30)}\` does not fit the format \`${timeFormat}\` (${t.invalidExplanation ?? t.invalidReason ?? 'no reason given'}); give the format with --entry-time-format (entryTimeFormat in a study file)`);
+      }
+      clock = { hour: t.hour, minute: t.minute, second: t.second };
+    }
+    const resolved = resolveWallClock(Date.UTC(dt.year, dt.month - 1, dt.day, clock.hour, clock.minute, clock.second), options.zone, options.dst);
     if (!resolved.ok) return importReject(file, p.line, resolved.code, resolved.message);
     const text = p.parts.join('\n').trim();
-    if (text === '') return importReject(file, p.line, 'diary_empty_entry', 'the heading is followed by no text');
+    if (text === '') return importReject(file, p.line, 'diary_empty_entry', p.time === undefined ? 'the heading is followed by no text' : 'the timed line is followed by no text');
     const entry: RawEntry = { id: `${file}:${p.line}`, person: options.person, instant: resolved.instant, zone: options.zone, offsetMinutes: resolved.offsetMinutes, text, source: { file, line: p.line } };
     return p.notes.size > 0 ? { kind: 'entry', entry, notes: [...p.notes] } : { kind: 'entry', entry };
   };
@@ -84,6 +119,14 @@ export async function* readDiary(lines: AsyncIterable<NumberedLine> | Iterable<N
     if (m) {
       if (pending) yield finish(pending);
       pending = { line, date: m.groups?.date ?? m[1] ?? '', parts: [], notes: new Set() };
+      continue;
+    }
+    const timed = pending && options.entryTime ? options.entryTime.exec(text) : null;
+    if (pending && timed) {
+      // The heading's own text before its first timed line is an entry only when there is some.
+      if (pending.time !== undefined || pending.parts.join('').trim() !== '') yield finish(pending);
+      pending = { line, date: pending.date, time: timed.groups?.time ?? timed[1] ?? '', parts: [text.slice(timed.index + timed[0].length)], notes: new Set() };
+      if (repaired) pending.notes.add(repaired);
       continue;
     }
     if (pending) {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { ImportItem } from '../../../src/ingest/import/import-item.js';
-import { compileDiaryHeading, DEFAULT_DIARY_HEADING, readDiary } from '../../../src/ingest/import/read-diary.js';
+import { compileDiaryEntryTime, compileDiaryHeading, DEFAULT_DIARY_HEADING, readDiary } from '../../../src/ingest/import/read-diary.js';
 import { openImportSource } from '../../../src/io/open-import-source.js';
 import { collect, tempFolder } from '../../support/temp-files.js';
 
@@ -31,6 +31,36 @@ describe('readDiary reads plain-text diaries with dated headings', () => {
     expect(bad?.kind === 'reject' && bad.diagnostic).toMatchObject({ source: { line: 2 }, message: expect.stringContaining('2025-02-30') });
     expect(entries(items).map((e) => e.text)).toEqual(['fine']);
   });
+  it('splits a day into timed entries with --entry-time, in the zone\'s offset on each side of the spring-forward change (IANA tz: Europe/Brussels went from +01:00 to +02:00 at 01:00 UTC on 30 March 2025)', async () => {
+    const text = [
+      '# 2025-03-29', // 1
+      '09:15 – Walked the dog.', // 2
+      'Still cold.', // 3
+      '14:30 - Lunch with Sam.', // 4
+      '# 2025-03-30', // 5
+      'Woke late.', // 6: the heading's own text, an entry at 12:00
+      '08:05 — Clocks changed overnight.', // 7
+      '02:30 - in the gap', // 8: 02:00–03:00 does not exist that night
+      '25:70 - no such time', // 9
+      '16:00 -', // 10: nothing written
+    ].join('\n');
+    const path = tmp.write('timed.md', text + '\n');
+    const items = await collect((await openImportSource({ format: 'diary', path, person: 'P01', zone: 'Europe/Brussels', entryTime: '^(\\d{1,2}:\\d{2})\\s*[-–—]\\s*' })).items);
+    expect(entries(items)).toEqual([
+      { id: 'timed.md:2', local: '2025-03-29T09:15', offset: 60, text: 'Walked the dog.\nStill cold.' },
+      { id: 'timed.md:4', local: '2025-03-29T14:30', offset: 60, text: 'Lunch with Sam.' },
+      { id: 'timed.md:5', local: '2025-03-30T12:00', offset: 120, text: 'Woke late.' },
+      { id: 'timed.md:7', local: '2025-03-30T08:05', offset: 120, text: 'Clocks changed overnight.' },
+    ]);
+    expect(others(items)).toEqual(['time_in_gap', 'diary_bad_time', 'diary_empty_entry']);
+    const badTime = items.find((i) => i.kind === 'reject' && i.diagnostic.code === 'diary_bad_time');
+    expect(badTime?.kind === 'reject' && badTime.diagnostic).toMatchObject({ source: { line: 9 }, message: expect.stringContaining('`25:70` does not fit the format `H:mm`') });
+  });
+
+  it('refuses an entry-time pattern without a capture group, saying how to fix it', () => {
+    expect(() => compileDiaryEntryTime('^\\d{2}:\\d{2} - ')).toThrow(/no capture group for the time; put the time in parentheses/);
+  });
+
   it('refuses a heading pattern without a capture group, saying how to fix it', () => {
     expect(() => compileDiaryHeading('^## \\d{4}-\\d{2}-\\d{2}$')).toThrow(/no capture group/);
     expect(() => compileDiaryHeading('^(unclosed')).toThrow(/Cannot use the diary heading pattern/);
