@@ -45,7 +45,10 @@ export function applyLexiconOverrides(base: Lexicon, overrides: LexiconOverrides
       continue;
     }
     if (ch.weight !== undefined && (ch.weight < base.scale[0] || ch.weight > base.scale[1])) {
-      problems.push({ line: ch.line, message: `${where}: weight ${ch.weight} is outside the scale ${base.scale[0]} to ${base.scale[1]} of \`${base.name}\`` });
+      problems.push({
+        line: ch.line,
+        message: `${where}: weight ${ch.weight} is outside the scale ${base.scale[0]} to ${base.scale[1]} of \`${base.name}\`; use a weight within it, or copy the lexicon and widen its \`## scale\` line (a list whose scale is 1 to 1, the default, weighs every term 1)`,
+      });
       continue;
     }
     if (ch.action === 'remove') {

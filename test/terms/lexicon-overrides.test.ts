@@ -43,7 +43,7 @@ describe('layered overrides of a bundled lexicon', () => {
     expect(problems.map((p) => p.line)).toEqual([8, 9, 10, 11, 12]);
     expect(problems[0]!.message).toMatch(/already has it .* use reweight/);
     expect(problems[1]!.message).toMatch(/no such term .* use add/);
-    expect(problems[3]!.message).toMatch(/outside the scale -5 to 5/);
+    expect(problems[3]!.message).toMatch(/outside the scale -5 to 5 of `b`; use a weight within it, or copy the lexicon and widen its `## scale` line/);
     expect(problems[4]!.message).toMatch(/category `mood` is not in `b`/);
   });
   it('rejects malformed override lines with their line numbers', () => {
