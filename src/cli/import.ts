@@ -2,6 +2,7 @@ import { readFile } from 'node:fs/promises';
 import { Option, type Command } from 'commander';
 import { usageError } from '../errors.js';
 import type { DedupeOptions } from '../ingest/import/create-deduplicator.js';
+import { DEFAULT_DIARY_DATE_FORMAT, DEFAULT_DIARY_ENTRY_TIME_FORMAT, DEFAULT_DIARY_HEADING, EXAMPLE_DIARY_ENTRY_TIME } from '../ingest/import/read-diary.js';
 import { IMPORT_FORMATS, type ImportFormat } from '../io/open-import-source.js';
 import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
 import { readNamesFile } from '../io/read-names-file.js';
@@ -34,11 +35,11 @@ export function registerImport(program: Command): void {
     .option('--address <addr>', 'mbox: an address the participant sends from (repeatable)', collect)
     .option('--sender <name>', 'chat-lines, chat-table: the participant\'s sender name as written in the export (repeatable)', collect)
     .addOption(new Option('--date-order <order>', 'chat-lines: order of day, month, year when the file cannot settle it').choices(['dmy', 'mdy', 'ymd']))
-    .option('--heading <regex>', 'diary: pattern of a heading line, its first group (or group `date`) holding the date', '^#*\\s*(\\d{4}-\\d{2}-\\d{2})\\s*$')
-    .option('--date-format <format>', 'diary: luxon format of the heading date', 'yyyy-MM-dd')
+    .option('--heading <regex>', 'diary: pattern of a heading line, its first group (or group `date`) holding the date', DEFAULT_DIARY_HEADING)
+    .option('--date-format <format>', 'diary: luxon format of the heading date', DEFAULT_DIARY_DATE_FORMAT)
     .option('--locale <locale>', 'diary: locale of month and day names in headings', 'en')
-    .option('--entry-time <regex>', 'diary: pattern of a line that starts a timed entry under a heading, its first group (or group `time`) holding the clock time, e.g. \'^(\\d{1,2}:\\d{2})\\s*[-–—]\\s*\'')
-    .option('--entry-time-format <format>', 'diary: luxon format of the entry time', 'H:mm')
+    .option('--entry-time <regex>', `diary: pattern of a line that starts a timed entry under a heading, its first group (or group \`time\`) holding the clock time, e.g. '${EXAMPLE_DIARY_ENTRY_TIME}'`)
+    .option('--entry-time-format <format>', 'diary: luxon format of the entry time', DEFAULT_DIARY_ENTRY_TIME_FORMAT)
     .option('--sender-field <name>', 'chat-table: field holding the sender')
     .option('--time-field <name>', 'chat-table: field holding the time')
     .option('--text-field <name>', 'chat-table: field holding the text')

@@ -1,5 +1,5 @@
 import { createReadStream } from 'node:fs';
-import { open } from 'node:fs/promises';
+import { open, readFile } from 'node:fs/promises';
 import { basename, extname } from 'node:path';
 import { createInterface } from 'node:readline';
 import { Readable } from 'node:stream';
@@ -295,7 +295,6 @@ async function* readJsonLines(path: string, maxField: number, onBytes?: (bytes: 
  */
 async function* readJsonArray(path: string, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
   const file = basename(path);
-  const { readFile } = await import('node:fs/promises');
   const bytes = await readFile(path);
   onBytes?.(bytes);
   const text = stripBom(bytes.toString('utf8'));
