@@ -3,7 +3,7 @@ import type winkNLP from 'wink-nlp';
 import type model from 'wink-eng-lite-web-model';
 import { GenerationalTable, HASH_START, hashStep } from './piece-table.js';
 import { loadCoreModel } from './wink-model.js';
-import { readPiece, type WinkTokens } from './wink-pieces.js';
+import { plainWordType, readPiece, type WinkTokens } from './wink-pieces.js';
 
 export { loadCoreModel } from './wink-model.js';
 
@@ -348,6 +348,15 @@ export function pieceSerialEpoch(): number {
 
 /** A piece read by wink (see readPiece), with our tokens of it after spaces and, where they differ, after a break. */
 function newPiece(piece: string): Piece {
+  // A plain word (letters only) is one wink token equal to the piece (see plainWordType): its
+  // reading is that token as appendTokens makes it (lower case, counted when its type is a
+  // word type), and a letter never attaches to a break (see mayAttach).
+  const type = plainWordType(piece);
+  if (type !== undefined) {
+    const norm = piece.toLowerCase();
+    const one: PieceReading = { count: 1, nWords: WORDISH.has(type) ? 1 : 0, norm, raw: piece, kind: kindOf(type), id: idOf(norm), all: undefined };
+    return { text: piece, serial: takeSerial(), ...one, afterBreak: undefined, annotationKey: undefined, annotation: undefined };
+  }
   const wink = readPiece(piece);
   const tokens = withIds({ norm: [], raw: [], kind: [], nWords: 0 }, wink, true);
   const made: Piece = { text: piece, serial: takeSerial(), ...readingOf(tokens), afterBreak: undefined, annotationKey: undefined, annotation: undefined };

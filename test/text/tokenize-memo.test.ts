@@ -106,6 +106,37 @@ describe('tokenizeEnglish memo equals one wink-nlp pass over the whole text', ()
     }
   });
 
+  it('reads every plain word (letters only) as wink-nlp does: all such words of the model in four casings and 20,000 random letter strings (reference: wink-nlp readDoc)', () => {
+    // Plain words skip wink's tokenizer (plainWordType); contractions written without an
+    // apostrophe (`cannot`, `dont`, `AINT`) must still expand, known words keep their model type.
+    const model = loadCoreModel();
+    const words = new Set<string>();
+    for (const w of model.features.lexeme.list) {
+      if (typeof w !== 'string' || !/^[A-Za-z]+$/.test(w)) continue;
+      words.add(w).add(w.toLowerCase()).add(w.toUpperCase()).add(w[0]!.toUpperCase() + w.slice(1).toLowerCase());
+    }
+    const rand = random(20261203);
+    const letters = 'abcdefghijklmnopqrstuvwxyzABCDEFGHIJKLMNOPQRSTUVWXYZ';
+    for (let i = 0; i < 20_000; i++) {
+      let w = '';
+      const n = 1 + Math.floor(rand() * 14);
+      for (let k = 0; k < n; k++) w += letters[Math.floor(rand() * (rand() < 0.8 ? 26 : 52))];
+      words.add(w);
+    }
+    let expanded = 0;
+    for (const w of words) {
+      const ours = tokenizeEnglish(w);
+      const whole = tokenizeEnglishWhole(w);
+      if (ours.norm.length !== whole.norm.length || ours.norm.some((x, k) => x !== whole.norm[k]) || ours.nWords !== whole.nWords || ours.kind.some((x, k) => x !== whole.kind[k]) || ours.raw.some((x, k) => x !== whole.raw[k])) {
+        expect(ours, w).toEqual(whole);
+      }
+      if (whole.norm.length > 1) expanded++;
+    }
+    expect(words.size).toBeGreaterThan(250_000);
+    expect(tokenizeEnglish('Cannot').norm).toEqual(['can', 'not']);
+    expect(expanded).toBeGreaterThan(150);
+  });
+
   it("loads the same core model as wink-eng-lite-web-model's own loader (reference: the package's core())", () => {
     const ours = loadCoreModel();
     const theirs = (model.core as () => unknown)();
