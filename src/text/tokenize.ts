@@ -3,7 +3,7 @@ import type winkNLP from 'wink-nlp';
 import type model from 'wink-eng-lite-web-model';
 import { GenerationalTable, HASH_START, hashStep } from './piece-table.js';
 import { loadCoreModel } from './wink-model.js';
-import { plainWordType, readPiece, type WinkTokens } from './wink-pieces.js';
+import { readPiece, readPlainPiece, type PlainPiece, type WinkTokens } from './wink-pieces.js';
 
 export { loadCoreModel } from './wink-model.js';
 
@@ -346,17 +346,28 @@ export function pieceSerialEpoch(): number {
   return serialEpoch;
 }
 
+/**
+ * Our reading of a plain piece (see readPlainPiece), as appendTokens makes it: the word in lower
+ * case, counted when its type is a word type, then the mark (punctuation, attached, and never a
+ * contraction piece). A letter never attaches to a break (see mayAttach), so a plain piece reads
+ * the same after a break.
+ */
+function plainReading(plain: PlainPiece): PieceReading {
+  const norm = plain.word.toLowerCase();
+  if (plain.mark === '') return { count: 1, nWords: WORDISH.has(plain.wordType) ? 1 : 0, norm, raw: plain.word, kind: kindOf(plain.wordType), id: idOf(norm), all: undefined };
+  return readingOf({
+    norm: [norm, plain.mark],
+    raw: [plain.word, plain.mark],
+    kind: [kindOf(plain.wordType), kindOf(plain.markType)],
+    nWords: (WORDISH.has(plain.wordType) ? 1 : 0) + (WORDISH.has(plain.markType) ? 1 : 0),
+    ids: [idOf(norm), idOf(plain.mark)],
+  });
+}
+
 /** A piece read by wink (see readPiece), with our tokens of it after spaces and, where they differ, after a break. */
 function newPiece(piece: string): Piece {
-  // A plain word (letters only) is one wink token equal to the piece (see plainWordType): its
-  // reading is that token as appendTokens makes it (lower case, counted when its type is a
-  // word type), and a letter never attaches to a break (see mayAttach).
-  const type = plainWordType(piece);
-  if (type !== undefined) {
-    const norm = piece.toLowerCase();
-    const one: PieceReading = { count: 1, nWords: WORDISH.has(type) ? 1 : 0, norm, raw: piece, kind: kindOf(type), id: idOf(norm), all: undefined };
-    return { text: piece, serial: takeSerial(), ...one, afterBreak: undefined, annotationKey: undefined, annotation: undefined };
-  }
+  const plain = readPlainPiece(piece);
+  if (plain !== undefined) return { text: piece, serial: takeSerial(), ...plainReading(plain), afterBreak: undefined, annotationKey: undefined, annotation: undefined };
   const wink = readPiece(piece);
   const tokens = withIds({ norm: [], raw: [], kind: [], nWords: 0 }, wink, true);
   const made: Piece = { text: piece, serial: takeSerial(), ...readingOf(tokens), afterBreak: undefined, annotationKey: undefined, annotation: undefined };

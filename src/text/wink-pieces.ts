@@ -130,26 +130,61 @@ export function preparePieceReader(): void {
 }
 
 /**
- * wink's token type when it reads `text` as one token equal to `text` and `text` is a plain
- * word, ASCII letters only (most new pieces of a corpus); otherwise undefined, and readPiece must
- * read it. For such a piece wink's tokenizer (src/tokenizer.js `tokenize`) first asks the lexeme
- * cache: a known word that is not a contraction is one token of its own type, a contraction
- * (`cannot`, `dont`, `AINT`) expands into several; an unknown one falls to the model's first
- * token-category pattern, `^[a-z…]+$` (case-insensitive) for `word`, and is added as one word
- * token. test/text/tokenize-memo.test.ts checks this against readPiece on every letters-only
- * word of the model in four casings and on 20,000 random letter strings.
+ * A plain piece: a word of ASCII letters, alone or followed by one mark (`.`, `,`, `!`, `?`,
+ * `;`, `:`), with wink's type for each (`mark` is empty when there is none).
  */
-export function plainWordType(text: string): string | undefined {
-  for (let k = 0; k < text.length; k++) {
+export interface PlainPiece {
+  word: string;
+  wordType: string;
+  mark: string;
+  markType: string;
+}
+
+/** Marks a plain piece may end with: in wink's word-then-punctuation pattern, and never attached to the word before (see appendTokens). */
+const PLAIN_MARKS = '.,!?;:';
+
+/**
+ * How wink reads `text` when it is a plain piece (most new pieces of a corpus: three in four are
+ * letters only, one in five letters and a mark); undefined for any other piece, which readPiece
+ * must read. Following wink's tokenizer (src/tokenizer.js `tokenize`, `processWordRP`): a piece
+ * the lexeme cache knows (`etc.` too) is one token of its model type, unless it is a contraction
+ * such as `cannot`, `dont` or `AINT`, which expands into several and is left to readPiece; an
+ * unknown letters-only piece matches the model's first
+ * token-category pattern, `^[a-z…]+$` (case-insensitive), and is one `word` token; an unknown
+ * word with a mark matches the second, word-then-punctuation, and is added as two tokens, the
+ * word (its model type when known, without contraction expansion; else `word`) and the mark,
+ * except a single letter and a point (`a.`), added as one `word` token.
+ * test/text/tokenize-memo.test.ts checks this against wink-nlp's readDoc.
+ */
+export function readPlainPiece(text: string): PlainPiece | undefined {
+  const n = text.length;
+  if (n === 0) return undefined;
+  const last = text.charCodeAt(n - 1);
+  const marked = PLAIN_MARKS.includes(text[n - 1] as string) && n > 1;
+  const letters = marked ? n - 1 : n;
+  for (let k = 0; k < letters; k++) {
     const c = text.charCodeAt(k) | 0x20;
     if (c < 0x61 || c > 0x7a) return undefined;
   }
-  if (text.length === 0) return undefined;
+  if (!marked && ((last | 0x20) < 0x61 || (last | 0x20) > 0x7a)) return undefined;
   reader ??= loadPieceReader();
-  const lexeme = reader.known[text];
-  if (lexeme === undefined) return 'word';
-  const found = reader.cache.lookup(text);
-  return found !== null && found.length === 1 ? reader.cache.property(lexeme, 'tokenType') : undefined;
+  const { known, cache } = reader;
+  const lexeme = known[text];
+  if (lexeme !== undefined) {
+    const found = cache.lookup(text);
+    return found !== null && found.length === 1 ? { word: text, wordType: cache.property(lexeme, 'tokenType'), mark: '', markType: '' } : undefined;
+  }
+  if (!marked || (n === 2 && last === 0x2e)) return { word: text, wordType: 'word', mark: '', markType: '' };
+  const word = text.slice(0, -1);
+  const mark = text[n - 1] as string;
+  const wordLexeme = known[word];
+  const markLexeme = known[mark];
+  return {
+    word,
+    wordType: wordLexeme === undefined ? 'word' : cache.property(wordLexeme, 'tokenType'),
+    mark,
+    markType: markLexeme === undefined ? 'punctuation' : cache.property(markLexeme, 'tokenType'),
+  };
 }
 
 /** wink's tokens of one piece of text (no spaces, or one run of tabs and line breaks), as a freshly loaded wink-nlp reads it. */
