@@ -86,7 +86,8 @@ export function startScorePool(size: number): ScorePool | undefined {
     size,
     queued: () => pending.reduce((sum, p) => sum + p.size, 0),
     setLexicons(lexicons) {
-      const data = { lexicons: lexicons.map((l) => l.lexicon) };
+      // With their hashes, which the workers need not work out again.
+      const data = { lexicons: lexicons.map((l) => l.lexicon), hashes: lexicons.map((l) => l.ref.sha256) };
       for (const worker of workers) worker.postMessage(data);
     },
     score(texts, part = 'all') {

@@ -13,9 +13,9 @@ import { preparePieceReader } from '../text/wink-pieces.js';
 let lexicons: CompiledLexicon[] = [];
 let columns = 0;
 
-parentPort?.on('message', (message: { lexicons: Lexicon[] } | { id: number; texts: string[]; part: ScorePart }) => {
+parentPort?.on('message', (message: { lexicons: Lexicon[]; hashes: string[] } | { id: number; texts: string[]; part: ScorePart }) => {
   if ('lexicons' in message) {
-    lexicons = message.lexicons.map(compileLexicon);
+    lexicons = message.lexicons.map((lexicon, l) => compileLexicon(lexicon, message.hashes[l]));
     columns = scoreColumns(lexicons).length;
     return;
   }

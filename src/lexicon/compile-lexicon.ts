@@ -105,15 +105,16 @@ function buildTables(lexicon: Lexicon): Tables {
 /**
  * Compiles a parsed lexicon. Terms are tokenized with the tokenizer of the lexicon's language,
  * so phrases, contractions and emoji are matched token by token exactly as the text is.
- * Only `accepted` terms are compiled.
+ * Only `accepted` terms are compiled. `sha256` is the lexicon's lexiconHash, for a caller that
+ * has it already (a scoring worker is sent it with the lexicon).
  *
  * The matching tables are built on first use, not here: a thread that only reads and writes
  * while workers score (see io/score-pool) then never loads the tokenizer. After the first use
  * they are plain read-only properties.
  */
-export function compileLexicon(lexicon: Lexicon): CompiledLexicon {
+export function compileLexicon(lexicon: Lexicon, sha256 = lexiconHash(lexicon)): CompiledLexicon {
   const eager: Omit<CompiledLexicon, keyof Tables> = {
-    ref: { name: lexicon.name, version: lexicon.version, sha256: lexiconHash(lexicon), license: lexicon.license, source: lexicon.source },
+    ref: { name: lexicon.name, version: lexicon.version, sha256, license: lexicon.license, source: lexicon.source },
     lexicon,
     language: lexicon.language,
     scoring: lexicon.scoring,
