@@ -121,6 +121,8 @@ export async function runStudy(
     stages?: Array<[string, StudyStage]>;
     seed?: number;
     onProgress?: (rows: number) => void;
+    /** Called once, when the first scored rows are written (see RunScoreOptions.onFirstRows). */
+    onFirstRows?: () => void;
     /** Environment variables the study may name (`privacy.keyEnv`), passed in by the caller. */
     env?: Readonly<Record<string, string | undefined>>;
   },
@@ -170,6 +172,7 @@ export async function runStudy(
     redact,
     ...(key ? { person } : {}),
     onProgress: options.onProgress,
+    onFirstRows: options.onFirstRows,
     onRawEntry: auditors.length === 0 ? undefined : (entry) => {
       const bin = dateOfDayNumber(localDayOf(entry.instant, entry.zone, dayStart).day);
       for (const a of auditors) a.auditor.add({ id: entry.id, person: entry.person, text: entry.text, bin });
