@@ -228,6 +228,68 @@ export function formatLocal(instant: number, offsetMinutes: number): string {
   return local + offsetText(offsetMinutes);
 }
 
+/** The bytes of lastDatePart (ASCII), for writeUtcTime and writeLocalTime. */
+let lastDateBytes = new Uint8Array(0);
+let lastDateBytesDay = NaN;
+
+/** Writes ASCII `text` into `buffer` at `at`; returns where it ended. */
+function writeAscii(buffer: Uint8Array, at: number, text: string): number {
+  for (let k = 0; k < text.length; k++) buffer[at++] = text.charCodeAt(k);
+  return at;
+}
+
+/** Writes the two decimal digits of `n` (0–99). */
+function writeTwo(buffer: Uint8Array, at: number, n: number): number {
+  buffer[at] = 48 + ((n / 10) | 0);
+  buffer[at + 1] = 48 + (n % 10);
+  return at + 2;
+}
+
+/**
+ * Writes isoWithoutZone(ms) as bytes; undefined when ms is not a whole number or its year is
+ * outside 0000–9999 (the string formatters handle those).
+ */
+function writeIsoWithoutZone(buffer: Uint8Array, at: number, ms: number): number | undefined {
+  if (!Number.isInteger(ms)) return undefined;
+  const day = Math.floor(ms / DAY_MS);
+  if (day !== lastDateBytesDay) {
+    const iso = new Date(day * DAY_MS).toISOString();
+    if (iso.length !== 24) return undefined;
+    lastDateBytes = Uint8Array.from(iso.slice(0, 11), (c) => c.charCodeAt(0));
+    lastDateBytesDay = day;
+  }
+  for (let k = 0; k < 11; k++) buffer[at++] = lastDateBytes[k] as number;
+  let rest = ms - day * DAY_MS;
+  const milli = rest % 1000;
+  rest = (rest - milli) / 1000;
+  const second = rest % 60;
+  rest = (rest - second) / 60;
+  const minute = rest % 60;
+  at = writeTwo(buffer, at, (rest - minute) / 60);
+  buffer[at++] = 58; // :
+  at = writeTwo(buffer, at, minute);
+  buffer[at++] = 58;
+  at = writeTwo(buffer, at, second);
+  buffer[at++] = 46; // .
+  buffer[at++] = 48 + ((milli / 100) | 0);
+  return writeTwo(buffer, at, milli % 100);
+}
+
+/** Writes formatUtc(instant) as ASCII bytes into `buffer` at `at` (at most 27); returns where it ended. */
+export function writeUtcTime(buffer: Uint8Array, at: number, instant: number): number {
+  const end = writeIsoWithoutZone(buffer, at, instant);
+  if (end === undefined) return writeAscii(buffer, at, formatUtc(instant));
+  buffer[end] = 90; // Z
+  return end + 1;
+}
+
+/** Writes formatLocal(instant, offsetMinutes) as ASCII bytes into `buffer` at `at` (at most 32); returns where it ended. */
+export function writeLocalTime(buffer: Uint8Array, at: number, instant: number, offsetMinutes: number): number {
+  const end = writeIsoWithoutZone(buffer, at, instant + offsetMinutes * 60000);
+  if (end === undefined) return writeAscii(buffer, at, formatLocal(instant, offsetMinutes));
+  return writeAscii(buffer, end, offsetText(offsetMinutes));
+}
+
 /** `+02:00` for 120 minutes (RFC 3339 `time-numoffset`), remembered per offset (a file has few). */
 const offsetTexts = new Map<number, string>();
 

@@ -27,6 +27,12 @@ export async function writeFileAtomic(path: string, content: string | Uint8Array
 export interface AtomicLineWriter {
   /** Appends a line; returns a promise only when the buffer was flushed and the stream needs draining. */
   write(line: string): Promise<void> | undefined;
+  /**
+   * Appends a line that `fill` writes as UTF-8 bytes into `buffer` from `at`, returning where it
+   * ended (no line end: the writer adds it); `most` bounds its length in bytes. For lines built
+   * from parts without joining them into a string first. Returns as `write` does.
+   */
+  writeWith(most: number, fill: (buffer: Buffer, at: number) => number): Promise<void> | undefined;
   commit(): Promise<void>;
   abort(): Promise<void>;
 }
@@ -51,22 +57,28 @@ export async function openAtomicLineWriter(path: string): Promise<AtomicLineWrit
     used = 0;
     return send(chunk);
   };
-  return {
-    write(line: string) {
-      // A UTF-16 code unit takes at most 3 bytes of UTF-8.
-      const most = 3 * line.length + 1;
-      if (used + most <= SIZE) {
-        used += buffer.write(line, used, 'utf8');
-        buffer[used++] = 10;
-        return undefined;
-      }
-      const flushed = flush();
-      // A line longer than the buffer (a kept long text) goes out on its own.
-      if (most > SIZE) return send(Buffer.from(`${line}\n`, 'utf8')) ?? flushed;
-      used += buffer.write(line, used, 'utf8');
+  const writeWith = (most: number, fill: (buffer: Buffer, at: number) => number): Promise<void> | undefined => {
+    if (used + most + 1 <= SIZE) {
+      used = fill(buffer, used);
       buffer[used++] = 10;
-      return flushed;
-    },
+      return undefined;
+    }
+    const flushed = flush();
+    if (most + 1 > SIZE) {
+      // A line longer than the buffer (a kept long text) goes out on its own.
+      const own = Buffer.allocUnsafe(most + 1);
+      const end = fill(own, 0);
+      own[end] = 10;
+      return send(own.subarray(0, end + 1)) ?? flushed;
+    }
+    used = fill(buffer, used);
+    buffer[used++] = 10;
+    return flushed;
+  };
+  return {
+    // A UTF-16 code unit takes at most 3 bytes of UTF-8.
+    write: (line: string) => writeWith(3 * line.length, (into, at) => at + into.write(line, at, 'utf8')),
+    writeWith,
     async commit() {
       await flush();
       await new Promise<void>((resolve, reject) => stream.end((error?: Error | null) => (error ? reject(error) : resolve())));

@@ -9,7 +9,7 @@ import type { TableFormat } from '../ingest/read-records.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { csvRow } from '../report/csv.js';
-import { scoreRowWriter, scoresHeader } from '../report/score-rows.js';
+import { scoreRowFiller, scoresHeader } from '../report/score-rows.js';
 import { scoreColumns, scoredEntryFrom, type ScoreColumn } from '../score/score-entry.js';
 import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../score/score-text.js';
 import { createScorePool, scoreWorkerCount, type ScorePool } from './score-pool.js';
@@ -132,7 +132,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
   const reconciliation: Reconciliation = { read: 0, scored: 0, rejected: {}, dropped: {} };
   const inputs: InputRecord[] = [];
   const mapPerson = options.person ?? ((id: string) => id);
-  const formatRow = scoreRowWriter(columns, options.lexicons, keepText);
+  const row = scoreRowFiller(columns, options.lexicons, keepText);
   try {
     await scores.write(csvRow(scoresHeader(columns, options.lexicons, keepText)));
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
@@ -189,7 +189,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
             if (text !== undefined) entry.text = text;
             options.onEntry(entry);
           }
-          const pending = scores.write(formatRow(raw, scored, i, text));
+          const pending = scores.writeWith(row.most(raw, text), (buffer, at) => row.fill(buffer, at, raw, scored, i, text));
           if (pending) await pending;
         }
       }

@@ -1,5 +1,5 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
-import { formatLocal, formatUtc } from '../ingest/parse-instant.js';
+import { writeLocalTime, writeUtcTime } from '../ingest/parse-instant.js';
 import type { ScoreColumn } from '../score/score-entry.js';
 import type { BatchScores } from '../score/score-text.js';
 import type { RawEntry } from '../types.js';
@@ -24,12 +24,22 @@ export function scoresHeader(columns: readonly ScoreColumn[], lexicons: readonly
   return header;
 }
 
+/** Bytes a numeric or time field of a scores row takes at most (formatNumber and the time formats stay well within it). */
+const NUMBER_BYTES = 40;
+
+/** A scores row writer: `most` bounds the row's bytes, `fill` writes it (see AtomicLineWriter.writeWith). */
+export interface ScoreRowFiller {
+  most(entry: RawEntry, text?: string): number;
+  fill(buffer: Buffer, at: number, entry: RawEntry, batch: BatchScores, i: number, text?: string): number;
+}
+
 /**
- * A row formatter for a scores file, matching scoresHeader: the column layout is worked out once,
- * so formatting a row reads the batch's typed arrays directly (no per-entry objects).
- * Row `i` of `batch` holds the scores of `entry`; `text` is written when the file keeps text.
+ * A row writer for a scores file, matching scoresHeader: the column layout is worked out once,
+ * and a row is written as bytes straight from the entry and the batch's typed arrays (no string
+ * per field, no joined string per row). Row `i` of `batch` holds the scores of `entry`; `text`
+ * is written when the file keeps text. The bytes are those of scoreRowText's line in UTF-8.
  */
-export function scoreRowWriter(columns: readonly ScoreColumn[], lexicons: readonly CompiledLexicon[], keepText: boolean): (entry: RawEntry, batch: BatchScores, i: number, text?: string) => string {
+export function scoreRowFiller(columns: readonly ScoreColumn[], lexicons: readonly CompiledLexicon[], keepText: boolean): ScoreRowFiller {
   const n = columns.length;
   const nl = lexicons.length;
   const indexOf = new Map(columns.map((c, k) => [c.name, k]));
@@ -38,27 +48,80 @@ export function scoreRowWriter(columns: readonly ScoreColumn[], lexicons: readon
     rules: lex.scoring !== 'vader',
     lexicon: l,
   }));
-  // The fields of one row, joined once (one string per row instead of one per field added).
-  const fields: string[] = [];
-  return (entry, batch, i, text) => {
-    // Numbers and RFC 3339 times never need quoting: only the id, person, zone and text go through csvField.
-    let f = 0;
-    fields[f++] = csvField(entry.id);
-    fields[f++] = csvField(entry.person);
-    fields[f++] = formatUtc(entry.instant);
-    fields[f++] = csvField(entry.zone);
-    fields[f++] = formatLocal(entry.instant, entry.offsetMinutes);
-    fields[f++] = integerText(batch.words[i] as number);
-    const row = i * n;
-    for (const { columns: own, rules, lexicon } of layout) {
-      for (const c of own) fields[f++] = formatNumber(batch.values[row + c]);
-      if (rules) {
-        for (const c of own) fields[f++] = integerText(batch.matched[row + c] as number);
-        fields[f++] = integerText(batch.negated[i * nl + lexicon] as number);
+  const numericFields = 3 + layout.reduce((sum, { columns: own, rules }) => sum + own.length * (rules ? 2 : 1) + (rules ? 1 : 0), 0);
+  const fieldCount = SCORE_ID_COLUMNS.length + numericFields - 3 + (keepText ? 1 : 0);
+  return {
+    most: (entry, text) => NUMBER_BYTES * numericFields + fieldCount + textBytes(entry.id) + textBytes(entry.person) + textBytes(entry.zone) + (keepText ? textBytes(text ?? '') : 0),
+    fill(buffer, at, entry, batch, i, text) {
+      // Numbers and RFC 3339 times never need quoting: only the id, person, zone and text may.
+      at = writeTextField(buffer, at, entry.id);
+      buffer[at++] = COMMA;
+      at = writeTextField(buffer, at, entry.person);
+      buffer[at++] = COMMA;
+      at = writeUtcTime(buffer, at, entry.instant);
+      buffer[at++] = COMMA;
+      at = writeTextField(buffer, at, entry.zone);
+      buffer[at++] = COMMA;
+      at = writeLocalTime(buffer, at, entry.instant, entry.offsetMinutes);
+      buffer[at++] = COMMA;
+      at = writeAscii(buffer, at, integerText(batch.words[i] as number));
+      const row = i * n;
+      for (const { columns: own, rules, lexicon } of layout) {
+        for (const c of own) {
+          buffer[at++] = COMMA;
+          at = writeAscii(buffer, at, formatNumber(batch.values[row + c]));
+        }
+        if (rules) {
+          for (const c of own) {
+            buffer[at++] = COMMA;
+            at = writeAscii(buffer, at, integerText(batch.matched[row + c] as number));
+          }
+          buffer[at++] = COMMA;
+          at = writeAscii(buffer, at, integerText(batch.negated[i * nl + lexicon] as number));
+        }
       }
-    }
-    if (keepText) fields[f++] = csvField(text ?? '');
-    fields.length = f;
-    return fields.join(',');
+      if (keepText) {
+        buffer[at++] = COMMA;
+        at = writeTextField(buffer, at, text ?? '');
+      }
+      return at;
+    },
   };
+}
+
+/**
+ * A scores row as a string (the line scoreRowFiller writes, decoded): for callers that want
+ * lines rather than bytes.
+ */
+export function scoreRowText(filler: ScoreRowFiller, entry: RawEntry, batch: BatchScores, i: number, text?: string): string {
+  const buffer = Buffer.allocUnsafe(filler.most(entry, text));
+  return buffer.toString('utf8', 0, filler.fill(buffer, 0, entry, batch, i, text));
+}
+
+const COMMA = 0x2c;
+
+/** Bytes csvField(value) takes at most in UTF-8: every code unit doubled (quotes), 3 bytes each, and two quotes. */
+function textBytes(value: string): number {
+  return 6 * value.length + 2;
+}
+
+/** Writes ASCII `text` at `at`; returns where it ended. */
+function writeAscii(buffer: Buffer, at: number, text: string): number {
+  for (let k = 0; k < text.length; k++) buffer[at++] = text.charCodeAt(k);
+  return at;
+}
+
+/**
+ * Writes csvField(value) in UTF-8 at `at`; returns where it ended. Plain ASCII without a quote,
+ * comma or line break (ids, person ids, zone names, mostly) is copied byte by byte; anything else
+ * goes through csvField and Buffer's UTF-8 encoder.
+ */
+function writeTextField(buffer: Buffer, at: number, value: string): number {
+  const start = at;
+  for (let k = 0; k < value.length; k++) {
+    const c = value.charCodeAt(k);
+    if (c >= 0x80 || c === 0x22 || c === COMMA || c === 0x0a || c === 0x0d) return start + buffer.write(csvField(value), start, 'utf8');
+    buffer[at++] = c;
+  }
+  return at;
 }
