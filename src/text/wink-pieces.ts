@@ -169,11 +169,9 @@ export function readPlainPiece(text: string): PlainPiece | undefined {
   if (!marked && ((last | 0x20) < 0x61 || (last | 0x20) > 0x7a)) return undefined;
   reader ??= loadPieceReader();
   const { known, cache } = reader;
-  const lexeme = known[text];
-  if (lexeme !== undefined) {
-    const found = cache.lookup(text);
-    return found !== null && found.length === 1 ? { word: text, wordType: cache.property(lexeme, 'tokenType'), mark: '', markType: '' } : undefined;
-  }
+  // One look-up in the lexeme cache: null for an unknown piece, [lexeme] for a known one, more for a contraction.
+  const found = cache.lookup(text);
+  if (found !== null) return found.length === 1 ? { word: text, wordType: cache.property(found[0] as number, 'tokenType'), mark: '', markType: '' } : undefined;
   if (!marked || (n === 2 && last === 0x2e)) return { word: text, wordType: 'word', mark: '', markType: '' };
   const word = text.slice(0, -1);
   const mark = text[n - 1] as string;
