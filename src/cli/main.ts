@@ -1,6 +1,7 @@
-import { Command, CommanderError } from 'commander';
+import type { Command } from 'commander';
 import { exitCodeFor, LexichronError } from '../errors.js';
 import { TOOL_VERSION } from '../version.js';
+import { raiseJitBudget, restoreJitBudget } from './jit-budget.js';
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
@@ -26,6 +27,7 @@ const VERSION_FLAGS = new Set(['--version', '-V']);
 
 /** Builds the commander program; with `only`, registers just that command when it exists (none for --version). */
 export async function buildProgram(only?: string): Promise<Command> {
+  const { Command } = await import('commander');
   const program = new Command('lexichron')
     .description('Per-person affect time series from timestamped text, validated against self-reports.')
     .version(TOOL_VERSION)
@@ -39,11 +41,19 @@ export async function buildProgram(only?: string): Promise<Command> {
 
 /** Runs the command line; returns the exit code (0 ok, 1 internal, 2 usage, 3 bad input data). */
 export async function main(argv: string[]): Promise<number> {
-  const program = await buildProgram(argv[2]);
+  // A scoring run starts its scoring thread first thing (it loads wink-nlp's model while the
+  // rest of the start-up happens; commander is imported only after it for that reason), and V8
+  // optimizes less eagerly until the first scores are written (see jit-budget.ts).
+  const scoring = argv[2] === 'score' || argv[2] === 'run';
+  const pool = scoring ? await import('../io/score-pool.js') : undefined;
+  if (scoring) raiseJitBudget();
+  pool?.prestartScoreWorker();
   try {
+    const program = await buildProgram(argv[2]);
     await program.parseAsync(argv);
     return typeof process.exitCode === 'number' ? process.exitCode : 0;
   } catch (error) {
+    const { CommanderError } = await import('commander');
     if (error instanceof CommanderError) {
       if (error.exitCode === 0) return 0;
       return 2;
@@ -54,5 +64,8 @@ export async function main(argv: string[]): Promise<number> {
     }
     process.stderr.write(`lexichron: internal error, please report it with the command you ran: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
     return 1;
+  } finally {
+    restoreJitBudget();
+    await pool?.releasePrestartedWorker();
   }
 }

@@ -3,7 +3,7 @@ import { relative } from 'node:path';
 import { runStudy } from '../pipeline.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { inputError } from '../errors.js';
-import { raiseJitBudget, restoreJitBudget } from './jit-budget.js';
+import { restoreJitBudget } from './jit-budget.js';
 import { parseMaxRejects, progressReporter, tooManyRejects } from './common-options.js';
 import { studyStages } from './study-stages.js';
 
@@ -16,11 +16,9 @@ export function registerRun(program: Command): void {
     .option('--seed <n>', 'seed for bootstrap and surrogate draws', '20261201')
     .action(async (studyPath: string, opts: Record<string, unknown>) => {
       const progress = progressReporter('scored');
-      // V8 optimizes less eagerly until the first scores are written (see jit-budget.ts).
-      raiseJitBudget();
-      const result = await runStudy(studyPath, { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env })
-        .finally(progress.stop)
-        .finally(restoreJitBudget);
+      // V8 optimizes less eagerly until the first scores are written (see jit-budget.ts and main.ts).
+      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env };
+      const result = await runStudy(studyPath, options).finally(progress.stop);
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;
       process.stderr.write(`series: ${s.persons} persons, ${s.bins} bins, ${s.observed} observed\n`);

