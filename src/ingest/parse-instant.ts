@@ -190,29 +190,13 @@ function parseWithFormat(value: string, zone: string, options: TimeOptions): Ins
 }
 
 const DAY_MS = 86_400_000;
-const TWO_DIGITS = Array.from({ length: 60 }, (_, k) => String(k).padStart(2, '0'));
-const THREE_DIGITS = Array.from({ length: 1000 }, (_, k) => String(k).padStart(3, '0'));
-/** The date part (`2026-03-29T`) of the last day formatted: consecutive rows mostly share a day. */
-let lastDay = NaN;
-let lastDatePart = '';
+/** Where isoWithoutZone writes before it reads the characters back (formatting is synchronous). */
+const SCRATCH = Buffer.alloc(32);
 
 /** `ms` (milliseconds since the epoch, read as UTC) as `YYYY-MM-DDTHH:MM:SS.mmm`, the form of toISOString without `Z`. */
 function isoWithoutZone(ms: number): string {
-  const day = Math.floor(ms / DAY_MS);
-  if (day !== lastDay) {
-    const iso = new Date(day * DAY_MS).toISOString();
-    if (iso.length !== 24) return new Date(ms).toISOString().slice(0, -1); // years beyond 0000–9999
-    lastDay = day;
-    lastDatePart = iso.slice(0, 11);
-  }
-  let rest = ms - day * DAY_MS;
-  const milli = rest % 1000;
-  rest = (rest - milli) / 1000;
-  const second = rest % 60;
-  rest = (rest - second) / 60;
-  const minute = rest % 60;
-  const hour = (rest - minute) / 60;
-  return `${lastDatePart}${TWO_DIGITS[hour]}:${TWO_DIGITS[minute]}:${TWO_DIGITS[second]}.${THREE_DIGITS[milli]}`;
+  const end = writeIsoWithoutZone(SCRATCH, 0, ms);
+  return end === undefined ? new Date(ms).toISOString().slice(0, -1) : SCRATCH.toString('latin1', 0, end);
 }
 
 /** Formats an instant as RFC 3339 UTC with milliseconds (`2026-03-29T06:15:00.000Z`). */
@@ -228,7 +212,7 @@ export function formatLocal(instant: number, offsetMinutes: number): string {
   return local + offsetText(offsetMinutes);
 }
 
-/** The bytes of lastDatePart (ASCII), for writeUtcTime and writeLocalTime. */
+/** The date part (`2026-03-29T`, ASCII bytes) of the last day written: consecutive rows mostly share a day. */
 let lastDateBytes = new Uint8Array(0);
 let lastDateBytesDay = NaN;
 
@@ -246,8 +230,9 @@ function writeTwo(buffer: Uint8Array, at: number, n: number): number {
 }
 
 /**
- * Writes isoWithoutZone(ms) as bytes; undefined when ms is not a whole number or its year is
- * outside 0000–9999 (the string formatters handle those).
+ * Writes `ms` (milliseconds since the epoch, read as UTC) as `YYYY-MM-DDTHH:MM:SS.mmm` in ASCII
+ * bytes; undefined when ms is not a whole number or its year is outside 0000–9999 (then the
+ * callers fall back to Date's toISOString).
  */
 function writeIsoWithoutZone(buffer: Uint8Array, at: number, ms: number): number | undefined {
   if (!Number.isInteger(ms)) return undefined;
