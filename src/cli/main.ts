@@ -45,9 +45,9 @@ export async function main(argv: string[]): Promise<number> {
   // rest of the start-up happens; commander is imported only after it for that reason), and V8
   // optimizes less eagerly until the first scores are written (see jit-budget.ts).
   const scoring = argv[2] === 'score' || argv[2] === 'run';
-  const pool = scoring ? await import('../io/score-pool.js') : undefined;
+  const scorePool = scoring ? await import('../io/score-pool.js') : undefined;
   if (scoring) raiseJitBudget();
-  pool?.prestartScoreWorker();
+  scorePool?.prestartScoreWorker();
   try {
     const program = await buildProgram(argv[2]);
     await program.parseAsync(argv);
@@ -66,6 +66,6 @@ export async function main(argv: string[]): Promise<number> {
     return 1;
   } finally {
     restoreJitBudget();
-    await pool?.releasePrestartedWorker();
+    await scorePool?.releasePrestartedWorker();
   }
 }
