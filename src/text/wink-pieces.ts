@@ -149,9 +149,9 @@ const PLAIN_MARKS = '.,!?;:';
  * must read. Following wink's tokenizer (src/tokenizer.js `tokenize`, `processWordRP`): a piece
  * the lexeme cache knows (`etc.` too) is one token of its model type, unless it is a contraction
  * such as `cannot`, `dont` or `AINT`, which expands into several and is left to readPiece; an
- * unknown letters-only piece matches the model's first
- * token-category pattern, `^[a-z…]+$` (case-insensitive), and is one `word` token; an unknown
- * word with a mark matches the second, word-then-punctuation, and is added as two tokens, the
+ * unknown letters-only piece matches the model's first token-category pattern, `^[a-z…]+$`
+ * (case-insensitive), and is one `word` token; an unknown word with a mark matches the second,
+ * word-then-punctuation, and is added as two tokens, the
  * word (its model type when known, without contraction expansion; else `word`) and the mark,
  * except a single letter and a point (`a.`), added as one `word` token.
  * test/text/tokenize-memo.test.ts checks this against wink-nlp's readDoc.
@@ -166,7 +166,6 @@ export function readPlainPiece(text: string): PlainPiece | undefined {
     const c = text.charCodeAt(k) | 0x20;
     if (c < 0x61 || c > 0x7a) return undefined;
   }
-  if (!marked && ((last | 0x20) < 0x61 || (last | 0x20) > 0x7a)) return undefined;
   reader ??= loadPieceReader();
   const { known, cache } = reader;
   // One look-up in the lexeme cache: null for an unknown piece, [lexeme] for a known one, more for a contraction.
