@@ -1,4 +1,4 @@
-import { tokenize } from '../text/tokenize.js';
+import { termNorms } from '../text/tokenize.js';
 import type { LexiconRef } from '../types.js';
 import { lexiconHash } from './lexicon-hash.js';
 import type { Aggregation, Lexicon, NegationRule } from './lexicon-types.js';
@@ -75,7 +75,7 @@ function buildTables(lexicon: Lexicon): Tables {
       addHit(wildcards, row.term.slice(0, -1).toLocaleLowerCase(lexicon.language), row.term, c, row.weight);
       continue;
     }
-    const tokens = tokenize(row.term, lexicon.language).norm;
+    const tokens = termNorms(row.term, lexicon.language);
     if (tokens.length === 0) continue;
     if (tokens.length === 1) {
       addHit(single, tokens[0] as string, row.term, c, row.weight);

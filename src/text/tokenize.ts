@@ -541,3 +541,19 @@ export function tokenizeSegmenter(text: string, language: string): Tokens {
 export function tokenize(text: string, language = 'en'): Tokens {
   return language === 'en' || language.startsWith('en-') ? tokenizeEnglish(text) : tokenizeSegmenter(text, language);
 }
+
+/**
+ * The normal forms of `term`'s tokens (tokenize(term, language).norm), without the memo when the
+ * term is one plain English piece (see readPlainPiece: most terms of a word list), as
+ * plainReading gives them. For building a lexicon's tables, which tokenizes every term once.
+ */
+export function termNorms(term: string, language = 'en'): string[] {
+  if (language === 'en' || language.startsWith('en-')) {
+    const plain = readPlainPiece(term);
+    if (plain !== undefined) {
+      const word = plain.word.toLowerCase();
+      return plain.mark === '' ? [word] : [word, plain.mark];
+    }
+  }
+  return tokenize(term, language).norm;
+}

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { TokenKind, tokenize, tokenizeSegmenter } from '../../src/text/tokenize.js';
+import { loadLexicons } from '../../src/io/load-lexicon.js';
+import { TokenKind, termNorms, tokenize, tokenizeSegmenter } from '../../src/text/tokenize.js';
 
 describe('tokenize (English, wink-nlp)', () => {
   it('lower-cases words and counts them', () => {
@@ -62,5 +63,25 @@ describe('tokenizeSegmenter (other languages, Intl.Segmenter)', () => {
     const t = tokenizeSegmenter('今日は疲れた', 'ja');
     expect(t.nWords).toBeGreaterThanOrEqual(2);
     expect(t.norm.join('')).toBe('今日は疲れた');
+  });
+});
+
+describe('termNorms (the tokens of a lexicon term, for its tables)', () => {
+  it("equals tokenize(term).norm for every term of the bundled lexicons and for edge cases (tokenize is checked against wink-nlp's readDoc in tokenize-memo.test.ts)", async () => {
+    const lexicons = await loadLexicons(['afinn-165', 'vader', 'daily-constructs', 'basic-emotions']);
+    const terms = lexicons.flatMap((l) => l.lexicon.terms.map((t) => t.term));
+    terms.push('cannot', 'Cannot', 'dont', 'AINT', 'cannot,', 'etc.', 'a.', 'x', 'Happy!', 'well...', "can't", 'kind of', '🐝', ':)', 'naïve', 'e.g.', '');
+    expect(terms.length).toBeGreaterThan(11_000);
+    let plain = 0;
+    for (const term of terms) {
+      expect(termNorms(term), term).toEqual(tokenize(term).norm);
+      if (/^[A-Za-z]+[.,!?;:]?$/.test(term)) plain++;
+    }
+    // Most terms take the plain path (letters, or letters and one mark).
+    expect(plain).toBeGreaterThan(10_000);
+    expect(termNorms('Cannot')).toEqual(['can', 'not']);
+    expect(termNorms('cannot,')).toEqual(['cannot', ',']);
+    // Other languages keep their own tokenizer.
+    expect(termNorms('Straße', 'de')).toEqual(tokenize('Straße', 'de').norm);
   });
 });
