@@ -1,4 +1,5 @@
 import { DateTime } from 'luxon';
+import { writeAscii } from '../text/ascii-bytes.js';
 import { resolveWallClock, zoneOffset, type WallClockPolicy } from './zone-offset.js';
 
 /** How timestamps are read. */
@@ -215,12 +216,6 @@ export function formatLocal(instant: number, offsetMinutes: number): string {
 /** The date part (`2026-03-29T`, ASCII bytes) of the last day written: consecutive rows mostly share a day. */
 let lastDateBytes = new Uint8Array(0);
 let lastDateBytesDay = NaN;
-
-/** Writes ASCII `text` into `buffer` at `at`; returns where it ended. */
-function writeAscii(buffer: Uint8Array, at: number, text: string): number {
-  for (let k = 0; k < text.length; k++) buffer[at++] = text.charCodeAt(k);
-  return at;
-}
 
 /** Writes the two decimal digits of `n` (0–99). */
 function writeTwo(buffer: Uint8Array, at: number, n: number): number {

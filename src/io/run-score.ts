@@ -51,7 +51,7 @@ export interface RunScoreOptions {
    * runScore sends them the lexicons and stops them when done.
    */
   pool?: ScorePool;
-  /** Called once, when the first scored rows are written (the start-up is over: lexicons compiled, tokenizer loaded). */
+  /** Called once, when the first scored batch is back and about to be written (the start-up is over: lexicons compiled, tokenizer loaded). */
   onFirstRows?: () => void;
   /** Also receives each scored entry. */
   onEntry?: (entry: ScoredEntry) => void;

@@ -1,5 +1,6 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { writeLocalTime, writeUtcTime } from '../ingest/parse-instant.js';
+import { writeAscii } from '../text/ascii-bytes.js';
 import type { ScoreColumn } from '../score/score-entry.js';
 import type { BatchScores } from '../score/score-text.js';
 import type { RawEntry } from '../types.js';
@@ -48,8 +49,9 @@ export function scoreRowFiller(columns: readonly ScoreColumn[], lexicons: readon
     rules: lex.scoring !== 'vader',
     lexicon: l,
   }));
-  const numericFields = 3 + layout.reduce((sum, { columns: own, rules }) => sum + own.length * (rules ? 2 : 1) + (rules ? 1 : 0), 0);
-  const fieldCount = SCORE_ID_COLUMNS.length + numericFields - 3 + (keepText ? 1 : 0);
+  const fieldCount = scoresHeader(columns, lexicons, keepText).length;
+  // Every field but the id, person, zone and kept text is a number or a time.
+  const numericFields = fieldCount - 3 - (keepText ? 1 : 0);
   return {
     most: (entry, text) => NUMBER_BYTES * numericFields + fieldCount + textBytes(entry.id) + textBytes(entry.person) + textBytes(entry.zone) + (keepText ? textBytes(text ?? '') : 0),
     fill(buffer, at, entry, batch, i, text) {
@@ -103,12 +105,6 @@ const COMMA = 0x2c;
 /** Bytes csvField(value) takes at most in UTF-8: every code unit doubled (quotes), 3 bytes each, and two quotes. */
 function textBytes(value: string): number {
   return 6 * value.length + 2;
-}
-
-/** Writes ASCII `text` at `at`; returns where it ended. */
-function writeAscii(buffer: Buffer, at: number, text: string): number {
-  for (let k = 0; k < text.length; k++) buffer[at++] = text.charCodeAt(k);
-  return at;
 }
 
 /**

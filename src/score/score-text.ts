@@ -1,6 +1,6 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { SerialCache } from '../text/serial-cache.js';
-import { pieceSerialEpoch, tokenize, tokenizeEnglishShared, type Piece, type Tokens } from '../text/tokenize.js';
+import { isEnglish, pieceSerialEpoch, tokenize, tokenizeEnglishShared, type Piece, type Tokens } from '../text/tokenize.js';
 import { matchLexicon, type LexiconMatch } from './match-lexicon.js';
 import { VADER_COLUMNS } from './score-columns.js';
 import { scoreVader, scoreVaderPieces, scoreVaderSerials, type PieceWords, type VaderLexicon, type VaderScores } from './vader.js';
@@ -106,10 +106,6 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
   const counted = english ?? (byLanguage?.values().next().value as Tokens);
   out.words[i] = counted.nWords;
   return english === undefined ? -1 : (english.pieceCount as number);
-}
-
-function isEnglish(language: string): boolean {
-  return language === 'en' || language.startsWith('en-');
 }
 
 /** Per lexicon, the match result scoreTextInto reuses from text to text (its values are copied out at once). */

@@ -539,7 +539,12 @@ export function tokenizeSegmenter(text: string, language: string): Tokens {
 
 /** Tokenizes `text` for a lexicon of `language` (BCP 47): wink-nlp for English, Intl.Segmenter otherwise. */
 export function tokenize(text: string, language = 'en'): Tokens {
-  return language === 'en' || language.startsWith('en-') ? tokenizeEnglish(text) : tokenizeSegmenter(text, language);
+  return isEnglish(language) ? tokenizeEnglish(text) : tokenizeSegmenter(text, language);
+}
+
+/** Whether a BCP 47 language tag is English (`en`, `en-GB`, …): the languages wink-nlp tokenizes. */
+export function isEnglish(language: string): boolean {
+  return language === 'en' || language.startsWith('en-');
 }
 
 /**
@@ -548,7 +553,7 @@ export function tokenize(text: string, language = 'en'): Tokens {
  * plainReading gives them. For building a lexicon's tables, which tokenizes every term once.
  */
 export function termNorms(term: string, language = 'en'): string[] {
-  if (language === 'en' || language.startsWith('en-')) {
+  if (isEnglish(language)) {
     const plain = readPlainPiece(term);
     if (plain !== undefined) {
       const word = plain.word.toLowerCase();

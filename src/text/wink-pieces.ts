@@ -151,9 +151,9 @@ const PLAIN_MARKS = '.,!?;:';
  * such as `cannot`, `dont` or `AINT`, which expands into several and is left to readPiece; an
  * unknown letters-only piece matches the model's first token-category pattern, `^[a-z…]+$`
  * (case-insensitive), and is one `word` token; an unknown word with a mark matches the second,
- * word-then-punctuation, and is added as two tokens, the
- * word (its model type when known, without contraction expansion; else `word`) and the mark,
- * except a single letter and a point (`a.`), added as one `word` token.
+ * word-then-punctuation, and is added as two tokens, the word (its model type when known,
+ * without contraction expansion; else `word`) and the mark, except a single letter and a point
+ * (`a.`), added as one `word` token.
  * test/text/tokenize-memo.test.ts checks this against wink-nlp's readDoc.
  */
 export function readPlainPiece(text: string): PlainPiece | undefined {
