@@ -41,6 +41,38 @@ describe('PieceTable', () => {
     expect(table.size).toBe(100);
   });
 
+  it('compares short keys by their copied code units and long keys as strings, and never confuses the two (all hashes forced equal)', () => {
+    // Keys of 1 to 40 code units, across the length (16) from which a key is compared as a
+    // string; some with two-byte code units (é, an emoji's surrogate pair) in every position.
+    const table = new PieceTable<number>(200);
+    const keys: string[] = [];
+    for (let n = 1; n <= 40; n++) {
+      keys.push('q'.repeat(n), 'é'.repeat(n), `${'z'.repeat(n - 1)}😀`.slice(0, n), `${'y'.repeat(n - 1)}.`);
+    }
+    keys.forEach((key, k) => table.add(key, 7, k));
+    expect(table.size).toBe(keys.length);
+    keys.forEach((key, k) => {
+      const text = `« ${key} »`;
+      expect(table.find(text, 2, 2 + key.length, 7)).toBe(k);
+      expect(table.foundKey).toBe(key);
+    });
+    // Ranges of the same hash that hold no key: one code unit off at the start, the middle or
+    // the end, a key without its last code unit, and a key with one more.
+    for (const key of keys) {
+      const n = key.length;
+      for (const at of [0, n >> 1, n - 1]) {
+        // Another character, and one that differs only in the high byte of its code unit.
+        for (const c of ['x', String.fromCharCode(key.charCodeAt(at) ^ 0x100)]) {
+          const changed = `${key.slice(0, at)}${c}${key.slice(at + 1)}`;
+          if (!keys.includes(changed)) expect(table.find(changed, 0, n, 7)).toBeUndefined();
+        }
+      }
+      if (n > 1 && !keys.includes(key.slice(0, n - 1))) expect(table.find(key, 0, n - 1, 7)).toBeUndefined();
+      if (!keys.includes(`${key}q`)) expect(table.find(`${key}q`, 0, n + 1, 7)).toBeUndefined();
+    }
+    expect(table.find('', 0, 0, 7)).toBeUndefined();
+  });
+
   it('holds at most `limit` entries and says so before refusing one', () => {
     const table = new PieceTable<number>(3);
     for (const [k, w] of ['a', 'b', 'c'].entries()) {
