@@ -353,15 +353,22 @@ export function pieceSerialEpoch(): number {
  * the same after a break.
  */
 function plainReading(plain: PlainPiece): PieceReading {
-  const norm = plain.word.toLowerCase();
+  const norms = plainNorms(plain);
+  const norm = norms[0] as string;
   if (plain.mark === '') return { count: 1, nWords: WORDISH.has(plain.wordType) ? 1 : 0, norm, raw: plain.word, kind: kindOf(plain.wordType), id: idOf(norm), all: undefined };
   return readingOf({
-    norm: [norm, plain.mark],
+    norm: norms,
     raw: [plain.word, plain.mark],
     kind: [kindOf(plain.wordType), kindOf(plain.markType)],
     nWords: (WORDISH.has(plain.wordType) ? 1 : 0) + (WORDISH.has(plain.markType) ? 1 : 0),
-    ids: [idOf(norm), idOf(plain.mark)],
+    ids: norms.map(idOf),
   });
+}
+
+/** The normal forms of a plain piece's tokens: the word in lower case, then the mark (if any) as it is. */
+function plainNorms(plain: PlainPiece): string[] {
+  const word = plain.word.toLowerCase();
+  return plain.mark === '' ? [word] : [word, plain.mark];
 }
 
 /** A piece read by wink (see readPiece), with our tokens of it after spaces and, where they differ, after a break. */
@@ -550,15 +557,12 @@ export function isEnglish(language: string): boolean {
 /**
  * The normal forms of `term`'s tokens (tokenize(term, language).norm), without the memo when the
  * term is one plain English piece (see readPlainPiece: most terms of a word list), as
- * plainReading gives them. For building a lexicon's tables, which tokenizes every term once.
+ * plainReading gives them (plainNorms). For building a lexicon's tables, which tokenizes every term once.
  */
 export function termNorms(term: string, language = 'en'): string[] {
   if (isEnglish(language)) {
     const plain = readPlainPiece(term);
-    if (plain !== undefined) {
-      const word = plain.word.toLowerCase();
-      return plain.mark === '' ? [word] : [word, plain.mark];
-    }
+    if (plain !== undefined) return plainNorms(plain);
   }
   return tokenize(term, language).norm;
 }
