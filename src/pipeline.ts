@@ -14,9 +14,13 @@
  * file's folder, calls the stages in order and records provenance.
  */
 import { readFile } from 'node:fs/promises';
-import { dirname, join, relative, resolve } from 'node:path';
+import { basename, dirname, join, relative, resolve } from 'node:path';
 import { usageError } from './errors.js';
 import { writeFileAtomic } from './io/atomic-write.js';
+import { checkOutputFolder } from './io/check-output-folder.js';
+import { lockOutputFolder } from './io/lock-output-folder.js';
+import { removeStaleTemporaries } from './io/own-temporaries.js';
+import { openStagedOutput } from './io/staged-output.js';
 import { loadLexicons } from './io/load-lexicon.js';
 import { readZoneFile } from './io/read-zone-file.js';
 import { fileDigest, runScore, type RunScoreResult } from './io/run-score.js';
@@ -109,28 +113,67 @@ export async function readStudy(path: string): Promise<Study> {
   return study;
 }
 
+/** Options of runStudy. */
+export interface RunStudyOptions {
+  now: string;
+  stages?: Array<[string, StudyStage]>;
+  seed?: number;
+  onProgress?: (rows: number) => void;
+  /** Called once, when the first scored rows are written (see RunScoreOptions.onFirstRows). */
+  onFirstRows?: () => void;
+  /** Environment variables the study may name (`privacy.keyEnv`), passed in by the caller. */
+  env?: Readonly<Record<string, string | undefined>>;
+  /** Accept an output folder that is a symbolic link (refused by default, see checkOutputFolder). */
+  allowSymlinks?: boolean;
+}
+
 /**
  * Runs a study: score → series → the optional stages (validation, dynamics, term audit,
- * report) → datapackage.json and manifest.json, all in the study's output folder.
+ * report) → datapackage.json and manifest.json, into the study's output folder.
  * `now` (ISO 8601) is the run time recorded in the manifest; `stages` are called in order.
+ *
+ * One run at a time, and never half-old outputs: the run holds the output folder's lock
+ * (lockOutputFolder; a second run fails with a usage error), removes what killed runs left
+ * there, and writes every output into a staging folder (openStagedOutput) that replaces the
+ * old outputs only when every stage has finished. manifest.json and report.html are removed first
+ * and put in place last, so they never describe files of another run. On any error the old outputs
+ * stay as they were. An output folder that is a symbolic link is refused unless `allowSymlinks`.
  */
-export async function runStudy(
-  studyPath: string,
-  options: {
-    now: string;
-    stages?: Array<[string, StudyStage]>;
-    seed?: number;
-    onProgress?: (rows: number) => void;
-    /** Called once, when the first scored rows are written (see RunScoreOptions.onFirstRows). */
-    onFirstRows?: () => void;
-    /** Environment variables the study may name (`privacy.keyEnv`), passed in by the caller. */
-    env?: Readonly<Record<string, string | undefined>>;
-  },
-): Promise<RunStudyResult> {
+export async function runStudy(studyPath: string, options: RunStudyOptions): Promise<RunStudyResult> {
   const study = await readStudy(studyPath);
+  const finalDir = resolve(dirname(resolve(studyPath)), study.out);
+  await checkOutputFolder(finalDir, options.allowSymlinks);
+  const lock = await lockOutputFolder(finalDir, `lexichron run ${studyPath}`);
+  try {
+    await removeStaleTemporaries(finalDir, { recursive: true });
+    const staged = await openStagedOutput(finalDir, ['report.html', 'manifest.json']);
+    let result: RunStudyResult;
+    try {
+      result = await runStudyInto(staged.dir, study, studyPath, options);
+      await staged.commit();
+    } catch (error) {
+      await staged.abort();
+      throw error;
+    }
+    // Paths as they are after the commit.
+    const moved = (path: string): string => join(finalDir, relative(staged.dir, path));
+    const { score, series } = result;
+    return {
+      ...result,
+      outDir: finalDir,
+      score: { ...score, scoresPath: moved(score.scoresPath), rejectsPath: moved(score.rejectsPath), metaPath: moved(score.metaPath) },
+      series: { ...series, longPath: moved(series.longPath), widePath: moved(series.widePath), eventsPath: moved(series.eventsPath), rejectsPath: moved(series.rejectsPath) },
+      ...(result.report ? { report: { ...result.report, path: moved(result.report.path) } } : {}),
+    };
+  } finally {
+    await lock.release();
+  }
+}
+
+/** The stages of runStudy, writing every output into `outDir` (the staging folder). */
+async function runStudyInto(outDir: string, study: Study, studyPath: string, options: RunStudyOptions): Promise<RunStudyResult> {
   const studyDir = dirname(resolve(studyPath));
   const at = (p: string): string => resolve(studyDir, p);
-  const outDir = at(study.out);
   const lexicons = await loadLexicons(study.lexicons.map((l) => (l.includes('/') || l.endsWith('.tsv') ? at(l) : l)));
   if (study.timeZone && !isValidZone(study.timeZone)) {
     throw usageError(`Study file \`${studyPath}\`, $.timeZone: unknown time zone \`${study.timeZone}\`; expected an IANA name such as \`Europe/Brussels\`.`);
@@ -242,6 +285,6 @@ export async function runStudy(
   }
   await writeFileAtomic(join(outDir, 'manifest.json'), JSON.stringify(manifest, null, 2) + '\n');
   let report: WriteReportResult | undefined;
-  if (study.report !== false) report = await writeReport(outDir, { ...study.report, ...(study.report.title ? {} : { title: study.name }) });
+  if (study.report !== false) report = await writeReport(outDir, { ...study.report, ...(study.report.title ? {} : { title: study.name }), source: basename(at(study.out)) });
   return { outDir, manifest, score, series, stages, report };
 }
