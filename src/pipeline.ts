@@ -33,7 +33,7 @@ import type { AuditSettings } from './study/stage-settings.js';
 import type { TimeOptions } from './ingest/parse-instant.js';
 import type { ZoneTable } from './ingest/zone-table.js';
 import { readPseudonymKey, PSEUDONYM_KEY_ENV } from './io/read-pseudonym-key.js';
-import { pseudonymizePerson } from './privacy/pseudonymize-person.js';
+import { createPseudonymizer } from './privacy/create-pseudonymizer.js';
 import { createRedactor } from './privacy/create-redactor.js';
 import { termAuditor } from './terms/term-auditor.js';
 import { random } from './stats/random.js';
@@ -96,6 +96,36 @@ async function dataRows(path: string): Promise<number> {
   let rows = 0;
   for await (const item of readRecords(path)) if (item.kind !== 'header') rows++;
   return rows;
+}
+
+/**
+ * The study as the manifest records it: person ids as written in the outputs (pseudonyms when a
+ * key was given); participants' addresses and sender names only as counts; no key file, no
+ * redaction names; and, with pseudonyms, inputs and side files named by position or role
+ * (`input-1`, `zones`, `ratings`, `windows`) instead of file names that may hold an id.
+ */
+function recordedStudy(study: Study, person: (id: string) => string, pseudonymized: boolean): Record<string, unknown> {
+  const inputs = study.inputs.map((input, n) => {
+    const { addresses, senders, ...rest } = input;
+    return {
+      ...rest,
+      ...(pseudonymized ? { path: `input-${n + 1}` } : {}),
+      ...(input.person ? { person: person(input.person) } : {}),
+      ...(addresses ? { addresses: addresses.length } : {}),
+      ...(senders ? { senders: senders.length } : {}),
+    };
+  });
+  const recorded: Record<string, unknown> = {
+    ...study,
+    inputs,
+    privacy: study.privacy ? { ...study.privacy, keyFile: study.privacy.keyFile ? '(key file, not recorded)' : undefined, names: undefined } : undefined,
+  };
+  if (pseudonymized) {
+    if (study.zones) recorded.zones = 'zones';
+    if (study.ratings) recorded.ratings = { ...study.ratings, path: 'ratings' };
+    if (study.series.windows) recorded.series = { ...study.series, windows: 'windows' };
+  }
+  return recorded;
 }
 
 /** Reads and validates a study file; throws a usage error listing every problem with its JSON path. */
@@ -184,14 +214,8 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
   const keyEnv = privacy.keyEnv ?? PSEUDONYM_KEY_ENV;
   const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, options.env?.[keyEnv]);
   if (privacy.keyEnv && !key) throw usageError(`The study names the key variable \`${privacy.keyEnv}\` ($.privacy.keyEnv), but it is not set; set it or remove the key from the study file.`);
-  const pseudonyms = new Map<string, string>();
-  const person = key
-    ? (id: string): string => {
-        let p = pseudonyms.get(id);
-        if (p === undefined) pseudonyms.set(id, (p = pseudonymizePerson(id, key)));
-        return p;
-      }
-    : (id: string): string => id;
+  const pseudonyms = key ? createPseudonymizer(key) : undefined;
+  const person = pseudonyms ? pseudonyms.person : (id: string): string => id;
   const redact = createRedactor({ names: privacy.names });
   const auditors = study.audit === false ? [] : lexicons.filter((l) => l.scoring === 'rules').map((l) => ({ lexicon: l, auditor: termAuditor(l, { random: random(options.seed ?? DEFAULT_SEED), redact, maxShare: (study.audit as AuditSettings).maxShare, minPersons: (study.audit as AuditSettings).minPersons }) }));
   // Series settings are checked before anything is scored, and their errors name the study file's keys.
@@ -213,7 +237,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     out: join(outDir, 'scores.csv'),
     keepText: study.keepText,
     redact,
-    ...(key ? { person } : {}),
+    ...(pseudonyms ? { pseudonyms } : {}),
     onProgress: options.onProgress,
     onFirstRows: options.onFirstRows,
     onRawEntry: auditors.length === 0 ? undefined : (entry) => {
@@ -255,10 +279,12 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
   }
   outputs.push(...Object.values(stages).flatMap((s) => s.outputs));
   const inputs: FileRecord[] = [...score.inputs];
-  for (const extra of [study.zones, study.ratings?.path, study.series.windows]) {
+  // With pseudonyms, files are recorded by their role, never by a name that may hold an id.
+  const extras: Array<[string | undefined, string]> = [[study.zones, 'zones'], [study.ratings?.path, 'ratings'], [study.series.windows, 'windows']];
+  for (const [extra, role] of extras) {
     if (!extra) continue;
     const d = await fileDigest(at(extra));
-    inputs.push({ path: extra, sha256: d.sha256, bytes: d.bytes, rows: await dataRows(at(extra)) });
+    inputs.push({ path: pseudonyms ? role : extra, sha256: d.sha256, bytes: d.bytes, rows: await dataRows(at(extra)) });
   }
   const manifest = buildManifest({
     version: TOOL_VERSION,
@@ -268,7 +294,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     lexicons: score.lexicons,
     parameters: {
       // Person ids in the recorded study are the ones written in the outputs (pseudonyms when a key was given).
-      study: { ...study, inputs: study.inputs.map((i) => (i.person ? { ...i, person: person(i.person) } : i)), privacy: study.privacy ? { ...study.privacy, keyFile: study.privacy.keyFile ? '(key file, not recorded)' : undefined, names: undefined } : undefined },
+      study: recordedStudy(study, person, pseudonyms !== undefined),
       seed,
       privacy: { pseudonymized: key !== undefined, aggregatesOnly: privacy.aggregatesOnly === true, redactedNames: privacy.names?.length ?? 0 },
     },
