@@ -66,6 +66,7 @@ export { createDeduplicator, normalizeForDuplicates, type DedupeOptions, type Du
 export { createBurstMerger, type BurstMerger } from './ingest/import/create-burst-merger.js';
 export { importReconciliationText } from './report/import-reconciliation-text.js';
 export { pseudonymizePerson, MIN_PSEUDONYM_KEY_BYTES } from './privacy/pseudonymize-person.js';
+export { createPseudonymizer, type Pseudonymizer } from './privacy/create-pseudonymizer.js';
 export { createRedactor, REDACTION_TOKENS, type RedactOptions } from './privacy/create-redactor.js';
 export { keptText, type TextPolicy } from './privacy/kept-text.js';
 export { createPersonRowFilter, personMentionPattern, type PersonRowFilter } from './privacy/create-person-row-filter.js';

@@ -18,7 +18,7 @@ const EXPORTS = [
   'buildZoneTable', 'bundledLexiconNames', 'categoryScore', 'chatStampTime', 'cholesky',
   'chooseEmbeddingDimension', 'clusterBootstrap', 'compileDiaryHeading', 'compileLexicon',
   'convergentCrossMapping', 'correlationFromMoments', 'createBatchScores', 'createBurstMerger',
-  'createDeduplicator', 'createPersonRowFilter', 'createRedactor', 'createScorePool',
+  'createDeduplicator', 'createPersonRowFilter', 'createPseudonymizer', 'createRedactor', 'createScorePool',
   'createSeriesState', 'cronbachAlpha', 'dataPackage', 'decodeTextLine', 'decodeWindows1252',
   'defaultStudyStages', 'delayEmbedding', 'diffLexicons', 'draftLexicon', 'dropTopTerms',
   'dynamicsStage', 'dynamicsTables', 'emptyImportReconciliation', 'entryLine', 'entryScoreColumns',
