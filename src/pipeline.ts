@@ -68,6 +68,8 @@ export interface StudyContext {
   time: TimeOptions;
   /** Maps raw person ids to the ids written in outputs (pseudonyms when a key is given). */
   person: (id: string) => string;
+  /** Whether a key was given: files are then named by role in outputs, never by file name. */
+  pseudonymized?: boolean;
   score: RunScoreResult;
   series: RunSeriesResult;
   /** Seed for every random draw of the run (bootstrap, surrogates). */
@@ -257,7 +259,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
   const seed = options.seed ?? DEFAULT_SEED;
   const stages: Record<string, StageOutput> = {};
   if (auditors.length > 0) stages.audit = await writeStudyAudit(outDir, auditors.map((a) => a.auditor.finish()), (study.audit as AuditSettings).top, study.keepText);
-  const context: StudyContext = { study, studyDir, outDir, at, zones, time, person, score, series, seed, shared: {} };
+  const context: StudyContext = { study, studyDir, outDir, at, zones, time, person, pseudonymized: pseudonyms !== undefined, score, series, seed, shared: {} };
   for (const [name, stage] of options.stages ?? []) {
     const out = await stage(context);
     if (out) stages[name] = out;

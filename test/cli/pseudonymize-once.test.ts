@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { defaultStudyStages } from '../../src/io/study-stages.js';
 import { runStudy } from '../../src/pipeline.js';
 import { pseudonymizePerson } from '../../src/privacy/pseudonymize-person.js';
 import { runCli } from '../support/run-cli.js';
@@ -33,6 +34,7 @@ beforeAll(() => {
   tmp.write('P07-chat.txt', chat);
   tmp.write('key.txt', KEY);
   tmp.write('other-key.txt', 'another-key-of-another-study-000');
+  tmp.write('P07-ratings.csv', 'person,time,mood\nP07,2026-03-02T20:00:00+01:00,7\nP07,2026-03-03T20:00:00+01:00,11\nP07,2026-03-04T22:00:00+01:00,6\n');
 });
 
 describe('pseudonymize exactly once', () => {
@@ -61,11 +63,13 @@ describe('pseudonymize exactly once', () => {
   it('a run that imports the export itself writes no raw id, file name, address or sender name into manifest.json, datapackage.json or report.html', async () => {
     tmp.write('direct.json', JSON.stringify({
       inputs: [{ path: 'P07-chat.txt', format: 'chat-lines', person: 'P07', senders: ['Ana Vries'], dateOrder: 'dmy' }],
+      ratings: { path: 'P07-ratings.csv', scales: { mood: [0, 10] } },
       timeZone: 'Europe/Brussels', lexicons: ['afinn-165'], privacy: { keyFile: 'key.txt' }, dynamics: false, audit: false, out: 'direct',
     }));
-    await runStudy(tmp.path('direct.json'), { now: '2026-12-01T00:00:00.000Z', seed: 1 });
+    await runStudy(tmp.path('direct.json'), { now: '2026-12-01T00:00:00.000Z', seed: 1, stages: defaultStudyStages() });
     expect(rowsOf(tmp.path('direct/scores.csv')).map((r) => r.person)).toEqual([P07, P07, P07]);
-    for (const file of ['scores.csv', 'scores.csv.meta.json', 'manifest.json', 'datapackage.json', 'report.html']) {
+    expect(rowsOf(tmp.path('direct/validation/validation-diagnostics.csv')).map((r) => [r.code, r.file])).toContainEqual(['rating_out_of_scale', 'ratings']);
+    for (const file of ['scores.csv', 'scores.csv.meta.json', 'manifest.json', 'datapackage.json', 'report.html', 'validation/validation-diagnostics.csv', 'validation/validation.json']) {
       expect(rawIn(tmp.path(`direct/${file}`)), file).toEqual([]);
     }
     // What is recorded instead: how many sender names were given, and which input (by position) was read.
