@@ -298,7 +298,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
       // Person ids in the recorded study are the ones written in the outputs (pseudonyms when a key was given).
       study: recordedStudy(study, person, pseudonyms !== undefined),
       seed,
-      privacy: { pseudonymized: key !== undefined, aggregatesOnly: privacy.aggregatesOnly === true, redactedNames: privacy.names?.length ?? 0 },
+      privacy: { pseudonymized: key !== undefined || score.pseudonymized, aggregatesOnly: privacy.aggregatesOnly === true, redactedNames: privacy.names?.length ?? 0 },
     },
     reconciliation: score.reconciliation,
     stages: {

@@ -36,7 +36,8 @@ export function registerForget(program: Command): void {
     .action(async (person: string, opts: Record<string, unknown>) => {
       const study = String(opts.study);
       const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
-      if (!key && !looksPseudonymous(person.trim()) && (await studyIsPseudonymized(study))) {
+      const pseudonymizedStudy = await studyIsPseudonymized(study);
+      if (!key && !looksPseudonymous(person.trim()) && pseudonymizedStudy) {
         throw usageError(`The outputs in \`${study}\` hold pseudonyms, not raw ids: pass the study's key with --pseudonym-key-file (or set ${PSEUDONYM_KEY_ENV}) so that \`${person}\` can be found, or give the person's pseudonym itself.`);
       }
       // With a key, only the pseudonym is a person value of the outputs; the raw id is never matched as text.
@@ -49,7 +50,8 @@ export function registerForget(program: Command): void {
       if (!result.found) {
         for (const s of result.stale) notes.push(`mentions \`${person}\` as a word, but not as a person (not changed): ${s}`);
         process.stderr.write(notes.map((n) => `${n}\n`).join(''));
-        throw inputError(`No output in \`${study}\` holds the person \`${person}\`: nothing was removed and nothing was recorded. Check the id as written in the inputs${key ? '' : ' (and pass the key if the study used pseudonyms)'}.`);
+        const hint = !key ? ' (and pass the key if the study used pseudonyms)' : pseudonymizedStudy ? ' and the key' : `; the key was used to pseudonymize it, but these outputs do not say they hold pseudonyms: if they hold raw ids, run forget without the key (unset ${PSEUDONYM_KEY_ENV})`;
+        throw inputError(`No output in \`${study}\` holds the person \`${person}\`: nothing was removed and nothing was recorded. Check the id as written in the inputs${hint}.`);
       }
       const lines = [`recorded as ${record} in manifest.json`];
       for (const c of result.changed) lines.push(`removed ${c.removed} row(s) from ${c.file}`);

@@ -78,6 +78,8 @@ export interface InputRecord {
 
 export interface RunScoreResult {
   reconciliation: Reconciliation;
+  /** Whether the scores hold pseudonyms (a key was given, or entries pseudonymized at import were read). */
+  pseudonymized: boolean;
   columns: ScoreColumn[];
   lexicons: LexiconRef[];
   inputs: InputRecord[];
@@ -280,6 +282,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
   }
   return {
     reconciliation,
+    pseudonymized: options.person !== undefined || pseudonyms !== undefined || markedEntries,
     columns,
     lexicons: options.lexicons.map((l) => l.ref),
     inputs,
