@@ -90,7 +90,8 @@ describe('lexichron run holds its output folder alone and replaces outputs only 
     await until(changed, 60_000);
     run.child.kill('SIGKILL');
     const killed = await run.exit;
-    expect(killed.signal).toBe('SIGKILL');
+    // Killed during its commit or just after (a run that had already ended by then must have ended well).
+    expect(killed.signal === 'SIGKILL' || killed.code === 0, killed.stderr).toBe(true);
     expect(mismatches()).toEqual([]);
     // The next run takes over the dead run's lock, removes its staging folder and temporaries.
     const next = spawnSync(process.execPath, [bin, 'run', 'demo-data/study.json'], { cwd: tmp.dir, encoding: 'utf8' });
