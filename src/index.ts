@@ -66,9 +66,10 @@ export { createDeduplicator, normalizeForDuplicates, type DedupeOptions, type Du
 export { createBurstMerger, type BurstMerger } from './ingest/import/create-burst-merger.js';
 export { importReconciliationText } from './report/import-reconciliation-text.js';
 export { pseudonymizePerson, MIN_PSEUDONYM_KEY_BYTES } from './privacy/pseudonymize-person.js';
+export { createPseudonymizer, type Pseudonymizer } from './privacy/create-pseudonymizer.js';
 export { createRedactor, REDACTION_TOKENS, type RedactOptions } from './privacy/create-redactor.js';
 export { keptText, type TextPolicy } from './privacy/kept-text.js';
-export { createPersonRowFilter, splitCsvRecord, type PersonRowFilter } from './privacy/create-person-row-filter.js';
+export { createPersonRowFilter, personMentionPattern, type PersonRowFilter } from './privacy/create-person-row-filter.js';
 export { removePersonFromJson, type JsonRemoval } from './privacy/remove-person-from-json.js';
 
 // dynamics

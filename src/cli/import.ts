@@ -8,7 +8,7 @@ import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js
 import { readNamesFile } from '../io/read-names-file.js';
 import { runImport } from '../io/run-import.js';
 import { createRedactor } from '../privacy/create-redactor.js';
-import { pseudonymizePerson } from '../privacy/pseudonymize-person.js';
+import { createPseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { importReconciliationText } from '../report/import-reconciliation-text.js';
 import type { WallClockPolicy } from '../ingest/zone-offset.js';
 import { dstGapOption, dstOverlapOption } from './common-options.js';
@@ -55,7 +55,8 @@ export function registerImport(program: Command): void {
     .option('--aggregates-only', 'write no participant text into the rejects file (codes only)')
     .action(async (format: ImportFormat, input: string, opts: Record<string, unknown>) => {
       const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
-      const person = key ? pseudonymizePerson(String(opts.person), key) : String(opts.person);
+      const pseudonyms = key ? createPseudonymizer(key) : undefined;
+      const person = pseudonyms ? pseudonyms.person(String(opts.person)) : String(opts.person);
       const names = await readNamesFile(opts.redactNames as string | undefined);
       const redactor = createRedactor({ names });
       const nameOnly = createRedactor({ emails: false, phones: false, urls: false, handles: false, names });
@@ -87,6 +88,7 @@ export function registerImport(program: Command): void {
         },
         steps: { ...(dedupe ? { dedupe } : {}), ...(mergeBurstMinutes !== undefined ? { mergeBurstMinutes } : {}), ...(redact ? { redact } : {}) },
         out: String(opts.out),
+        ...(pseudonyms ? { pseudonyms } : {}),
         redactMessages: redactor,
         aggregatesOnly: opts.aggregatesOnly === true,
       });

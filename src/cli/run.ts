@@ -14,10 +14,11 @@ export function registerRun(program: Command): void {
     .description('run a whole study from its study file: score, series, validation, dynamics, term audit, report')
     .argument('<study>', 'study file (JSON; see README "Study file")')
     .option('--seed <n>', 'seed for bootstrap and surrogate draws', '20261201')
+    .option('--allow-symlinks', 'accept an output folder that is a symbolic link (refused by default)')
     .action(async (studyPath: string, opts: Record<string, unknown>) => {
       const progress = progressReporter('scored');
       // V8 optimizes less eagerly until the first scores are written (see jit-budget.ts and main.ts).
-      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env };
+      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env, allowSymlinks: opts.allowSymlinks === true };
       const result = await runStudy(studyPath, options).finally(progress.stop);
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;

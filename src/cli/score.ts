@@ -6,7 +6,7 @@ import type { ZoneTable } from '../ingest/zone-table.js';
 import { readNamesFile } from '../io/read-names-file.js';
 import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
 import { createRedactor } from '../privacy/create-redactor.js';
-import { pseudonymizePerson } from '../privacy/pseudonymize-person.js';
+import { createPseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { restoreJitBudget } from './jit-budget.js';
 import { addTimeOptions, delimiterFrom, parseMaxRejects, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
@@ -72,7 +72,7 @@ export function registerScore(program: Command): void {
       out: String(opts.out),
       keepText: opts.keepText === true && opts.aggregatesOnly !== true,
       redact,
-      ...(key ? { person: (id: string) => pseudonymizePerson(id, key) } : {}),
+      ...(key ? { pseudonyms: createPseudonymizer(key) } : {}),
       workers,
       pool,
       onProgress: progress.update,

@@ -12,6 +12,9 @@ export interface ReadEntriesOptions extends ReadRecordsOptions {
   time?: TimeOptions;
 }
 
+/** Column of entries pseudonymized at import that holds the key's check value (see entryLine). */
+export const PSEUDONYM_KEY_COLUMN = 'pseudonym_key';
+
 function reject(code: string, message: string, source: SourceRef): ReadItem {
   const diagnostic: Diagnostic = { code, message, source, stage: 'ingest' };
   return { kind: 'reject', diagnostic };
@@ -23,6 +26,7 @@ function reject(code: string, message: string, source: SourceRef): ReadItem {
  * The zone is the record's own `zone` column when present, otherwise the person's zone from
  * the zone table (for a wall-clock time, the zone in force on that local date). Times with an
  * offset keep their instant; the entry's offset is always the person's zone offset at that instant.
+ * A `pseudonym_key` column marks an entry pseudonymized at import (RawEntry.pseudonymKey).
  */
 export function recordToEntry(record: Record<string, string>, source: SourceRef, columns: ColumnMapping, zones: ZoneTable, time: TimeOptions): ReadItem {
   const person = (record[columns.person] ?? '').trim();
@@ -54,6 +58,9 @@ export function recordToEntry(record: Record<string, string>, source: SourceRef,
     text,
     source,
   };
+  // The mark of entries pseudonymized at import (entryLine): they are not pseudonymized again.
+  const pseudonymKey = (record[PSEUDONYM_KEY_COLUMN] ?? '').trim();
+  if (pseudonymKey !== '') entry.pseudonymKey = pseudonymKey;
   return { kind: 'entry', entry };
 }
 

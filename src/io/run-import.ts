@@ -1,6 +1,7 @@
 import { importEntries, tallyImportItem, type ImportStepOptions } from '../ingest/import/import-entries.js';
 import { emptyImportReconciliation, type ImportReconciliation } from '../ingest/import/import-item.js';
 import { entryLine } from '../ingest/import/entry-line.js';
+import type { Pseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { csvRow } from '../report/csv.js';
 import { TOOL_VERSION } from '../version.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
@@ -12,6 +13,12 @@ export interface RunImportOptions {
   steps: ImportStepOptions;
   /** Entries JSONL to write; rejects go to `<out>.rejects.csv`, counts to `<out>.meta.json`. */
   out: string;
+  /**
+   * With a key (source.person is then already its pseudonym): entry ids become keyed digests, each
+   * entry is marked with the key's check value (`pseudonym_key`, so that `score` and `run` do not
+   * pseudonymize it again), and the rejects name the export `input` instead of its file name.
+   */
+  pseudonyms?: Pseudonymizer;
   /** Redaction for reject messages (the same as steps.redact, or identity). */
   redactMessages: (text: string) => string;
   /** Leave text out of reject messages entirely. */
@@ -46,11 +53,14 @@ export async function runImport(options: RunImportOptions): Promise<RunImportRes
     await rejects.write(csvRow(['file', 'line', 'code', 'message']));
     for await (const item of importEntries(opened.items, options.steps)) {
       tallyImportItem(reconciliation, item);
-      if (item.kind === 'entry') await entries.write(entryLine(item.entry));
-      else if (item.kind === 'reject') {
+      if (item.kind === 'entry') {
+        const entry = options.pseudonyms ? { ...item.entry, id: options.pseudonyms.entryId(item.entry.id), pseudonymKey: options.pseudonyms.keyCheck } : item.entry;
+        await entries.write(entryLine(entry));
+      } else if (item.kind === 'reject') {
         const d = item.diagnostic;
         const message = options.aggregatesOnly ? d.code : options.redactMessages(d.message);
-        await rejects.write(csvRow([d.source?.file ?? '', d.source ? String(d.source.line) : '', d.code, message]));
+        const file = d.source ? (options.pseudonyms ? 'input' : d.source.file) : '';
+        await rejects.write(csvRow([file, d.source ? String(d.source.line) : '', d.code, message]));
       }
       if (options.onProgress && reconciliation.read % 1000 === 0) options.onProgress(reconciliation.read);
     }
@@ -65,6 +75,7 @@ export async function runImport(options: RunImportOptions): Promise<RunImportRes
     tool: { name: 'lexichron', version: TOOL_VERSION },
     format: options.source.format,
     person: options.source.person,
+    pseudonymized: options.pseudonyms !== undefined,
     zone: options.source.zone,
     ...(opened.dateOrder ? { dateOrder: opened.dateOrder } : {}),
     steps: { dedupe: options.steps.dedupe ?? false, mergeBurstMinutes: options.steps.mergeBurstMinutes ?? null, redacted: options.steps.redact !== undefined },

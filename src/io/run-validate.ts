@@ -63,6 +63,8 @@ export interface RunValidateOptions {
   validate?: Partial<ValidateOptions>;
   /** Maps self-report person ids as the text's were mapped (pseudonymization), so both sides match. */
   person?: (id: string) => string;
+  /** Name of the self-report file in diagnostics (default: its file name; `run` with a key passes `ratings`, so no file name sits beside pseudonyms). */
+  ratingsName?: string;
 }
 
 /** What {@link runValidate} wrote. */
@@ -79,7 +81,7 @@ export interface RunValidateResult {
 }
 
 /** Reads the self-report file into ratings and diagnostics (row rejects and value rejects). */
-export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales' | 'person'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number }> {
+export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales' | 'person' | 'ratingsName'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number }> {
   const scales = typeof options.scales === 'string' ? parseRatingScales(options.scales) : options.scales;
   const mapping = typeof options.columns === 'string' || options.columns === undefined ? parseColumnMapping(options.columns) : options.columns;
   const time = options.time ?? DEFAULT_TIME_OPTIONS;
@@ -93,12 +95,15 @@ export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 
     columns = resolveColumns(mapping, header, file, false);
     ratingCols = selectRatingColumns(header, [columns.person, columns.time, columns.zone ?? 'zone', columns.id ?? 'id'], options.ratingColumns, scales, file);
   };
-  for await (const item of readRecords(options.ratings, { format: options.format, delimiter: options.delimiter })) {
+  const named = options.ratingsName;
+  for await (const raw of readRecords(options.ratings, { format: options.format, delimiter: options.delimiter })) {
+    let item = raw;
     if (item.kind === 'header') {
       if (item.columns.length > 0) resolve(item.columns);
       continue;
     }
     read += 1;
+    if (named !== undefined) item = item.kind === 'reject' ? { ...item, diagnostic: { ...item.diagnostic, source: item.diagnostic.source && { ...item.diagnostic.source, file: named } } } : { ...item, source: { ...item.source, file: named } };
     if (item.kind === 'reject') {
       diagnostics.push({ ...item.diagnostic, stage: 'validate' });
       continue;

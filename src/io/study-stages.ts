@@ -47,6 +47,7 @@ export const validateStage: StudyStage = async (context) => {
     scoreColumns: settings.scores,
     out: dir,
     person: context.person,
+    ...(context.pseudonymized ? { ratingsName: 'ratings' } : {}),
     validate: {
       align: settings.align,
       windowMinutes: windowMinutes(settings.window, '$.ratings.window'),
