@@ -33,8 +33,8 @@ function pipelineAnalysis(dataset: string, x: string, y: string): PairAnalysis {
 
 describe('validate-stage within/between statistics (analyzePair, default options) against R psych::statsBy 2.2.9 and stats::anova (psych data withinBetween and sat.act)', () => {
   const correlations = expected.filter((e) => e.quantity === 'rwg' || e.quantity === 'r_group_means');
-  it.each(correlations.map((e) => [e.dataset, e.quantity, e.x, e.y, Number(e.value)] as const))('%s: %s of %s and %s is %f', (dataset, quantity, x, y, value) => {
-    const analysis = pipelineAnalysis(dataset, x as string, y as string);
+  it.each(correlations.map((e) => [e.dataset as string, e.quantity as string, e.x as string, e.y as string, Number(e.value)] as const))('%s: %s of %s and %s is %f', (dataset, quantity, x, y, value) => {
+    const analysis = pipelineAnalysis(dataset, x, y);
     // rwg: statsBy's pooled within-group correlation = the repeated-measures correlation.
     // r_group_means: Pearson r of statsBy's unweighted group means = the between-person correlation.
     const r = quantity === 'rwg' ? analysis.within : analysis.between;
@@ -43,10 +43,10 @@ describe('validate-stage within/between statistics (analyzePair, default options
     if (quantity === 'r_group_means') expect(r.n).toBe(new Set(datasets[dataset]!.rows.map((d) => d[datasets[dataset]!.group])).size);
   });
   const iccs = expected.filter((e) => e.quantity === 'ICC1_n0' || e.quantity === 'ICC2');
-  it.each(iccs.map((e) => [e.dataset, e.quantity, e.x, Number(e.value)] as const))('%s: %s of %s is %f, as the score and as the rating', (dataset, quantity, x, value) => {
+  it.each(iccs.map((e) => [e.dataset as string, e.quantity as string, e.x as string, Number(e.value)] as const))('%s: %s of %s is %f, as the score and as the rating', (dataset, quantity, x, value) => {
     const { group, rows } = datasets[dataset]!;
     const other = Object.keys(rows[0]!).find((k) => k !== group && k !== x) as string;
-    for (const icc of [pipelineAnalysis(dataset, x as string, other).iccScore, pipelineAnalysis(dataset, other, x as string).iccRating]) {
+    for (const icc of [pipelineAnalysis(dataset, x, other).iccScore, pipelineAnalysis(dataset, other, x).iccRating]) {
       if (!icc.ok) throw new Error(icc.reason);
       // ICC1_n0: one-way ANOVA with Snedecor & Cochran's n0 (stats::anova in R); ICC2: statsBy's (MSb − MSw)/MSb.
       expect(quantity === 'ICC1_n0' ? icc.icc1 : icc.icc1k).toBeCloseTo(value, 8);
