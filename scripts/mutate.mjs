@@ -11,7 +11,7 @@
 //   npm run mutate -- --timeout 300       seconds per test run (a run that times out kills the mutant)
 //   npm run mutate -- --mutants FILE      another list of mutants (same format) instead of scripts/mutants.json
 //
-// A mutant is `{id, area, file, search, replace, tests, description}`: `search` must occur exactly
+// A mutant is `{id, area, file, search, replace, tests, description}` (`tests`: test files or folders): `search` must occur exactly
 // once in `file`; otherwise it is reported as "did not apply" (the code changed: refresh the string).
 // Exit status: 0 every mutant killed; 1 at least one survived; 3 none survived but some did not
 // apply; 2 the set-up failed (bad list, or the unmutated tests already fail).
@@ -113,9 +113,16 @@ function copyRepository(dest) {
   symlinkSync(path.join(root, 'node_modules'), path.join(dest, 'node_modules'), 'dir');
 }
 
-/** Whether any of the test files runs the compiled code in dist/ (then the copy is built first). */
+/** The files under `rel` in `dir` (itself when it is a file). */
+function filesUnder(dir, rel) {
+  const full = path.join(dir, rel);
+  if (!statSync(full).isDirectory()) return [rel];
+  return readdirSync(full).flatMap((name) => filesUnder(dir, path.join(rel, name)));
+}
+
+/** Whether any of the test files (or folders) runs the compiled code in dist/ (then the copy is built first). */
 function needsDist(dir, tests) {
-  return tests.some((t) => /\bdist\//.test(readFileSync(path.join(dir, t), 'utf8')));
+  return tests.flatMap((t) => filesUnder(dir, t)).some((f) => f.endsWith('.ts') && /\bdist\//.test(readFileSync(path.join(dir, f), 'utf8')));
 }
 
 function build(dir, env, timeoutMs) {
