@@ -12,7 +12,8 @@
 //   npm run mutate -- --mutants FILE      another list of mutants (same format) instead of scripts/mutants.json
 //
 // A mutant is `{id, area, file, search, replace, tests, description}` (`tests`: test files or folders): `search` must occur exactly
-// once in `file`; otherwise it is reported as "did not apply" (the code changed: refresh the string).
+// once in `file`; otherwise it is reported as "did not apply" (the code changed: refresh the string),
+// as is a mutant whose code does not compile when its tests need the build.
 // Exit status: 0 every mutant killed; 1 at least one survived; 3 none survived but some did not
 // apply; 2 the set-up failed (bad list, or the unmutated tests already fail).
 //
@@ -127,6 +128,7 @@ function needsDist(dir, tests) {
 
 function build(dir, env, timeoutMs) {
   const r = spawnSync(process.execPath, [path.join(root, 'node_modules', 'typescript', 'bin', 'tsc'), '-p', 'tsconfig.json'], { cwd: dir, env, encoding: 'utf8', timeout: timeoutMs });
+  if (r.signal === 'SIGINT') interrupted = true;
   return r.status === 0 ? undefined : `build failed: ${(r.stdout + r.stderr).split('\n').find((l) => l.includes('error')) ?? (r.error?.message || 'tsc exited with an error')}`;
 }
 
@@ -137,6 +139,7 @@ function runTests(dir, tests, env, timeoutMs) {
   const started = Date.now();
   const r = spawnSync(process.execPath, [path.join(root, 'node_modules', 'vitest', 'vitest.mjs'), 'run', ...tests, '--reporter=json', `--outputFile=${report}`], { cwd: dir, env, encoding: 'utf8', timeout: timeoutMs, maxBuffer: 64 * 1024 * 1024 });
   const seconds = (Date.now() - started) / 1000;
+  if (r.signal === 'SIGINT' || r.status === 130) interrupted = true; // vitest exits 130 on Ctrl-C
   if (r.error?.code === 'ETIMEDOUT') return { ok: false, seconds, detail: `timed out after ${timeoutMs / 1000} s` };
   if (r.status === 0) return { ok: true, seconds, detail: '' };
   let detail = `vitest exited with status ${r.status}`;
@@ -163,6 +166,13 @@ function sharedReferenceDir() {
   return path.resolve(root, configured || '../shared/reference');
 }
 
+// Ctrl-C reaches the test run in progress too; when it ends by SIGINT the loop stops and the
+// temporary copy is removed (the listener keeps this process alive until then).
+let interrupted = false;
+process.on('SIGINT', () => {
+  interrupted = true;
+});
+
 function main() {
   const args = parseArgs(process.argv.slice(2));
   const mutants = loadMutants(args.only);
@@ -175,7 +185,6 @@ function main() {
   }
   const env = { ...process.env, TZ: 'UTC', LEXICHRON_SHARED_REFERENCE: sharedReferenceDir(), FORCE_COLOR: '0' };
   delete env.LEXICHRON_SKIP_SHARED_REFERENCE;
-  delete env.CI; // the tests behave as on a developer's machine; binding does not depend on CI
   const timeoutMs = args.timeout * 1000;
   const base = mkdtempSync(path.join(tmpdir(), 'lexichron-mutate-'));
   const dir = path.join(base, 'repo');
@@ -188,13 +197,24 @@ function main() {
       const tests = [...new Set(applicable.flatMap((m) => m.tests))].sort();
       console.log(`Baseline: the ${tests.length} named test files on the unmutated copy …`);
       const built = needsDist(dir, tests) ? build(dir, env, timeoutMs) : undefined;
-      if (built) fail(`Baseline ${built}`);
+      if (built) {
+        console.error(`Baseline ${built}`);
+        return 2;
+      }
       const run = runTests(dir, tests, env, timeoutMs);
       rmSync(path.join(dir, 'dist'), { recursive: true, force: true });
-      if (!run.ok) fail(`The unmutated tests fail, so no mutant can be judged: ${run.detail}. Fix them first (or check that ${env.LEXICHRON_SHARED_REFERENCE} exists).`);
+      if (interrupted) {
+        console.error('Interrupted during the baseline run.');
+        return 2;
+      }
+      if (!run.ok) {
+        console.error(`The unmutated tests fail, so no mutant can be judged: ${run.detail}. Fix them first (or check that ${env.LEXICHRON_SHARED_REFERENCE} exists).`);
+        return 2;
+      }
       console.log(`Baseline passed in ${run.seconds.toFixed(1)} s.`);
     }
     for (const m of mutants) {
+      if (interrupted) break;
       const why = notApplicable(dir, m);
       if (why) {
         results.push({ ...m, outcome: 'did not apply', detail: why, seconds: 0 });
@@ -206,26 +226,37 @@ function main() {
       writeFileSync(file, original.replace(m.search, () => m.replace));
       let outcome;
       try {
+        // A mutant that does not compile is not a bug the tests should catch: the list needs fixing.
         const built = needsDist(dir, m.tests) ? build(dir, env, timeoutMs) : undefined;
-        const run = built ? { ok: false, seconds: 0, detail: built } : runTests(dir, m.tests, env, timeoutMs);
-        outcome = { outcome: run.ok ? 'survived' : 'killed', detail: run.detail, seconds: run.seconds };
+        if (interrupted) break;
+        if (built) outcome = { outcome: 'did not apply', detail: `the mutated code does not compile (${built})`, seconds: 0 };
+        else {
+          const run = runTests(dir, m.tests, env, timeoutMs);
+          if (interrupted) break;
+          outcome = { outcome: run.ok ? 'survived' : 'killed', detail: run.detail, seconds: run.seconds };
+        }
       } finally {
         writeFileSync(file, original);
         rmSync(path.join(dir, 'dist'), { recursive: true, force: true });
       }
       results.push({ ...m, ...outcome });
-      console.log(`${outcome.outcome.padEnd(13)}  ${m.id} (${m.area}, ${outcome.seconds.toFixed(1)} s)${outcome.detail ? `: ${outcome.detail}` : ''}`);
+      if (outcome.outcome === 'did not apply') console.log(`did not apply  ${m.id}: ${outcome.detail}`);
+      else console.log(`${outcome.outcome.padEnd(13)}  ${m.id} (${m.area}, ${outcome.seconds.toFixed(1)} s)${outcome.detail ? `: ${outcome.detail}` : ''}`);
     }
   } finally {
     if (args.keep) console.log(`Kept the copy at ${dir}`);
     else rmSync(base, { recursive: true, force: true });
+  }
+  if (interrupted) {
+    console.error('Interrupted; the results above are incomplete.');
+    return 2;
   }
   const count = (o) => results.filter((r) => r.outcome === o);
   const survived = count('survived');
   const skipped = count('did not apply');
   console.log(`\n${results.length} mutants: ${count('killed').length} killed, ${survived.length} survived, ${skipped.length} did not apply.`);
   for (const r of survived) console.log(`  SURVIVED       ${r.id} [${r.area}] ${r.description} (tests: ${r.tests.join(', ')})`);
-  for (const r of skipped) console.log(`  DID NOT APPLY  ${r.id} [${r.area}] ${r.detail}; refresh its search string in scripts/mutants.json`);
+  for (const r of skipped) console.log(`  DID NOT APPLY  ${r.id} [${r.area}] ${r.detail}; fix this mutant in ${path.relative(process.cwd(), listFile) || listFile}`);
   if (survived.length) return 1;
   if (skipped.length) return 3;
   return 0;
