@@ -11,9 +11,10 @@
 //   npm run mutate -- --timeout 300       seconds per test run (a run that times out kills the mutant)
 //   npm run mutate -- --mutants FILE      another list of mutants (same format) instead of scripts/mutants.json
 //
-// A mutant is `{id, area, file, search, replace, tests, description}` (`tests`: test files or folders): `search` must occur exactly
-// once in `file`; otherwise it is reported as "did not apply" (the code changed: refresh the string),
-// as is a mutant whose code does not compile when its tests need the build.
+// A mutant is `{id, area, file, search, replace, tests, description}` (`tests`: test files or
+// folders). `search` must occur exactly once in `file`; otherwise the mutant is reported as "did
+// not apply" (the code changed: refresh the string), as is a mutant whose code does not compile
+// when its tests need the build.
 // Exit status: 0 every mutant killed; 1 at least one survived; 3 none survived but some did not
 // apply; 2 the set-up failed (bad list, or the unmutated tests already fail).
 //
@@ -188,10 +189,10 @@ function main() {
   const timeoutMs = args.timeout * 1000;
   const base = mkdtempSync(path.join(tmpdir(), 'lexichron-mutate-'));
   const dir = path.join(base, 'repo');
-  console.log(`Copying the repository to ${dir} (node_modules linked) …`);
-  copyRepository(dir);
   const results = [];
   try {
+    console.log(`Copying the repository to ${dir} (node_modules linked) …`);
+    copyRepository(dir);
     const applicable = mutants.filter((m) => !notApplicable(dir, m));
     if (args.baseline && applicable.length > 0) {
       const tests = [...new Set(applicable.flatMap((m) => m.tests))].sort();
