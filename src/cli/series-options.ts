@@ -1,3 +1,4 @@
+import { isCalendarDate } from '../ingest/is-calendar-date.js';
 import { Option, type Command } from 'commander';
 import { usageError } from '../errors.js';
 import type { BinReducer } from '../series/bin-accumulator.js';
@@ -30,7 +31,7 @@ function wholeNumber(value: unknown, option: string, min = 0): number {
 
 function date(value: unknown, option: string): number {
   const text = String(value);
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(text) || Number.isNaN(Date.parse(`${text}T00:00:00Z`))) throw usageError(`${option} \`${text}\` is not a date YYYY-MM-DD.`);
+  if (!isCalendarDate(text)) throw usageError(`${option} \`${text}\` is not a date YYYY-MM-DD.`);
   return dayNumberOfDate(text);
 }
 

@@ -1,3 +1,4 @@
+import { EPOCH_UNITS, type EpochUnit } from '../ingest/parse-instant.js';
 import type { ImportSourceSpec } from '../io/open-import-source.js';
 import { auditSettings, dynamicsSettings, ratingsSettings, reportSettings, type AuditSettings, type DynamicsSettings, type RatingsSettings, type ReportSettings } from './stage-settings.js';
 
@@ -45,7 +46,7 @@ export interface Study {
   inputs: StudyInput[];
   zones?: string;
   timeZone?: string;
-  time: { format?: string; epoch: 'auto' | 's' | 'ms'; dstGap: 'reject' | 'earlier' | 'later'; dstOverlap: 'reject' | 'earlier' | 'later' };
+  time: { format?: string; epoch: EpochUnit; window?: string; dstGap: 'reject' | 'earlier' | 'later'; dstOverlap: 'reject' | 'earlier' | 'later' };
   lexicons: string[];
   keepText: boolean;
   maxRejects: string;
@@ -70,7 +71,7 @@ export interface StudyProblem {
 
 const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
 const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
-const TIME_KEYS = ['format', 'epoch', 'dstGap', 'dstOverlap'];
+const TIME_KEYS = ['format', 'epoch', 'window', 'dstGap', 'dstOverlap'];
 const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'windows'];
 const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names', 'aggregatesOnly'];
 
@@ -160,7 +161,8 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   if (json.time !== undefined && !isObject(json.time)) problems.push({ path: '$.time', message: 'expected an object {"format": …, "epoch": …, "dstGap": …, "dstOverlap": …}' });
   unknownKeys(time, TIME_KEYS, '$.time', problems);
   const policies = ['reject', 'earlier', 'later'];
-  need(time.epoch === undefined || ['auto', 's', 'ms'].includes(time.epoch as string), '$.time.epoch', 'expected auto, s or ms');
+  need(time.epoch === undefined || (EPOCH_UNITS as readonly unknown[]).includes(time.epoch), '$.time.epoch', `expected ${EPOCH_UNITS.join(', ')}`);
+  need(time.window === undefined || typeof time.window === 'string', '$.time.window', 'expected a string FROM/TO such as "1990-01-01/2030-12-31" (a side left empty keeps its default)');
   need(time.dstGap === undefined || policies.includes(time.dstGap as string), '$.time.dstGap', 'expected reject, earlier or later');
   need(time.dstOverlap === undefined || policies.includes(time.dstOverlap as string), '$.time.dstOverlap', 'expected reject, earlier or later');
   const lexicons = json.lexicons ?? ['afinn-165', 'vader'];
@@ -201,7 +203,8 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
       timeZone: json.timeZone as string | undefined,
       time: {
         format: time.format as string | undefined,
-        epoch: (time.epoch as 'auto' | 's' | 'ms' | undefined) ?? 'auto',
+        epoch: (time.epoch as EpochUnit | undefined) ?? 'auto',
+        window: time.window as string | undefined,
         dstGap: (time.dstGap as 'reject' | undefined) ?? 'reject',
         dstOverlap: (time.dstOverlap as 'reject' | undefined) ?? 'reject',
       },
