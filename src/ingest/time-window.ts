@@ -14,12 +14,15 @@ export const AFTER_LAST_WRITABLE = (utcFromFields(9999, 12, 31, 23, 59, 59, 999)
 
 const DAY = 86_400_000;
 
-/** The same UTC calendar day `years` later (29 February becomes 28 February in a common year). */
-function yearsLater(instant: number, years: number): number {
+/**
+ * The end of the UTC calendar day `years` after `instant`'s (29 February becomes 28 February in
+ * a common year): whole days, so that runs on the same day record the same window.
+ */
+function endOfDayYearsLater(instant: number, years: number): number {
   const d = new Date(instant);
   const year = Math.min(9999, d.getUTCFullYear() + years);
   const day = Math.min(d.getUTCDate(), daysInMonth(year, d.getUTCMonth() + 1));
-  return (utcFromFields(year, d.getUTCMonth() + 1, day) as number) + (instant - Math.floor(instant / DAY) * DAY);
+  return (utcFromFields(year, d.getUTCMonth() + 1, day) as number) + DAY;
 }
 
 /** Reads one side of a window: a date (UTC midnight; `end` → the midnight after it) or an RFC 3339 time with an offset. */
@@ -38,7 +41,7 @@ function readSide(text: string, end: boolean, spec: string, where: string): numb
 /**
  * The plausible window of times: by default from 1970-01-01T00:00:00Z (the Unix epoch: older
  * instants in exports are almost always a zero or missing value, and before 1970 the IANA
- * database's offsets are partly local mean time) to ten years after `now`. `spec` (the option
+ * database's offsets are partly local mean time) to the end of the day ten years after `now`. `spec` (the option
  * `--time-window FROM/TO` or the study file's `time.window`) may set either side: a date
  * `YYYY-MM-DD` (FROM from its UTC midnight, TO through its end) or an RFC 3339 time with an
  * offset; an empty side keeps its default. Never wider than RFC 3339 can write (years 0000–9999).
@@ -46,7 +49,7 @@ function readSide(text: string, end: boolean, spec: string, where: string): numb
  */
 export function timeWindow(now: number, spec?: string, where = 'Cannot read --time-window'): TimeWindow {
   let from = 0;
-  let to = yearsLater(now, 10);
+  let to = endOfDayYearsLater(now, 10);
   if (spec !== undefined && spec.trim() !== '') {
     const parts = spec.trim().split('/');
     if (parts.length !== 2) throw usageError(`${where} \`${spec}\`: expected FROM/TO, e.g. 1990-01-01/2030-12-31 (leave a side empty for its default: 1970-01-01 and ten years from today).`);

@@ -39,6 +39,9 @@ export interface StudySeries {
   to?: string;
   /** Per-person study windows file (person, from, to). */
   windows?: string;
+  /** Most bins per person (default 100,000) and the span in days beyond which a person is warned about (default 730). */
+  maxBins?: number;
+  warnSpanDays?: number;
 }
 
 export interface Study {
@@ -72,7 +75,7 @@ export interface StudyProblem {
 const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
 const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
 const TIME_KEYS = ['format', 'epoch', 'window', 'dstGap', 'dstOverlap'];
-const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'windows'];
+const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'windows', 'maxBins', 'warnSpanDays'];
 const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names', 'aggregatesOnly'];
 
 /** Levenshtein distance, for "did you mean" hints. */
@@ -173,6 +176,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   if (json.series !== undefined && !isObject(json.series)) problems.push({ path: '$.series', message: 'expected an object such as {"bin": "1d", "dayStart": "04:00", "minWords": 10}' });
   unknownKeys(series, SERIES_KEYS, '$.series', problems);
   for (const key of ['bin', 'dayStart', 'excludeHours', 'aggregate', 'from', 'to', 'windows']) need(series[key] === undefined || typeof series[key] === 'string', `$.series.${key}`, 'expected a string');
+  for (const key of ['maxBins', 'warnSpanDays']) need(series[key] === undefined || (Number.isInteger(series[key]) && (series[key] as number) >= 1), `$.series.${key}`, 'expected a whole number ≥ 1');
   for (const key of ['minWords', 'maxFill']) need(series[key] === undefined || (Number.isInteger(series[key]) && (series[key] as number) >= 0), `$.series.${key}`, 'expected a whole number ≥ 0');
   need(series.fill === undefined || ['none', 'carry', 'linear'].includes(series.fill as string), '$.series.fill', 'expected none, carry or linear');
   need(series.detrend === undefined || typeof series.detrend === 'boolean', '$.series.detrend', 'expected true or false');
@@ -223,6 +227,8 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
         from: series.from as string | undefined,
         to: series.to as string | undefined,
         windows: series.windows as string | undefined,
+        maxBins: series.maxBins as number | undefined,
+        warnSpanDays: series.warnSpanDays as number | undefined,
       },
       ratings,
       dynamics,

@@ -51,6 +51,8 @@ describe('years are read as written (ECMA-262 MakeFullYear maps 0â€“99 to 1900â€
     expect(parseInstant('0026-03-01 10:00', 'UTC', windowed)).toMatchObject({ ok: false, code: 'time_outside_window' });
     expect(parseInstant('0099-12-31T10:00:00Z', 'UTC', windowed)).toMatchObject({ ok: false, code: 'time_outside_window' });
     expect(parseInstant('2037-01-01T00:00:00Z', 'UTC', windowed)).toMatchObject({ ok: false, code: 'time_outside_window' });
+    expect(parseInstant('2036-12-04T00:00:00Z', 'UTC', windowed)).toMatchObject({ ok: false, code: 'time_outside_window' });
+    expect(parseInstant('2036-12-03T23:59:59Z', 'UTC', windowed)).toMatchObject({ ok: true });
     expect(parseInstant('1969-12-31T23:59:59Z', 'UTC', windowed)).toMatchObject({ ok: false, code: 'time_outside_window' });
     expect(parseInstant('1970-01-01T00:00:00Z', 'UTC', windowed)).toMatchObject({ ok: true, instant: 0 });
     expect(parseInstant('2036-12-02T23:59:59Z', 'UTC', windowed)).toMatchObject({ ok: true });
@@ -68,7 +70,7 @@ describe('years are read as written (ECMA-262 MakeFullYear maps 0â€“99 to 1900â€
 
 describe('the plausible window is set by --time-window FROM/TO', () => {
   it('reads dates and open sides', () => {
-    expect(timeWindow(NOW, '1900-01-01/')).toEqual({ from: Date.UTC(1900, 0, 1), to: Date.UTC(2036, 11, 3, 7, 0) });
+    expect(timeWindow(NOW, '1900-01-01/')).toEqual({ from: Date.UTC(1900, 0, 1), to: Date.UTC(2036, 11, 4) }); // through the day ten years on
     expect(timeWindow(NOW, '/2026-12-31')).toEqual({ from: 0, to: Date.UTC(2027, 0, 1) });
     expect(timeWindow(NOW, '2020-01-01T00:00:00+02:00/2021-01-01T00:00:00Z')).toEqual({ from: Date.UTC(2019, 11, 31, 22), to: Date.UTC(2021, 0, 1) });
   });
