@@ -1,3 +1,4 @@
+import { inTimeWindow } from '../ingest/time-window.js';
 import { readFile } from 'node:fs/promises';
 import { basename, dirname } from 'node:path';
 import { inputError, usageError } from '../errors.js';
@@ -172,8 +173,8 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
         await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone \`${zone}\`; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
         continue;
       }
-      if (!(r.person ?? '').trim() || !Number.isFinite(instant) || !Number.isInteger(words) || words < 0) {
-        const what = !(r.person ?? '').trim() ? 'no person' : !Number.isFinite(instant) ? `time_utc \`${r.time_utc ?? ''}\` is not an RFC 3339 instant` : `words \`${r.words ?? ''}\` is not a whole number ≥ 0`;
+      if (!(r.person ?? '').trim() || !inTimeWindow(instant, undefined) || !Number.isInteger(words) || words < 0) {
+        const what = !(r.person ?? '').trim() ? 'no person' : !inTimeWindow(instant, undefined) ? 'time_utc is not an RFC 3339 instant with a year 0000–9999' : `words \`${r.words ?? ''}\` is not a whole number ≥ 0`;
         await reject({ code: 'bad_score_row', message: `${what}; the series stage reads rows written by lexichron score`, source: item.source, stage: 'series' });
         continue;
       }

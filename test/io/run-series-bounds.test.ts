@@ -54,4 +54,11 @@ describe('series are bounded', () => {
     expect(existsSync(out)).toBe(false);
     expect(existsSync(`${tmp.dir}/cli-out/datapackage.json`)).toBe(false);
   });
+
+  it('rejects a scores row whose time_utc lies at the edge of ECMA-262\'s range as bad_score_row instead of crashing', async () => {
+    const scores = tmp.write('edge.csv', `${HEADER}\ne1,p1,2026-05-01T10:00:00.000Z,Europe/Brussels,,5,1,1\ne2,p1,+275760-09-13T00:00:00.000Z,Europe/Brussels,,5,1,1\n`);
+    const result = await runSeries(options(scores, `${tmp.dir}/edge-out/series.csv`, { bin: parseBinSpec('1d') }));
+    expect(result.rejected).toEqual({ bad_score_row: 1 });
+    expect(result.entries).toBe(1);
+  });
 });
