@@ -137,4 +137,13 @@ describe('importers that keep nothing say so', () => {
     expect(stderr).toMatch(/line 2 \(third_party\)/);
     expect(stderr).toMatch(/--sender/);
   });
+
+  it('a diary dated in the year 26 is read as the year 26 and rejected by the window, not kept as 1926', async () => {
+    const input = tmp.write('diary-26.md', '# 0026-03-01\nWalked the dog.\n# 2026-03-02\nRain.\n');
+    const out = tmp.path('diary-26/entries.jsonl');
+    const { code } = await runCli('import', 'diary', input, '--person', 'p1', '--time-zone', 'UTC', '-o', out);
+    expect(code).toBe(0);
+    expect(readFileSync(out, 'utf8').trim().split('\n').map((l) => (JSON.parse(l) as { time: string }).time)).toEqual(['2026-03-02T12:00:00+00:00']);
+    expect(rejectsOf(`${out}.rejects.csv`).map((r) => [r[1], r[2]])).toEqual([['1', 'time_outside_window']]);
+  });
 });
