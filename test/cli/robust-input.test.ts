@@ -78,7 +78,7 @@ describe('plausible years only', () => {
     const input = tmp.write('tw.csv', 'person,time,text\np1,2026-03-01 10:00,good\n');
     const { code, stderr } = await runCli('score', input, '--time-zone', 'UTC', '-o', tmp.path('tw/s.csv'), '--time-window', '2026-13-01/');
     expect(code).toBe(2);
-    expect(stderr).toMatch(/--time-window/);
+    expect(stderr).toMatch(/--time-window `2026-13-01\/`: `2026-13-01` is not a date/);
   });
 });
 
