@@ -9,6 +9,7 @@ export { TOOL_VERSION } from './version.js';
 export { readRecords, formatFromPath, type RecordItem, type ReadRecordsOptions, type TableFormat } from './ingest/read-records.js';
 export { readEntries, recordToEntry, type ReadEntriesOptions } from './ingest/read-entries.js';
 export { parseInstant, formatLocal, formatUtc, DEFAULT_TIME_OPTIONS, type TimeOptions, type InstantResult } from './ingest/parse-instant.js';
+export { timeWindow, type TimeWindow } from './ingest/time-window.js';
 export { resolveWallClock, zoneOffset, isValidZone, type WallClockPolicy } from './ingest/zone-offset.js';
 export { buildZoneTable, zoneAtInstant, zoneOnLocalDate, type ZoneTable } from './ingest/zone-table.js';
 export { parseColumnMapping, resolveColumns, type ColumnMapping } from './ingest/column-mapping.js';

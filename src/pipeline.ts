@@ -31,6 +31,7 @@ import { parseReducers, seriesOptionsFrom } from './cli/series-options.js';
 import { parseStudy, type Study } from './study/parse-study.js';
 import type { AuditSettings } from './study/stage-settings.js';
 import type { TimeOptions } from './ingest/parse-instant.js';
+import { timeWindow } from './ingest/time-window.js';
 import type { ZoneTable } from './ingest/zone-table.js';
 import { readPseudonymKey, PSEUDONYM_KEY_ENV } from './io/read-pseudonym-key.js';
 import { createPseudonymizer } from './privacy/create-pseudonymizer.js';
@@ -211,7 +212,8 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     throw usageError(`Study file \`${studyPath}\`, $.timeZone: unknown time zone \`${study.timeZone}\`; expected an IANA name such as \`Europe/Brussels\`.`);
   }
   const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
-  const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap };
+  const window = timeWindow(Date.parse(options.now), study.time.window, `Study file \`${studyPath}\`, $.time.window`);
+  const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap, window };
   const privacy = study.privacy ?? {};
   const keyEnv = privacy.keyEnv ?? PSEUDONYM_KEY_ENV;
   const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, options.env?.[keyEnv]);

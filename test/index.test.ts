@@ -48,7 +48,7 @@ const EXPORTS = [
   'splitHalfReliability', 'splitMbox', 'standardDeviation', 'stripMailQuotes', 'studentTCdf',
   'studentTQuantile', 'studentTTwoSidedP', 'studyInput', 'suggestTerms', 'suggestionReasonText',
   'tableResource', 'tallyImportItem', 'termAuditFiles', 'termAuditor', 'termReliability',
-  'tokenOffsets', 'tokenize', 'tokenizeEnglish', 'tokenizeSegmenter', 'topTerms', 'usageError',
+  'timeWindow', 'tokenOffsets', 'tokenize', 'tokenizeEnglish', 'tokenizeSegmenter', 'topTerms', 'usageError',
   'validateSeries', 'validateStage', 'var1', 'variance', 'wordCountReliability', 'wordnetDictDir',
   'wordnetKey', 'wordnetPartsOfSpeech', 'wordnetRelatedLemmas', 'writeReport', 'writeStudyAudit',
   'writeTermAudit', 'zoneAtInstant', 'zoneOffset', 'zoneOnLocalDate'

@@ -25,6 +25,7 @@ export function registerValidate(program: Command): void {
     .requiredOption('-r, --ratings <file>', 'self-reports: CSV, TSV, JSON Lines or JSON with person, time and rating columns')
     .requiredOption('-o, --out <dir>', 'folder for the validation tables, validation.json and datapackage.json')
     .option('--rating <column>', 'a rating column to validate (repeatable or comma-separated; default: every column but person, time, zone, id)', collect)
+    .option('--missing <codes>', 'missing-value codes of the rating columns, comma-separated (e.g. NA,-99): read as missing, not as errors')
     .option('--scale <scales>', 'declared scale of each rating, NAME=MIN:MAX, comma-separated (e.g. mood=0:100,calm=1:7; *=1:7 for all); values outside are rejected')
     .option('--score <column>', 'a text score column to validate (repeatable or comma-separated; default: all)', collect)
     .addOption(new Option('--align <how>', 'pair by the series\' bins, or by the text written in a window before each self-report').choices(['bins', 'window']).default('bins'))
@@ -52,6 +53,7 @@ export function registerValidate(program: Command): void {
       zones,
       time: timeOptionsFrom(opts),
       ratingColumns: opts.rating as string[] | undefined,
+      missing: opts.missing !== undefined ? String(opts.missing).split(',') : undefined,
       scales: String(opts.scale),
       scoreColumns: opts.score as string[] | undefined,
       out: String(opts.out),

@@ -54,6 +54,8 @@ export interface RunValidateOptions {
   time?: TimeOptions;
   /** Rating columns (default: every column but person, time, zone and id). */
   ratingColumns?: string[];
+  /** Missing-value codes of the rating columns (`--missing NA,-99`): read as missing, not as errors. */
+  missing?: readonly string[];
   /** Declared scales, as a map or the `--scale` text. */
   scales: ReadonlyMap<string, RatingScale> | string;
   /** Score columns to validate (default: every score column of the series / event file). */
@@ -81,11 +83,12 @@ export interface RunValidateResult {
 }
 
 /** Reads the self-report file into ratings and diagnostics (row rejects and value rejects). */
-export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales' | 'person' | 'ratingsName'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number }> {
+export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales' | 'person' | 'ratingsName' | 'missing'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number }> {
   const scales = typeof options.scales === 'string' ? parseRatingScales(options.scales) : options.scales;
   const mapping = typeof options.columns === 'string' || options.columns === undefined ? parseColumnMapping(options.columns) : options.columns;
   const time = options.time ?? DEFAULT_TIME_OPTIONS;
   const file = basename(options.ratings);
+  const missing = new Set((options.missing ?? []).map((m) => m.trim()).filter((m) => m !== ''));
   const ratings: Rating[] = [];
   const diagnostics: Diagnostic[] = [];
   let columns: ColumnMapping | undefined;
@@ -116,7 +119,7 @@ export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 
       diagnostics.push({ ...parsed.diagnostic, stage: 'validate' });
       continue;
     }
-    const { values, diagnostics: valueProblems } = ratingValues(item.record, ratingCols, scales, item.source);
+    const { values, diagnostics: valueProblems } = ratingValues(item.record, ratingCols, scales, item.source, missing);
     diagnostics.push(...valueProblems);
     const e = parsed.entry;
     ratings.push({ person: options.person ? options.person(e.person) : e.person, instant: e.instant, zone: e.zone, offsetMinutes: e.offsetMinutes, values, source: item.source });

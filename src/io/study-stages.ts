@@ -43,6 +43,7 @@ export const validateStage: StudyStage = async (context) => {
     zones: context.zones,
     time: context.time,
     ratingColumns: settings.ratings,
+    missing: settings.missing,
     scales: new Map(Object.entries(settings.scales).map(([k, [min, max]]) => [k, { min, max }])),
     scoreColumns: settings.scores,
     out: dir,

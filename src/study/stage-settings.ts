@@ -10,6 +10,8 @@ export interface RatingsSettings {
   scales: Record<string, [number, number]>;
   /** Rating columns (default: every column but person, time, zone, id). */
   ratings?: string[];
+  /** Missing-value codes of the rating columns, e.g. ["NA", "-99"]. */
+  missing?: string[];
   /** Score columns to validate (default: all). */
   scores?: string[];
   align: 'bins' | 'window';
@@ -87,6 +89,7 @@ const RATINGS_RULES: Record<string, Rule> = {
     expected: 'the declared scale of each rating, e.g. {"mood": [0, 100], "calm": [1, 7]}',
   },
   ratings: { check: isStrings, expected: 'an array of rating column names' },
+  missing: { check: isStrings, expected: 'an array of missing-value codes such as ["NA", "-99"]' },
   scores: { check: isStrings, expected: 'an array of score column names' },
   align: { check: (v) => v === 'bins' || v === 'window', expected: 'bins or window' },
   window: { check: (v) => typeof v === 'string' && /^\s*\d+\s*(m|min|h|d)\s*$/i.test(v), expected: 'a duration such as "3h" or "90m"' },
@@ -137,6 +140,7 @@ export function ratingsSettings(value: Record<string, unknown>, problems: StudyP
     delimiter: value.delimiter as string | undefined,
     scales: (value.scales ?? {}) as Record<string, [number, number]>,
     ratings: value.ratings as string[] | undefined,
+    missing: value.missing as string[] | undefined,
     scores: value.scores as string[] | undefined,
     align: (value.align as 'bins' | 'window' | undefined) ?? 'bins',
     window: (value.window as string | undefined) ?? '3h',
