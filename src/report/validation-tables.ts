@@ -25,10 +25,11 @@ export function validationStatisticsTable(result: ValidationResult): Table {
     const row = (level: string, statistic: string, f: { estimate?: number; se?: number; ciLow?: number; ciHigh?: number; df?: number; n?: number; p?: number; note?: string }) =>
       rows.push([score, rating, level, statistic, num(f.estimate), num(f.se), num(f.ciLow), num(f.ciHigh), num(f.df), num(f.n), num(f.p), f.note ?? '']);
     row('all', 'pairs', { estimate: a.pairs, n: a.persons, note: 'complete pairs; n = persons' });
-    const corr = (level: string, statistic: string, r: typeof a.pooled) =>
-      r.ok ? row(level, statistic, { estimate: r.r, ciLow: r.ciLow, ciHigh: r.ciHigh, df: r.df, n: r.n, p: r.p, note: r.ciLow === undefined ? 'interval needs n > 3' : '' }) : row(level, statistic, { note: note(r) });
-    corr('pooled', 'r', a.pooled);
-    corr('between', 'r_person_means', a.between);
+    if (a.pooled.ok) row('pooled', 'r', { estimate: a.pooled.r, n: a.pooled.n, note: a.pooled.note });
+    else row('pooled', 'r', { note: note(a.pooled) });
+    const b = a.between;
+    if (b.ok) row('between', 'r_person_means', { estimate: b.r, ciLow: b.ciLow, ciHigh: b.ciHigh, df: b.df, n: b.n, p: b.p, note: b.ciLow === undefined ? 'interval needs n > 3' : '' });
+    else row('between', 'r_person_means', { note: note(b) });
     if (a.bootstrapBetween.ok) row('between', 'r_person_means_bootstrap', { estimate: a.between.ok ? a.between.r : undefined, se: a.bootstrapBetween.se, ciLow: a.bootstrapBetween.ciLow, ciHigh: a.bootstrapBetween.ciHigh, n: a.bootstrapBetween.succeeded, note: `percentile interval, ${a.bootstrapBetween.replicates} resamples of persons` });
     else row('between', 'r_person_means_bootstrap', { note: note(a.bootstrapBetween) });
     const w = a.within;

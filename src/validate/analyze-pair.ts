@@ -12,6 +12,7 @@ import type { AlignedPair } from './aligned-pair.js';
 import { betweenPersonCorrelation, personMeans } from './between-person-correlation.js';
 import { perPersonCorrelations, type PerPersonSummary } from './per-person-correlations.js';
 import { pairVerdict, type Verdict } from './pair-verdict.js';
+import { pooledCorrelation, type PooledCorrelation } from './pooled-correlation.js';
 
 /** Options of {@link analyzePair}. */
 export interface PairAnalysisOptions {
@@ -32,8 +33,8 @@ export interface PairAnalysis {
   /** Complete pairs and persons contributing at least one. */
   pairs: number;
   persons: number;
-  /** Pearson r over all pairs, ignoring persons (mixes both levels; shown for contrast). */
-  pooled: StatResult<Correlation>;
+  /** Pearson r over all pairs, ignoring persons (mixes both levels; descriptive only, no interval or p). */
+  pooled: StatResult<PooledCorrelation>;
   /** Pearson r of person means (n = persons). */
   between: StatResult<Correlation>;
   /** Repeated-measures correlation (Bakdash & Marusich 2017). */
@@ -74,7 +75,7 @@ export function analyzePair(pairs: readonly AlignedPair[], options: PairAnalysis
   const means = personMeans(complete);
   const meanByPerson = new Map(means.map((m) => [m.person, m.x]));
   const grandOfMeans = means.length ? means.reduce((s, m) => s + m.x, 0) / means.length : 0;
-  const pooled = pearsonCorrelation(complete, (d) => d.x, (d) => d.y, { level });
+  const pooled = pooledCorrelation(complete);
   const between = betweenPersonCorrelation(complete, level);
   const within = repeatedMeasuresCorrelation(complete, (d) => d.person, (d) => d.x, (d) => d.y, { level });
   const perPerson = perPersonCorrelations(pairs, options.minPairs ?? 10);
