@@ -52,8 +52,20 @@ export function validationStatisticsTable(result: ValidationResult): Table {
       row('model', 'variance_person', { estimate: m.varianceIntercept, n: m.groups, note: m.boundary ? 'estimated at its bound 0 (singular fit)' : '' });
       row('model', 'variance_residual', { estimate: m.varianceResidual, n: m.n });
       row('model', 'icc_conditional', { estimate: m.icc, n: m.groups, note: 'person variance share of the rating after the score' });
-      row('model', 'reml_criterion', { estimate: m.remlCriterion, n: m.n });
+      row('model', 'reml_criterion', { estimate: m.remlCriterion, n: m.n, note: a.reportedModel === 'random_intercept' ? 'reported model' : 'not reported: the random-slope model is' });
     } else row('model', 'fit', { note: note(m) });
+    const s = a.randomSlopeModel;
+    if (s.ok) {
+      const inf = s.inference === 'wald-z' ? 'Wald z' : 't with between/within df (the random-slope predictor on persons − between terms)';
+      const lead = a.reportedModel === 'random_slopes' ? 'reported model' : 'not reported';
+      for (const f of s.fixed) row('model_slopes', f.name === '(Intercept)' ? 'intercept' : f.name, { estimate: f.estimate, se: f.se, ciLow: f.ciLow, ciHigh: f.ciHigh, df: f.df, n: s.n, p: f.p, note: `REML model with random intercepts and ${s.slope} slopes (${lead}); ${inf}` });
+      row('model_slopes', 'variance_person_intercept', { estimate: s.varianceIntercept, n: s.groups, note: s.boundary ? 'singular fit: a variance is at its bound 0' : '' });
+      row('model_slopes', `variance_person_slope`, { estimate: s.varianceSlope, n: s.groups });
+      row('model_slopes', 'correlation_intercept_slope', { estimate: s.correlation, n: s.groups, note: s.correlation === undefined ? 'a variance is 0' : '' });
+      row('model_slopes', 'variance_residual', { estimate: s.varianceResidual, n: s.n });
+      row('model_slopes', 'reml_criterion', { estimate: s.criterion, n: s.n, note: lead });
+      if (a.slopeTest) row('model_slopes', 'slope_lrt', { estimate: a.slopeTest.statistic, n: s.groups, p: a.slopeTest.p, note: 'REML likelihood ratio, random slopes against random intercepts; p from the 50:50 χ²(1)/χ²(2) mixture (Self & Liang 1987)' });
+    } else row('model_slopes', 'fit', { note: note(s) });
     for (const [which, icc] of [['score', a.iccScore], ['rating', a.iccRating]] as const) {
       if (icc.ok) {
         row('icc', `icc1_${which}`, { estimate: icc.icc1, df: icc.df1, n: icc.groups, p: icc.p, note: `one-way ANOVA, n0 = ${num(icc.n0)}` });

@@ -5,7 +5,7 @@ import type { Diagnostic } from '../types.js';
 import { alignRatingsToBins } from './align-ratings-to-bins.js';
 import { alignRatingsToWindows } from './align-ratings-to-windows.js';
 import type { AlignedRow } from './aligned-row.js';
-import { analyzePair, type PairAnalysis } from './analyze-pair.js';
+import { analyzePair, type PairAnalysis, type RandomSlopeChoice } from './analyze-pair.js';
 import { binsPerPerson, type BinsPerPerson } from './bins-per-person.js';
 import type { EntryScore } from './entry-score.js';
 import type { Rating } from './rating.js';
@@ -32,6 +32,8 @@ export interface ValidateOptions {
   level: number;
   /** Fixed-effect inference of the mixed model (default `between-within-t`). */
   inference: FixedEffectInference;
+  /** Random slopes for the within-person score (default `auto`: when the likelihood-ratio test favours them). */
+  randomSlopes: RandomSlopeChoice;
 }
 
 export const DEFAULT_VALIDATE_OPTIONS: ValidateOptions = {
@@ -44,6 +46,7 @@ export const DEFAULT_VALIDATE_OPTIONS: ValidateOptions = {
   reliability: 0.7,
   level: 0.95,
   inference: 'between-within-t',
+  randomSlopes: 'auto',
 };
 
 /** What {@link validateSeries} needs: parsed inputs (see `runValidate` for reading them from files). */
@@ -107,7 +110,7 @@ export function validateSeries(input: ValidateInput, options: Partial<ValidateOp
     for (const rating of input.ratingColumns) {
       const analysis = analyzePair(
         rows.map((r) => ({ person: r.person, x: r.scores[score], y: r.ratings[rating] })),
-        { random: random(`${o.seed}\u0000${score}\u0000${rating}`), replicates: o.replicates, minPairs: o.minPairs, level: o.level, inference: o.inference },
+        { random: random(`${o.seed}\u0000${score}\u0000${rating}`), replicates: o.replicates, minPairs: o.minPairs, level: o.level, inference: o.inference, randomSlopes: o.randomSlopes },
       );
       pairs.push({ score, rating, analysis });
     }
