@@ -81,7 +81,10 @@ export function registerValidate(program: Command): void {
       lines.push('', `${score} × ${rating}: ${analysis.verdict.text}`);
       for (const w of analysis.verdict.warnings) lines.push(`  warning (${w.code}): ${w.message}`);
     }
-    for (const rel of result.result.reliability) lines.push('', rel.text);
+    for (const rel of result.result.reliability) {
+      lines.push('', rel.text);
+      if (rel.warning) lines.push(`  warning (min_words_below_reliability): ${rel.warning}`);
+    }
     lines.push('', ...Object.entries(result.files).filter(([, p]) => p).map(([k, p]) => `${k}: ${p}`));
     process.stderr.write(lines.join('\n') + '\n');
   });

@@ -100,9 +100,9 @@ export function personCorrelationsTable(result: ValidationResult): Table {
 export function wordReliabilityTable(result: ValidationResult): Table {
   const rows: string[][] = [];
   for (const rel of result.reliability) {
-    for (const b of rel.bands) rows.push([rel.column, num(b.low), num(b.high), num(b.bins), num(b.medianWords), num(b.halfR), num(b.reliability), num(b.withinReliability), num(b.wordsForTarget), b.note]);
+    for (const b of rel.bands) rows.push([rel.column, num(b.low), num(b.high), num(b.bins), num(b.medianWords), num(b.halfR), num(b.reliability), num(b.reliabilityLow), num(b.reliabilityHigh), num(b.withinReliability), num(b.wordsForTarget), rel.reducer, num(rel.splits), b.note]);
   }
-  return { header: ['score', 'words_from', 'words_below', 'bins', 'median_words', 'half_r', 'reliability', 'within_reliability', 'words_for_target', 'note'], rows };
+  return { header: ['score', 'words_from', 'words_below', 'bins', 'median_words', 'half_r', 'reliability', 'reliability_low', 'reliability_high', 'within_reliability', 'words_for_target', 'halves_scored_by', 'splits', 'note'], rows };
 }
 
 /** Observed bins behind each person mean and the mean's reliability. */

@@ -1,4 +1,5 @@
 import { usageError } from '../errors.js';
+import type { BinReducer } from '../series/bin-accumulator.js';
 import type { FixedEffectInference } from '../stats/linear-mixed-model.js';
 import { random } from '../stats/random.js';
 import type { Diagnostic } from '../types.js';
@@ -58,6 +59,10 @@ export interface ValidateInput {
   ratings: readonly Rating[];
   scoreColumns: readonly string[];
   ratingColumns: readonly string[];
+  /** The series' reducer per score column (from the series' .meta.json); default `weighted`. */
+  reducers?: Readonly<Record<string, BinReducer>>;
+  /** The series stage's --min-words (from its .meta.json), for the reliability warning under bin alignment. */
+  seriesMinWords?: number;
   /** Formats a self-report's local time (window labels); default: ISO UTC. */
   label?: (rating: Rating) => string;
 }
@@ -116,7 +121,14 @@ export function validateSeries(input: ValidateInput, options: Partial<ValidateOp
     }
   }
   const reliability = input.entries
-    ? input.scoreColumns.map((c) => wordCountReliability(input.entries as EntryScore[], c, { random: random(`${o.seed}\u0000reliability\u0000${c}`), target: o.reliability }))
+    ? input.scoreColumns.map((c) =>
+        wordCountReliability(input.entries as EntryScore[], c, {
+          random: random(`${o.seed}\u0000reliability\u0000${c}`),
+          target: o.reliability,
+          reducer: input.reducers?.[c] ?? 'weighted',
+          minWordsInUse: o.align === 'bins' ? input.seriesMinWords : o.minWords,
+        }),
+      )
     : [];
   const perPerson = input.bins ? input.scoreColumns.map((c) => binsPerPerson(input.bins as SeriesBin[], c)) : [];
   return {
