@@ -18,13 +18,13 @@ export function modelReading(
   alpha: number,
 ): ModelReading | undefined {
   const within = (fixed: readonly FixedEffect[]) => fixed.find((f) => f.name === 'score_within');
-  const test = a.slopeTest ? `likelihood-ratio χ² = ${a.slopeTest.statistic.toFixed(1)}, ${pText(a.slopeTest.p)}, REML fits, 50:50 χ²₁/χ²₂ mixture` : undefined;
+  const test = a.slopeTest ? `χ² = ${a.slopeTest.statistic.toFixed(1)}, ${pText(a.slopeTest.p)}; REML fits, 50:50 χ²₁/χ²₂ mixture` : undefined;
   const pct = (level: number) => `${Math.round(level * 100)}%`;
   if (a.reportedModel === 'random_slopes' && a.randomSlopeModel.ok) {
     const m = a.randomSlopeModel;
     const w = within(m.fixed);
     const sd = Math.sqrt(m.varianceSlope);
-    const why = test ? (a.slopeTest && a.slopeTest.p < alpha ? `as the ${test} favours` : `as requested (${test})`) : 'as requested';
+    const why = test ? (a.slopeTest && a.slopeTest.p < alpha ? `because a likelihood-ratio test favours it (${test})` : `as requested (likelihood-ratio ${test})`) : 'as requested';
     return {
       sentence: `The mixed model lets each person's slope vary (1 + score_within | person), ${why}: the average within-person slope is ${f2(w?.estimate)} rating units per score unit, ${pct(m.level)} CI [${f2(w?.ciLow)}, ${f2(w?.ciHigh)}], and persons' slopes spread around it with SD ${f2(sd)}.`,
       warning: {
@@ -36,7 +36,7 @@ export function modelReading(
   if (a.mixedModel.ok) {
     const m = a.mixedModel;
     const w = within(m.fixed);
-    const why = test ? `the ${test}, does not favour letting persons' slopes vary` : a.randomSlopeModel.ok || a.randomSlopeModel.code === 'not_requested' ? '' : `a model with varying slopes could not be fitted (${a.randomSlopeModel.reason})`;
+    const why = test ? `a likelihood-ratio test does not favour letting persons' slopes vary (${test})` : a.randomSlopeModel.ok || a.randomSlopeModel.code === 'not_requested' ? '' : `a model with varying slopes could not be fitted (${a.randomSlopeModel.reason})`;
     return {
       sentence: `The random-intercept mixed model gives a within-person slope of ${f2(w?.estimate)} rating units per score unit, ${pct(m.level)} CI [${f2(w?.ciLow)}, ${f2(w?.ciHigh)}]${why ? `; ${why}` : ''}.`,
     };

@@ -66,7 +66,7 @@ describe('analyzePair', () => {
   it('reports the random-intercept model, and says so, when the slope test does not favour random slopes (slopes built equal)', () => {
     expect(result.reportedModel).toBe('random_intercept');
     expect(result.slopeTest?.p).toBeGreaterThan(0.05);
-    expect(result.verdict.text).toMatch(/random-intercept mixed model gives a within-person slope of .* does not favour letting persons' slopes vary/);
+    expect(result.verdict.text).toMatch(/random-intercept mixed model gives a within-person slope of .*; a likelihood-ratio test does not favour letting persons' slopes vary \(χ² = /);
     expect(result.verdict.warnings.map((w) => w.code)).not.toContain('slopes_vary');
   });
   it('reports random slopes by default when persons\' slopes vary, with a wider within-person interval, and says so in the verdict', () => {
@@ -86,7 +86,7 @@ describe('analyzePair', () => {
     if (!a.mixedModel.ok || !a.randomSlopeModel.ok) throw new Error('fit failed');
     expect(a.randomSlopeModel.fixed[1]?.se).toBeGreaterThan(1.5 * (a.mixedModel.fixed[1]?.se as number));
     expect(a.randomSlopeModel.fixed[1]?.df).toBe(30 - 2);
-    expect(a.verdict.text).toMatch(/lets each person's slope vary \(1 \+ score_within \| person\), as the likelihood-ratio χ² = .* favours/);
+    expect(a.verdict.text).toMatch(/lets each person's slope vary \(1 \+ score_within \| person\), because a likelihood-ratio test favours it \(χ² = /);
     expect(a.verdict.warnings.map((w) => w.code)).toContain('slopes_vary');
     const never = analyzePair(varying, { random: random(3), replicates: 0, randomSlopes: 'never' });
     expect(never.reportedModel).toBe('random_intercept');
