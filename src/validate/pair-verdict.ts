@@ -33,7 +33,7 @@ export const VERDICT_THRESHOLDS = {
   small: 0.1,
   medium: 0.3,
   large: 0.5,
-  /** Below this a within-person r is called weak even when clear (published dictionary-vs-momentary-affect associations are often below .25). */
+  /** Below this a within-person r is called weak even when clear. From memory, no pooled estimate: published dictionary-vs-momentary-affect associations are weak (README Cautions names two studies). */
   weakWithin: 0.25,
   /** Common practice (no single source): fewer persons make a between-person r too imprecise to read. */
   minPersons: 20,
