@@ -30,7 +30,7 @@ export interface RandomSlopeFit {
   criterion: number;
   /** log L or log L_R: −criterion/2 (lme4 `logLik`). */
   logLik: number;
-  /** True when the random-effects covariance is singular (lme4 `isSingular`, tolerance 1e-4 on θ). */
+  /** True when the random-effects covariance is singular: a diagonal element of Λ below 1e-4, as lme4 `isSingular` (here with the slope predictor scaled to unit root mean square). */
   boundary: boolean;
   n: number;
   groups: number;
