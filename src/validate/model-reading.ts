@@ -29,7 +29,7 @@ export function modelReading(
       sentence: `The mixed model lets each person's slope vary (1 + score_within | person), ${why}: the average within-person slope is ${f2(w?.estimate)} rating units per score unit, ${pct(m.level)} CI [${f2(w?.ciLow)}, ${f2(w?.ciHigh)}], and persons' slopes spread around it with SD ${f2(sd)}.`,
       warning: {
         code: 'slopes_vary',
-        message: `Persons differ in how their rating follows their score (SD of slopes ${f2(sd)} around an average of ${f2(w?.estimate)}); the average within-person association does not describe every person, and the model with random slopes gives its honest, wider interval.`,
+        message: `Persons differ in how their rating follows their score (SD of slopes ${f2(sd)} around an average of ${f2(w?.estimate)}); the average within-person association does not describe every person, and the random-slope model's interval for the average allows for that spread.`,
       },
     };
   }
