@@ -94,11 +94,11 @@ export {
   mean, variance, moments, standardDeviation, quantile, isNumber, groupBy,
   pearsonCorrelation, correlationFromMoments, fisherInterval,
   repeatedMeasuresCorrelation, intraclassCorrelation, oneWayIntraclassCorrelation,
-  linearMixedModel, cronbachAlpha, spearmanBrown, spearmanBrownFactor, splitHalfReliability,
+  linearMixedModel, randomSlopeMixedModel, randomSlopeTest, minimizeNelderMead, cronbachAlpha, spearmanBrown, spearmanBrownFactor, splitHalfReliability,
   clusterBootstrap, random, randomInteger, shuffle, minimizeScalar, cholesky, notEstimable,
   normalCdf, normalQuantile, studentTCdf, studentTQuantile, studentTTwoSidedP, normalTwoSidedP, fCdf, fQuantile,
   type StatResult, type NotEstimable, type Correlation, type RepeatedMeasuresCorrelation, type IntraclassCorrelations, type IccForm,
-  type OneWayIntraclassCorrelation, type LinearMixedModelFit, type LinearMixedModelOptions, type FixedEffect, type FixedEffectInference,
+  type OneWayIntraclassCorrelation, type LinearMixedModelFit, type RandomSlopeFit, type RandomSlopeOptions, type RandomSlopeTest, type MixedModelMethod, type LinearMixedModelOptions, type FixedEffect, type FixedEffectInference,
   type CronbachAlpha, type SplitHalfReliability, type BootstrapInterval, type RandomSource,
 } from './stats/index.js';
 

@@ -57,6 +57,7 @@ export const validateStage: StudyStage = async (context) => {
       replicates: settings.replicates,
       minPairs: settings.minPairs,
       reliability: settings.reliability,
+      randomSlopes: settings.randomSlopes,
     },
   });
   if (settings.align === 'bins') {

@@ -21,6 +21,8 @@ export interface RatingsSettings {
   replicates: number;
   minPairs: number;
   reliability: number;
+  /** Random slopes for the within-person score in the mixed model. */
+  randomSlopes: 'auto' | 'always' | 'never';
 }
 
 /** Dynamics settings of a study file (`dynamics`). */
@@ -97,6 +99,7 @@ const RATINGS_RULES: Record<string, Rule> = {
   replicates: { check: wholeAtLeast(0), expected: 'a whole number ≥ 0 (bootstrap resamples; 0 skips)' },
   minPairs: { check: wholeAtLeast(2), expected: 'a whole number ≥ 2' },
   reliability: { check: between01, expected: 'a number between 0 and 1, e.g. 0.7' },
+  randomSlopes: { check: (v) => v === 'auto' || v === 'always' || v === 'never', expected: 'auto, always or never' },
 };
 
 const DYNAMICS_RULES: Record<string, Rule> = {
@@ -148,6 +151,7 @@ export function ratingsSettings(value: Record<string, unknown>, problems: StudyP
     replicates: (value.replicates as number | undefined) ?? 2000,
     minPairs: (value.minPairs as number | undefined) ?? 10,
     reliability: (value.reliability as number | undefined) ?? 0.7,
+    randomSlopes: (value.randomSlopes as RatingsSettings['randomSlopes'] | undefined) ?? 'auto',
   };
 }
 

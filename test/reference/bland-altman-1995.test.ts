@@ -40,6 +40,14 @@ describe.skipIf(!data)('Bland & Altman (1995) pH and PaCO2 of 8 subjects (../sha
     const result = pearsonCorrelation(rows, (d) => d.paco2, (d) => d.pH);
     expect(result.ok && result.r).toBeCloseTo(-0.0652177, 7);
   });
+  it('reports the pooled r of the 47 clustered pairs as descriptive only, with no interval or p-value (Bland & Altman 1995)', () => {
+    const a = analyzePair(rows.map((d) => ({ person: d.subject, x: d.paco2, y: d.pH })), { random: random(1), replicates: 0 });
+    if (!a.pooled.ok) throw new Error(a.pooled.reason);
+    expect(a.pooled.r).toBeCloseTo(-0.0652177, 7);
+    expect(a.pooled).not.toHaveProperty('ciLow');
+    expect(a.pooled).not.toHaveProperty('p');
+    expect(a.pooled.note).toMatch(/descriptive only/);
+  });
   it('gives the correlation of the 8 subject means, r = 0.0817731 (SOURCES.md)', () => {
     const means = [...groupBy(rows, (d) => d.subject).values()].map((g) => [mean(g, (d) => d.paco2), mean(g, (d) => d.pH)] as const);
     const result = pearsonCorrelation(means);
