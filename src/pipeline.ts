@@ -29,7 +29,9 @@ import { dataPackage, tableResource, type TableResource } from './report/data-di
 import { buildManifest, type FileRecord, type Manifest } from './report/manifest.js';
 import { parseReducers, seriesOptionsFrom } from './cli/series-options.js';
 import { parseStudy, type Study } from './study/parse-study.js';
-import type { AuditSettings } from './study/stage-settings.js';
+import type { AuditSettings, RatingsSettings } from './study/stage-settings.js';
+import { readRatings } from './io/run-validate.js';
+import { promptWindows } from './series/prompt-windows.js';
 import type { TimeOptions } from './ingest/parse-instant.js';
 import { timeWindow } from './ingest/time-window.js';
 import type { ZoneTable } from './ingest/zone-table.js';
@@ -203,6 +205,26 @@ export async function runStudy(studyPath: string, options: RunStudyOptions): Pro
   }
 }
 
+/**
+ * Each person's study window from the self-reports (first to last prompt, local days), read with
+ * the validation stage's settings; person ids are mapped like the text's so both sides join.
+ */
+async function ratingsWindows(settings: RatingsSettings, at: (p: string) => string, zones: ZoneTable, time: TimeOptions, person: (id: string) => string, dayStart: number): Promise<Map<string, { from: number; to: number }>> {
+  const { ratings } = await readRatings({
+    ratings: at(settings.path),
+    columns: settings.columns ? { person: settings.columns.person ?? 'person', time: settings.columns.time ?? 'time', text: 'text', id: settings.columns.id, zone: settings.columns.zone } : undefined,
+    format: settings.format,
+    delimiter: settings.delimiter,
+    zones,
+    time,
+    ratingColumns: settings.ratings,
+    missing: settings.missing,
+    scales: new Map(Object.entries(settings.scales).map(([k, [min, max]]) => [k, { min, max }])),
+    person,
+  });
+  return promptWindows(ratings, dayStart);
+}
+
 /** The stages of runStudy, writing every output into `outDir` (the staging folder). */
 async function runStudyInto(outDir: string, study: Study, studyPath: string, options: RunStudyOptions): Promise<RunStudyResult> {
   const studyDir = dirname(resolve(studyPath));
@@ -231,8 +253,8 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
   } catch (error) {
     throw usageError(`Study file \`${studyPath}\`, $.series: ${(error as Error).message.replace(/--([a-z-]+)/g, (_m, flag: string) => `"${flag.replace(/-([a-z])/g, (_x, c: string) => c.toUpperCase())}"`)}`);
   }
-  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : undefined;
   const dayStart = seriesOptions.dayStart;
+  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && study.ratings ? await ratingsWindows(study.ratings, at, zones, time, person, dayStart) : undefined;
   const score = await runScore({
     inputs: study.inputs.map((i, n) => studyInput(i, at(i.path), zones, time, `$.inputs[${n}]`)),
     lexicons,

@@ -33,7 +33,7 @@ const FIXED: Record<string, Omit<SchemaField, 'name'>> = {
   bin_hours: { type: 'number', description: 'Real length of the bin in hours (23 or 25 for daily bins on clock-change days)' },
   hours_since_prev: { type: 'number', description: 'Hours from the start of the previous observed bin to the start of this bin' },
   entries: { type: 'integer', description: 'Entries in the bin' },
-  missing: { type: 'string', description: 'Empty when observed; otherwise no_text, too_few_words, excluded_hours or outside_window' },
+  missing: { type: 'string', description: 'Empty when observed; otherwise no_text, too_few_words, excluded_hours, outside_window, before_first_entry or after_last_entry (inside the study window, before the first or after the last entry)' },
   lag_valid: { type: 'integer', description: '1 when bin t-1 is observed and directly adjacent, else 0: only then are the lag columns filled' },
   text: { type: 'string', description: 'Entry text (only with --keep-text; redacted)' },
   excluded: { type: 'integer', description: '1 when the entry fell in excluded hours and was not aggregated' },

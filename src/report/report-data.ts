@@ -10,7 +10,7 @@ import type { Reconciliation } from '../types.js';
 export type Part<T> = { ok: true; value: T } | { ok: false; reason: string };
 
 /** Missing-bin reasons of `series-long.csv` (docs/architecture.md). */
-export type MissingReason = 'no_text' | 'too_few_words' | 'excluded_hours' | 'outside_window';
+export type MissingReason = 'no_text' | 'too_few_words' | 'excluded_hours' | 'outside_window' | 'before_first_entry' | 'after_last_entry';
 
 /** One person-day of the coverage heatmap (bins of that local date summed). */
 export interface CoverageCell {

@@ -3,7 +3,7 @@ import { binInExcludedHours, inExcludedHours, type BinSpec } from './bin-spec.js
 import { dateOfDayNumber, dayStartInstant, localDayOf } from './local-day.js';
 
 /** Why a bin has no value. */
-export type MissingReason = '' | 'no_text' | 'too_few_words' | 'excluded_hours' | 'outside_window';
+export type MissingReason = '' | 'no_text' | 'too_few_words' | 'excluded_hours' | 'outside_window' | 'before_first_entry' | 'after_last_entry';
 
 export type FillMethod = 'none' | 'carry' | 'linear';
 
@@ -175,6 +175,8 @@ interface GridBin {
   slots: number[];
   excluded: boolean;
   outside: boolean;
+  /** Last local day the bin covers. */
+  lastDay: number;
 }
 
 /** Lays the person's regular grid over the window and attaches accumulators. */
@@ -214,6 +216,7 @@ function personGrid(state: SeriesState, bins: PersonBins, person: string): GridB
           slots: slotList(bins.slots.get(day * KEY_SCALE + k)),
           excluded: binInExcludedHours(wallMinute, (Math.min(start + size, dayEnd) - start) / 60000, options.excludeHours),
           outside: !inWindow(day),
+          lastDay: day,
         });
       }
       day++;
@@ -228,7 +231,7 @@ function personGrid(state: SeriesState, bins: PersonBins, person: string): GridB
       const part = bins.slots.get(d * KEY_SCALE);
       if (part !== undefined) slots.push(part);
     }
-    out.push({ start: dayStartAt, end, zone, day, binOfDay: 1, slots, excluded: false, outside: !inWindow(day) && !inWindow(day + length - 1) });
+    out.push({ start: dayStartAt, end, zone, day, binOfDay: 1, slots, excluded: false, outside: !inWindow(day) && !inWindow(day + length - 1), lastDay: day + length - 1 });
     day += length;
   }
   return out;
@@ -321,6 +324,10 @@ export function buildPersonSeries(state: SeriesState, person: string): SeriesRow
     let missing: MissingReason = '';
     if (g.excluded) missing = 'excluded_hours';
     else if (g.outside) missing = 'outside_window';
+    // Inside the study window but before the person's first entry or after their last: a late
+    // start or a dropout, told apart from a gap between entries.
+    else if (entries === 0 && g.day > bins.lastDay) missing = 'after_last_entry';
+    else if (entries === 0 && g.lastDay < bins.firstDay) missing = 'before_first_entry';
     else if (entries === 0) missing = 'no_text';
     else if (words < options.minWords) missing = 'too_few_words';
     const values: Array<number | undefined> = [];

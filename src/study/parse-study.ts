@@ -39,6 +39,12 @@ export interface StudySeries {
   to?: string;
   /** Per-person study windows file (person, from, to). */
   windows?: string;
+  /**
+   * Where each person's series runs when no dates or windows file are given: `ratings` (first to
+   * last self-report prompt of the person; the default when the study has ratings) or `entries`
+   * (first to last entry).
+   */
+  window: 'ratings' | 'entries' | 'dates';
   /** Most bins per person (default 100,000) and the span in days beyond which a person is warned about (default 730). */
   maxBins?: number;
   warnSpanDays?: number;
@@ -75,7 +81,7 @@ export interface StudyProblem {
 const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
 const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
 const TIME_KEYS = ['format', 'epoch', 'window', 'dstGap', 'dstOverlap'];
-const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'windows', 'maxBins', 'warnSpanDays'];
+const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'window', 'windows', 'maxBins', 'warnSpanDays'];
 const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names', 'aggregatesOnly'];
 
 /** Levenshtein distance, for "did you mean" hints. */
@@ -180,6 +186,10 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   for (const key of ['minWords', 'maxFill']) need(series[key] === undefined || (Number.isInteger(series[key]) && (series[key] as number) >= 0), `$.series.${key}`, 'expected a whole number ≥ 0');
   need(series.fill === undefined || ['none', 'carry', 'linear'].includes(series.fill as string), '$.series.fill', 'expected none, carry or linear');
   need(series.detrend === undefined || typeof series.detrend === 'boolean', '$.series.detrend', 'expected true or false');
+  const windowDates = isObject(series.window) ? series.window : undefined;
+  need(series.window === undefined || series.window === 'ratings' || series.window === 'entries' || (windowDates !== undefined && typeof windowDates.from === 'string' && typeof windowDates.to === 'string' && Object.keys(windowDates).length === 2), '$.series.window', 'expected {"from": "YYYY-MM-DD", "to": "YYYY-MM-DD"} (the study window in local dates), "ratings" (first to last prompt of each person) or "entries" (first to last entry)');
+  need(!(windowDates && (series.from !== undefined || series.to !== undefined)), '$.series.window', 'give the study window once: either window {"from", "to"} or from and to, not both');
+  need(!(series.window === 'ratings' && !isObject(json.ratings)), '$.series.window', '"ratings" takes the window from the self-reports, but the study has no ratings; give dates {"from", "to"} or "entries"');
   need(json.ratings === undefined || isObject(json.ratings), '$.ratings', 'expected an object such as {"path": "ratings.csv", "scales": {"mood": [0, 100]}}');
   for (const key of ['dynamics', 'audit', 'report']) need(json[key] === undefined || json[key] === false || isObject(json[key]), `$.${key}`, 'expected an object of settings, or false to skip the stage');
   const ratings = isObject(json.ratings) ? ratingsSettings(json.ratings, problems) : undefined;
@@ -224,9 +234,10 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
         maxFill: (series.maxFill as number | undefined) ?? 1,
         detrend: series.detrend === true,
         aggregate: series.aggregate as string | undefined,
-        from: series.from as string | undefined,
-        to: series.to as string | undefined,
+        from: (windowDates?.from ?? series.from) as string | undefined,
+        to: (windowDates?.to ?? series.to) as string | undefined,
         windows: series.windows as string | undefined,
+        window: windowDates || series.from !== undefined || series.to !== undefined || series.windows !== undefined ? 'dates' : series.window === 'entries' ? 'entries' : isObject(json.ratings) ? 'ratings' : 'entries',
         maxBins: series.maxBins as number | undefined,
         warnSpanDays: series.warnSpanDays as number | undefined,
       },

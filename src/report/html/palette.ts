@@ -28,6 +28,8 @@ export const MISSING_STYLE: Record<string, { fill: string; label: string }> = {
   too_few_words: { fill: '#E69F00', label: 'fewer words than the minimum' },
   excluded_hours: { fill: '#CC79A7', label: 'inside excluded hours' },
   outside_window: { fill: '#e4e7ea', label: 'outside the person\'s window' },
+  before_first_entry: { fill: '#f3d9c4', label: 'in the study window, before the first entry' },
+  after_last_entry: { fill: '#9e8a7a', label: 'in the study window, after the last entry (dropout)' },
 };
 
 /** Lightness ramp from pale to dark blue for word counts (5 classes). */
