@@ -261,6 +261,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     zones,
     time,
     out: join(outDir, 'scores.csv'),
+    countRate: study.countRate,
     keepText: study.keepText,
     redact,
     ...(pseudonyms ? { pseudonyms } : {}),

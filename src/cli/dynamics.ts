@@ -43,7 +43,7 @@ export function registerDynamics(program: Command): void {
     .action(async (seriesPath: string, opts: Record<string, unknown>) => {
       const pairs = (opts.pair as string[] | undefined)?.map((p): [string, string] => {
         const parts = p.split(':');
-        if (parts.length !== 2 || !parts[0] || !parts[1]) throw usageError(`--pair \`${p}\` is not of the form A:B, e.g. --pair vader.compound:daily-constructs.worry (self-reports such as mood need --ratings-by-bin)`);
+        if (parts.length !== 2 || !parts[0] || !parts[1]) throw usageError(`--pair \`${p}\` is not of the form A:B, e.g. --pair vader.compound:daily-constructs.worry_per100w (self-reports such as mood need --ratings-by-bin)`);
         return [parts[0], parts[1]];
       });
       const options: Omit<DynamicsOptions, 'variables'> & { variables?: string[] } = {

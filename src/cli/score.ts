@@ -35,6 +35,7 @@ export function registerScore(program: Command): void {
     .option('--workers <n>', 'scoring threads besides the one that reads and writes: a number (0 = none) or auto (by input size and cores)', 'auto')
     .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%');
   addTimeOptions(command);
+  command.addOption(new Option('--count-rate <unit>', 'unit of count categories, also written at the end of their column names: per100w (matched words per 100 words), per1000w or prop (share of words, 0–1)').choices(['per100w', 'per1000w', 'prop']).default('per100w'));
   command.addOption(new Option('--strict', 'exit with code 3 on the first rejected row\'s count (same as --max-rejects 0)'));
   command.action(async (inputs: string[], opts: Record<string, unknown>) => {
     if (!opts.timeZone && !opts.zones) {
@@ -70,6 +71,7 @@ export function registerScore(program: Command): void {
       zones,
       time: timeOptionsFrom(opts),
       out: String(opts.out),
+      countRate: opts.countRate as 'per100w' | 'per1000w' | 'prop',
       keepText: opts.keepText === true && opts.aggregatesOnly !== true,
       redact,
       ...(key ? { pseudonyms: createPseudonymizer(key) } : {}),

@@ -11,7 +11,7 @@ import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import type { Pseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { csvRow } from '../report/csv.js';
 import { scoreRowFiller, scoresHeader } from '../report/score-rows.js';
-import { scoreColumns, scoredEntryFrom, type ScoreColumn } from '../score/score-entry.js';
+import { scoreColumns, scoredEntryFrom, type CountRate, type ScoreColumn } from '../score/score-entry.js';
 import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../score/score-text.js';
 import { createScorePool, scoreWorkerCount, type ScorePool } from './score-pool.js';
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
@@ -37,6 +37,8 @@ export interface RunScoreOptions {
   zones: ZoneTable;
   time: TimeOptions;
   out: string;
+  /** Unit of `count` categories (default per100w), written at the end of their column names. */
+  countRate?: CountRate;
   keepText?: boolean;
   /** Maps kept text before it is written (redaction). */
   redact?: (text: string) => string;
@@ -127,7 +129,7 @@ export async function fileDigest(path: string): Promise<{ sha256: string; bytes:
  * memory does not grow with the number of rows.
  */
 export async function runScore(options: RunScoreOptions): Promise<RunScoreResult> {
-  const columns = scoreColumns(options.lexicons);
+  const columns = scoreColumns(options.lexicons, options.countRate);
   const keepText = options.keepText === true;
   const sidecars = scoreSidecars(options.out);
   let pool: ScorePool | undefined = options.pool;

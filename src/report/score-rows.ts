@@ -44,6 +44,7 @@ export function scoreRowFiller(columns: readonly ScoreColumn[], lexicons: readon
   const n = columns.length;
   const nl = lexicons.length;
   const indexOf = new Map(columns.map((c, k) => [c.name, k]));
+  const scales = columns.map((c) => c.scale ?? 1);
   const layout = lexicons.map((lex, l) => ({
     columns: columns.filter((c) => c.lexicon === lex.ref.name).map((c) => indexOf.get(c.name) as number),
     rules: lex.scoring !== 'vader',
@@ -71,7 +72,8 @@ export function scoreRowFiller(columns: readonly ScoreColumn[], lexicons: readon
       for (const { columns: own, rules, lexicon } of layout) {
         for (const c of own) {
           buffer[at++] = COMMA;
-          at = writeAscii(buffer, at, formatNumber(batch.values[row + c]));
+          const scale = scales[c] as number;
+          at = writeAscii(buffer, at, formatNumber(scale === 1 ? batch.values[row + c] : (batch.values[row + c] as number) * scale));
         }
         if (rules) {
           for (const c of own) {

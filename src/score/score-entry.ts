@@ -3,7 +3,7 @@ import type { RawEntry, ScoredEntry } from '../types.js';
 import { scoreColumns, type ScoreColumn } from './score-columns.js';
 import { scoreTexts, type BatchScores } from './score-text.js';
 
-export { scoreColumns, VADER_COLUMNS, type ScoreColumn } from './score-columns.js';
+export { scoreColumns, VADER_COLUMNS, COUNT_RATES, type ScoreColumn, type CountRate } from './score-columns.js';
 
 /**
  * Turns text `i` of batch scores back into a ScoredEntry (NaN becomes undefined: no score).
@@ -17,7 +17,7 @@ export function scoredEntryFrom(entry: RawEntry, batch: BatchScores, i: number, 
   for (let c = 0; c < n; c++) {
     const column = columns[c] as ScoreColumn;
     const v = batch.values[i * n + c] as number;
-    scores[column.name] = Number.isNaN(v) ? undefined : v;
+    scores[column.name] = Number.isNaN(v) ? undefined : v * (column.scale ?? 1);
     if (column.aggregation !== 'vader') matched[column.name] = batch.matched[i * n + c] as number;
   }
   for (let l = 0; l < lexicons.length; l++) {

@@ -58,6 +58,8 @@ export interface Study {
   time: { format?: string; epoch: EpochUnit; window?: string; dstGap: 'reject' | 'earlier' | 'later'; dstOverlap: 'reject' | 'earlier' | 'later' };
   lexicons: string[];
   keepText: boolean;
+  /** Unit of `count` categories (and the end of their column names). */
+  countRate: 'per100w' | 'per1000w' | 'prop';
   maxRejects: string;
   series: StudySeries;
   /** Self-reports and validation settings (see README.md, "Validating text scores"); absent: no validation. */
@@ -78,7 +80,7 @@ export interface StudyProblem {
   message: string;
 }
 
-const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
+const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'countRate', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
 const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
 const TIME_KEYS = ['format', 'epoch', 'window', 'dstGap', 'dstOverlap'];
 const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'window', 'windows', 'maxBins', 'warnSpanDays'];
@@ -177,6 +179,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   const lexicons = json.lexicons ?? ['afinn-165', 'vader'];
   need(Array.isArray(lexicons) && lexicons.length > 0 && lexicons.every(str), '$.lexicons', 'expected a non-empty array of bundled lexicon names or .lex.tsv paths');
   need(json.keepText === undefined || typeof json.keepText === 'boolean', '$.keepText', 'expected true or false');
+  need(json.countRate === undefined || ['per100w', 'per1000w', 'prop'].includes(json.countRate as string), '$.countRate', 'expected per100w, per1000w or prop (the unit of count categories)');
   need(json.maxRejects === undefined || (typeof json.maxRejects === 'string' && /^(\d+%?|\d+\.\d+%|none)$/.test(json.maxRejects)) || Number.isInteger(json.maxRejects), '$.maxRejects', 'expected a count (25), a percentage ("5%") or "none"');
   const series = isObject(json.series) ? json.series : {};
   if (json.series !== undefined && !isObject(json.series)) problems.push({ path: '$.series', message: 'expected an object such as {"bin": "1d", "dayStart": "04:00", "minWords": 10}' });
@@ -224,6 +227,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
       },
       lexicons: lexicons as string[],
       keepText: json.keepText === true,
+      countRate: (json.countRate as Study['countRate'] | undefined) ?? 'per100w',
       maxRejects: json.maxRejects === undefined ? '5%' : String(json.maxRejects),
       series: {
         bin: (series.bin as string | undefined) ?? '1d',

@@ -37,7 +37,7 @@ describe('lexichron score (command line)', () => {
     expect(r.stderr).toMatch(/rows read\s+5\n\s+scored\s+3\n\s+rejected\s+2\n\s+empty_text\s+1\n\s+time_in_gap\s+1\n/);
     const scores = readFileSync(tmp.path('out/scores.csv'), 'utf8').trimEnd().split('\n');
     expect(scores[0]).toBe(
-      'entry_id,person,time_utc,zone,time_local,words,afinn-165.valence,afinn-165.valence.n,afinn-165.negated,vader.compound,vader.pos,vader.neu,vader.neg,daily-constructs.worry,daily-constructs.fatigue,daily-constructs.connection,daily-constructs.worry.n,daily-constructs.fatigue.n,daily-constructs.connection.n,daily-constructs.negated',
+      'entry_id,person,time_utc,zone,time_local,words,afinn-165.valence,afinn-165.valence.n,afinn-165.negated,vader.compound,vader.pos,vader.neu,vader.neg,daily-constructs.worry_per100w,daily-constructs.fatigue_per100w,daily-constructs.connection_per100w,daily-constructs.worry_per100w.n,daily-constructs.fatigue_per100w.n,daily-constructs.connection_per100w.n,daily-constructs.negated',
     );
     expect(scores).toHaveLength(4);
     // e1: 08:15 CEST = 06:15Z; happy +3 (AFINN-165); 8 words.
@@ -57,7 +57,7 @@ describe('lexichron score (command line)', () => {
     expect(meta.reconciliation).toEqual({ read: 5, scored: 3, rejected: { time_in_gap: 1, empty_text: 1 }, dropped: {} });
     expect(meta.lexicons.map((l: { name: string; sha256: string }) => l.name)).toEqual(['afinn-165', 'vader', 'daily-constructs']);
     expect(meta.lexicons[0].sha256).toMatch(/^[0-9a-f]{64}$/);
-    expect(meta.columns.find((c: { name: string }) => c.name === 'daily-constructs.worry').aggregation).toBe('count');
+    expect(meta.columns.find((c: { name: string }) => c.name === 'daily-constructs.worry_per100w').aggregation).toBe('count');
   });
 
   it('writes no text unless --keep-text is given', () => {

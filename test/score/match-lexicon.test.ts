@@ -159,18 +159,18 @@ describe('scoreEntry aggregates per category', () => {
     expect(s.scores['test.valence']).toBeUndefined();
     expect(s.matched['test.valence']).toBe(0);
     expect(s.scores['test.total']).toBe(0);
-    expect(s.scores['test.worry']).toBe(0);
+    expect(s.scores['test.worry_per100w']).toBe(0);
   });
 
   it('divides a count category by the word tokens of the entry, per 100 words', () => {
     // 8 words (the emoji and the full stop are not words), 2 worry hits: 100 × 2 / 8 = 25.
     const s = scoreEntry(entry('I worried and kept worrying about the bees 🐝.'), [lex]);
     expect(s.nWords).toBe(8);
-    expect(s.scores['test.worry']).toBe(25);
+    expect(s.scores['test.worry_per100w']).toBe(25);
   });
 
   it('leaves a count category empty for an entry with no words', () => {
-    expect(scoreEntry(entry('🐝🐝 !!'), [lex]).scores['test.worry']).toBeUndefined();
+    expect(scoreEntry(entry('🐝🐝 !!'), [lex]).scores['test.worry_per100w']).toBeUndefined();
   });
 
   it('keeps the text only when asked', () => {
@@ -181,7 +181,7 @@ describe('scoreEntry aggregates per category', () => {
   it('names score columns <lexicon>.<category> with their aggregation', () => {
     expect(scoreColumns([lex]).map((c) => [c.name, c.aggregation])).toEqual([
       ['test.valence', 'rating'],
-      ['test.worry', 'count'],
+      ['test.worry_per100w', 'count'],
       ['test.total', 'sum'],
     ]);
   });
