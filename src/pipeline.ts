@@ -32,6 +32,7 @@ import { parseStudy, type Study } from './study/parse-study.js';
 import type { AuditSettings, RatingsSettings } from './study/stage-settings.js';
 import { readRatings } from './io/run-validate.js';
 import { promptWindows } from './series/prompt-windows.js';
+import { applySyntacticNames } from './io/apply-syntactic-names.js';
 import type { TimeOptions } from './ingest/parse-instant.js';
 import { timeWindow } from './ingest/time-window.js';
 import type { ZoneTable } from './ingest/zone-table.js';
@@ -160,6 +161,8 @@ export interface RunStudyOptions {
   env?: Readonly<Record<string, string | undefined>>;
   /** Accept an output folder that is a symbolic link (refused by default, see checkOutputFolder). */
   allowSymlinks?: boolean;
+  /** Column names of the CSV outputs (overrides the study's `names`): as written, or syntactic for R and pandas. */
+  names?: 'as-written' | 'syntactic';
 }
 
 /**
@@ -339,5 +342,17 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
   await writeFileAtomic(join(outDir, 'manifest.json'), JSON.stringify(manifest, null, 2) + '\n');
   let report: WriteReportResult | undefined;
   if (study.report !== false) report = await writeReport(outDir, { ...study.report, ...(study.report.title ? {} : { title: study.name }), source: basename(at(study.out)) });
+  if ((options.names ?? study.names) === 'syntactic') {
+    // Last, after the report has read the outputs: renamed files get fresh digests in the manifest.
+    const changed = new Set(await applySyntacticNames(outDir));
+    for (const record of manifest.outputs) {
+      if (!changed.has(record.path) || record.sha256 === undefined) continue;
+      const d = await fileDigest(join(outDir, record.path));
+      record.sha256 = d.sha256;
+      record.bytes = d.bytes;
+    }
+    (manifest.parameters as Record<string, unknown>).names = 'syntactic';
+    await writeFileAtomic(join(outDir, 'manifest.json'), JSON.stringify(manifest, null, 2) + '\n');
+  }
   return { outDir, manifest, score, series, stages, report };
 }

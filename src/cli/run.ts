@@ -1,4 +1,4 @@
-import type { Command } from 'commander';
+import { Option, type Command } from 'commander';
 import { relative } from 'node:path';
 import { runStudy } from '../pipeline.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
@@ -14,11 +14,12 @@ export function registerRun(program: Command): void {
     .description('run a whole study from its study file: score, series, validation, dynamics, term audit, report')
     .argument('<study>', 'study file (JSON; see README "Study file")')
     .option('--seed <n>', 'seed for bootstrap and surrogate draws', '20261201')
+    .addOption(new Option('--names <style>', 'column names of the CSV outputs: as-written, or syntactic (R and pandas accept them unquoted: afinn_165_valence); overrides the study\'s names').choices(['as-written', 'syntactic']))
     .option('--allow-symlinks', 'accept an output folder that is a symbolic link (refused by default)')
     .action(async (studyPath: string, opts: Record<string, unknown>) => {
       const progress = progressReporter('scored');
       // V8 optimizes less eagerly until the first scores are written (see jit-budget.ts and main.ts).
-      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env, allowSymlinks: opts.allowSymlinks === true };
+      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env, allowSymlinks: opts.allowSymlinks === true, ...(opts.names ? { names: opts.names as 'as-written' | 'syntactic' } : {}) };
       const result = await runStudy(studyPath, options).finally(progress.stop);
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;

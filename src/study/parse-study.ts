@@ -60,6 +60,8 @@ export interface Study {
   keepText: boolean;
   /** Unit of `count` categories (and the end of their column names). */
   countRate: 'per100w' | 'per1000w' | 'prop';
+  /** Column names of the CSV outputs: as written, or syntactic for R and pandas (`afinn_165_valence`). */
+  names: 'as-written' | 'syntactic';
   maxRejects: string;
   series: StudySeries;
   /** Self-reports and validation settings (see README.md, "Validating text scores"); absent: no validation. */
@@ -80,7 +82,7 @@ export interface StudyProblem {
   message: string;
 }
 
-const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'countRate', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
+const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'countRate', 'names', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
 const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
 const TIME_KEYS = ['format', 'epoch', 'window', 'dstGap', 'dstOverlap'];
 const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'window', 'windows', 'maxBins', 'warnSpanDays'];
@@ -179,6 +181,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   const lexicons = json.lexicons ?? ['afinn-165', 'vader'];
   need(Array.isArray(lexicons) && lexicons.length > 0 && lexicons.every(str), '$.lexicons', 'expected a non-empty array of bundled lexicon names or .lex.tsv paths');
   need(json.keepText === undefined || typeof json.keepText === 'boolean', '$.keepText', 'expected true or false');
+  need(json.names === undefined || json.names === 'as-written' || json.names === 'syntactic', '$.names', 'expected "as-written" (the default) or "syntactic" (column names R and pandas accept unquoted)');
   need(json.countRate === undefined || ['per100w', 'per1000w', 'prop'].includes(json.countRate as string), '$.countRate', 'expected per100w, per1000w or prop (the unit of count categories)');
   need(json.maxRejects === undefined || (typeof json.maxRejects === 'string' && /^(\d+%?|\d+\.\d+%|none)$/.test(json.maxRejects)) || Number.isInteger(json.maxRejects), '$.maxRejects', 'expected a count (25), a percentage ("5%") or "none"');
   const series = isObject(json.series) ? json.series : {};
@@ -227,6 +230,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
       },
       lexicons: lexicons as string[],
       keepText: json.keepText === true,
+      names: (json.names as Study['names'] | undefined) ?? 'as-written',
       countRate: (json.countRate as Study['countRate'] | undefined) ?? 'per100w',
       maxRejects: json.maxRejects === undefined ? '5%' : String(json.maxRejects),
       series: {
