@@ -1,3 +1,4 @@
+import { usageError } from '../../errors.js';
 import type { Reconciliation } from '../../types.js';
 import type { AlignedPair } from '../../validate/aligned-pair.js';
 import { absent, present, type ReliabilityCurve, type ReportData, type ValidationData, type ValidationPair } from '../report-data.js';
@@ -60,6 +61,13 @@ export interface ReportOptions {
   title?: string;
 }
 
+/** Names as a list for a message: each in backticks, at most 20, then how many more. */
+function choiceList(names: readonly string[]): string {
+  if (names.length === 0) return '(none)';
+  const shown = names.slice(0, 20).map((n) => `\`${n}\``).join(', ');
+  return names.length > 20 ? `${shown} and ${names.length - 20} more` : shown;
+}
+
 /** Key of a score × rating pair in {@link ReportInputs.alignedPairs}. */
 export function pairKey(score: string, rating: string): string {
   return `${score}\u0000${rating}`;
@@ -98,6 +106,12 @@ export function buildReportData(inputs: ReportInputs, options: ReportOptions = {
     }
   else if (alignedPairs) for (const p of pairs) if (!p.points) p.points = completePoints(alignedPairs.get(pairKey(p.score, p.rating)) ?? []);
   const scores = parsed.ok ? parsed.value.scores : [];
+  if (options.score !== undefined && parsed.ok && !scores.includes(options.score)) {
+    throw usageError(`The report's score \`${options.score}\` (--score, or report.score in the study file) is not a score column of series-long.csv; choose one of ${choiceList(scores)}.`);
+  }
+  if (options.person !== undefined && parsed.ok && !parsed.value.rows.some((r) => r.person === options.person)) {
+    throw usageError(`The report's person \`${options.person}\` (--person, or report.person in the study file) has no rows in series-long.csv; choose one of ${choiceList([...new Set(parsed.value.rows.map((r) => r.person))].sort())}.`);
+  }
   const preferred = (list: readonly string[]): string | undefined => (list.includes(DEFAULT_SCORE) ? DEFAULT_SCORE : list[0]);
   const score =
     options.score ??

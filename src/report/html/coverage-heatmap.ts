@@ -83,7 +83,10 @@ export function coverageHeatmap(data: CoverageData): string {
   });
   lx += 16;
   parts.push(svgText(lx, legendY - 6, 'Missing days, by reason', 'class="legend-title"'));
+  // Only the reasons that occur in the drawn cells (a legend entry with no cell is noise).
+  const occurring = new Set(data.persons.flatMap((p) => p.cells.map((c) => c.missing ?? '')));
   for (const [reason, style] of Object.entries(MISSING_STYLE)) {
+    if (!occurring.has(reason)) continue;
     parts.push(`<rect x="${lx}" y="${legendY}" width="14" height="10" fill="${reason === 'no_text' ? 'url(#hatch-no-text)' : style.fill}" stroke="#8a949e" stroke-width="0.5"/>`, svgText(lx + 18, legendY + 9, reason.replace(/_/g, ' '), 'class="tick"'));
     lx += 34 + reason.length * 6;
   }

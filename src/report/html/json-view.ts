@@ -8,15 +8,25 @@ function scalar(v: unknown): string {
   return `<code>${escapeHtml(String(v))}</code>`;
 }
 
+/** Plain words for a nested value: `key: value; key: value`, lists comma-separated (no JSON syntax). */
+function inlineText(v: unknown): string {
+  if (Array.isArray(v)) return v.length === 0 ? 'none' : v.map((x) => (isPlainObject(x) ? `(${inlineText(x)})` : inlineText(x))).join(', ');
+  if (isPlainObject(v)) {
+    const entries = Object.entries(v);
+    return entries.length === 0 ? 'none' : entries.map(([k, x]) => `${k}: ${inlineText(x)}`).join('; ');
+  }
+  return v === null || v === undefined ? '–' : String(v);
+}
+
 function compact(v: unknown): string {
-  if (isPlainObject(v) || Array.isArray(v)) return `<code>${escapeHtml(JSON.stringify(v))}</code>`;
+  if (isPlainObject(v) || Array.isArray(v)) return `<code>${escapeHtml(inlineText(v))}</code>`;
   return scalar(v);
 }
 
 /**
  * Any JSON value as readable HTML: objects as definition lists (keys in file order), arrays of
  * objects as tables (one column per key seen), arrays of scalars as comma lists, scalars as code.
- * Nested deeper than `maxDepth` levels is shown as compact JSON. All text is escaped.
+ * Nested deeper than `maxDepth` levels is shown on one line as `key: value; …`. All text is escaped.
  */
 export function jsonView(value: unknown, depth = 0, maxDepth = 3): string {
   if (Array.isArray(value)) {

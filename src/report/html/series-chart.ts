@@ -63,7 +63,12 @@ export function seriesChart(track: PersonTrack, options: SeriesChartOptions): st
   const scorePts = track.points.map((p) => ({ x: mid(p), y: p.score === undefined ? undefined : ys(p.score) }));
   parts.push(`<path class="mark" d="${linePath(scorePts)}" fill="none" stroke="${PALETTE.score}" stroke-width="1.6" stroke-linejoin="round"/>`);
   const observed = scorePts.filter((p) => p.y !== undefined);
-  if (observed.length <= 400) for (const p of observed) parts.push(`<circle class="mark" cx="${px(p.x)}" cy="${px(p.y as number)}" r="2.4" fill="${PALETTE.score}"/>`);
+  // Every observed bin as a dot in short series; in long ones at least each isolated bin (no
+  // observed neighbour), which the line cannot show.
+  const isolated = (i: number): boolean => scorePts[i - 1]?.y === undefined && scorePts[i + 1]?.y === undefined;
+  scorePts.forEach((p, i) => {
+    if (p.y !== undefined && (observed.length <= 400 || isolated(i))) parts.push(`<circle class="mark" cx="${px(p.x)}" cy="${px(p.y)}" r="2.4" fill="${PALETTE.score}"/>`);
+  });
   if (options.rating) {
     const rExt = valueExtent(track.points.map((p) => p.rating)) ?? [0, 1];
     const rTicks = niceTicks(rExt[0], rExt[1], 5);

@@ -24,9 +24,14 @@ export function seriesSparkline(track: PersonTrack, xMin: number, xMax: number, 
   const parts: string[] = [`<rect x="0" y="0" width="${width}" height="${height}" fill="#ffffff" stroke="${PALETTE.grid}"/>`];
   for (const p of track.points) if (p.missing) parts.push(`<rect class="gap" x="${px(x(p.start))}" y="${height - 6}" width="${px(Math.max(0.5, x(p.start + p.hours * HOUR) - x(p.start)))}" height="4" fill="#9aa3ab"/>`);
   for (const c of track.clockChanges) parts.push(`<rect x="${px(x(c.start) - 1)}" y="0" width="2" height="5" fill="${PALETTE.clock}"/>`);
-  const scorePath = linePath(track.points.map((p) => ({ x: mid(p), y: p.score === undefined ? undefined : ys(p.score) })));
+  const scorePts = track.points.map((p) => ({ x: mid(p), y: p.score === undefined ? undefined : ys(p.score) }));
+  const scorePath = linePath(scorePts);
   if (scorePath) parts.push(`<path class="mark" d="${scorePath}" fill="none" stroke="${PALETTE.score}" stroke-width="1.2"/>`);
   else parts.push(`<text class="mark tick" x="${width / 2}" y="${height / 2}" text-anchor="middle">no observed bins</text>`);
+  // An observed bin with no observed neighbour has no line segment: a dot shows it.
+  scorePts.forEach((p, i) => {
+    if (p.y !== undefined && scorePts[i - 1]?.y === undefined && scorePts[i + 1]?.y === undefined) parts.push(`<circle class="mark" cx="${px(p.x)}" cy="${px(p.y)}" r="1.6" fill="${PALETTE.score}"/>`);
+  });
   if (hasRating) {
     const rExt = valueExtent(track.points.map((p) => p.rating));
     if (rExt) {

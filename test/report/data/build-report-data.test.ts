@@ -93,11 +93,8 @@ describe('buildReportData', () => {
     expect(data.series).toEqual({ ok: false, reason: expect.stringContaining('`bin_start`, `local_date`, `bin_hours`, `missing`') });
   });
 
-  it('says so when the chosen score is not a column', () => {
-    const data = buildReportData({ source: 'out', tool, seriesCsv: seriesCsv(fixture) }, { score: 'nope.score' });
-    expect(data.series.ok).toBe(false);
-    if (!data.series.ok) expect(data.series.reason).toContain('`vader.compound`, `afinn-165.valence`');
-    expect(data.coverage.ok).toBe(true);
+  it('stops with a usage error listing the score columns when the chosen score is not a column', () => {
+    expect(() => buildReportData({ source: 'out', tool, seriesCsv: seriesCsv(fixture) }, { score: 'nope.score' })).toThrow('`vader.compound`, `afinn-165.valence`');
   });
 });
 
