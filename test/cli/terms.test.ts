@@ -92,8 +92,10 @@ describe('lexichron terms: bad input gets messages that name the line and the fi
     const { error } = await terms('suggest', '--seed', 'worry', '--corpus', corpus, '--no-wordnet', '--min-pmi', '0.1', '--out', out, '--name', 'mine');
     expect(error).toBeUndefined();
     const text = readFileSync(out, 'utf8');
-    expect(text).toContain('worry\tworry\t1\taccepted');
-    expect(text).toContain('midnight\tworry\t1\tpending');
+    // The category is named from --name (issue 21 item 8).
+    expect(text).toContain('## category\tmine\tcount');
+    expect(text).toContain('worry\tmine\t1\taccepted');
+    expect(text).toContain('midnight\tmine\t1\tpending');
     expect(readFileSync(`${out}.reasons.csv`, 'utf8').split('\n')[0]).toBe('rank,term,corpus_entries,pmi,reasons');
   });
   it('prints added, removed and reweighted terms and both hashes for diff', async () => {

@@ -39,7 +39,7 @@ describe('positive PMI over entries (Church & Hanks 1990), checked against a han
     const s = suggestTerms({ seeds: ['worry'], corpus: counts, minCount: 3, minPmi: 0.5 });
     expect(s.map((x) => x.term)).toEqual(['night']);
     expect(s[0]!.pmi).toBeCloseTo(0.906890596, 9);
-    expect(s[0]!.reasons).toEqual([{ kind: 'corpus', pmi: s[0]!.pmi, together: 3, entries: 4 }]);
+    expect(s[0]!.reasons).toEqual([{ kind: 'corpus', pmi: s[0]!.pmi, g2: s[0]!.strength, together: 3, entries: 4 }]);
   });
   it('never suggests English function words from the corpus', () => {
     const c = seedCooccurrence([new Set(['worry', 'the']), new Set(['worry', 'the']), new Set(['worry', 'the']), new Set(['tea'])], new Set(['worry']));
