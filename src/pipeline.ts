@@ -295,7 +295,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
   // The header the score stage wrote (rebuilt, not read back: the scores file may be large).
   const scoreHeader = scoresHeader(score.columns, lexicons, study.keepText);
   const resources: TableResource[] = [
-    tableResource('scores', 'scores.csv', scoreHeader, undefined, 'One row per scored entry; score columns are <lexicon>.<category>.'),
+    tableResource('scores', 'scores.csv', scoreHeader, undefined, 'One row per scored entry; score columns are <lexicon>.<category>, with the unit at the end for count categories (<lexicon>.<category>_per100w).'),
     ...series.resources,
     tableResource('scores-rejects', 'scores.rejects.csv', REJECTS_HEADER, undefined, 'One row per input row the score stage could not use, with its file, line and reason (counted in the manifest reconciliation).'),
     tableResource('series-rejects', relative(outDir, series.rejectsPath), REJECTS_HEADER, undefined, 'One row per scores row the series stage could not use, with its line and reason.'),
