@@ -17,6 +17,7 @@ const COMMANDS: ReadonlyArray<[string, () => Promise<Register>]> = [
   ['dynamics', async () => (await import('./dynamics.js')).registerDynamics],
   ['terms', async () => (await import('./terms.js')).registerTerms],
   ['import', async () => (await import('./import.js')).registerImport],
+  ['merge', async () => (await import('./merge.js')).registerMerge],
   ['forget', async () => (await import('./forget.js')).registerForget],
   ['report', async () => (await import('./report.js')).registerReport],
   ['lexicons', async () => (await import('./lexicons.js')).registerLexicons],
