@@ -9,6 +9,7 @@ import { createRedactor } from '../privacy/create-redactor.js';
 import { createPseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { restoreJitBudget } from './jit-budget.js';
+import { SHARD_HELP, shardFrom } from './shard-option.js';
 import { addTimeOptions, delimiterFrom, parseMaxRejects, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
@@ -33,7 +34,8 @@ export function registerScore(program: Command): void {
     .option('--aggregates-only', 'write no participant text at all (refuses --keep-text)')
     .option('--pseudonym-key-file <file>', `pseudonymize person ids with a keyed hash (default key: the ${PSEUDONYM_KEY_ENV} environment variable, when set)`)
     .option('--workers <n>', 'scoring threads besides the one that reads and writes: a number (0 = none) or auto (by input size and cores)', 'auto')
-    .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%');
+    .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%')
+    .option('--shard <spec>', SHARD_HELP);
   addTimeOptions(command);
   command.addOption(new Option('--strict', 'exit with code 3 on the first rejected row\'s count (same as --max-rejects 0)'));
   command.action(async (inputs: string[], opts: Record<string, unknown>) => {
@@ -43,6 +45,7 @@ export function registerScore(program: Command): void {
     if (opts.aggregatesOnly && opts.keepText) throw usageError('--aggregates-only and --keep-text contradict each other: drop one.');
     const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
     const redact = createRedactor({ names: await readNamesFile(opts.redactNames as string | undefined) });
+    const shard = shardFrom(opts.shard);
     const limit = opts.strict ? { count: 0 } : parseMaxRejects(String(opts.maxRejects));
     const scoreInputs = inputs.map((path) => ({ path, columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) }));
     // The scoring threads start now (one may have started already: see main.ts) and load
@@ -75,6 +78,7 @@ export function registerScore(program: Command): void {
       ...(key ? { pseudonyms: createPseudonymizer(key) } : {}),
       workers,
       pool,
+      ...(shard ? { shard } : {}),
       onProgress: progress.update,
       onFirstRows: restoreJitBudget,
     }).finally(progress.stop);

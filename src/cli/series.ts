@@ -5,6 +5,7 @@ import { readWindowsFile } from '../io/read-windows-file.js';
 import { readZoneFile } from '../io/read-zone-file.js';
 import { zoneOnDay } from '../series/zone-on-day.js';
 import { mergeDataPackage } from '../io/merge-data-package.js';
+import { SHARD_HELP, shardFrom } from './shard-option.js';
 import { addSeriesOptions, parseReducers, seriesOptionsFrom } from './series-options.js';
 
 /** `lexichron series SCORES --bin DURATION --out FILE` */
@@ -13,10 +14,12 @@ export function registerSeries(program: Command): void {
     .command('series')
     .description('bin per-entry scores into regular per-person series in local time, with gaps explicit')
     .argument('<scores>', 'scores CSV written by `lexichron score`')
-    .requiredOption('-o, --out <file>', 'long series CSV (wide, event-level and rejects files and datapackage.json go beside it)');
+    .requiredOption('-o, --out <file>', 'long series CSV (wide, event-level and rejects files and datapackage.json go beside it)')
+    .option('--shard <spec>', SHARD_HELP);
   addSeriesOptions(command);
   command.action(async (scores: string, opts: Record<string, unknown>) => {
     const reducers = parseReducers(opts.aggregate as string | undefined);
+    const shard = shardFrom(opts.shard);
     const zones = opts.zones ? await readZoneFile(String(opts.zones)) : undefined;
     const result = await runSeries({
       ...seriesOptionsFrom(opts),
@@ -24,6 +27,7 @@ export function registerSeries(program: Command): void {
       ...(zones ? { zoneOn: zoneOnDay(zones) } : {}),
       scores,
       out: String(opts.out),
+      ...(shard ? { shard } : {}),
       reducers: typeof reducers === 'string' ? undefined : reducers,
       allReducer: typeof reducers === 'string' ? reducers : undefined,
     });
@@ -31,6 +35,7 @@ export function registerSeries(program: Command): void {
     const missing = Object.entries(result.missing).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
     const rejected = Object.entries(result.rejected);
     if (rejected.length > 0) process.stderr.write(`${rejected.reduce((a, [, n]) => a + n, 0)} scores rows not used (${rejected.map(([k, n]) => `${k} ${n}`).join(', ')}): see ${result.rejectsPath}\n`);
+    if (result.otherShard !== undefined) process.stderr.write(`${result.otherShard} scores rows belong to other shards\n`);
     process.stderr.write(`${result.persons} persons, ${result.bins} bins (${result.observed} observed; missing: ${missing}); ${result.entries} entries, ${result.excludedEntries} in excluded hours\nlong:   ${result.longPath}\nwide:   ${result.widePath}\nevents: ${result.eventsPath}\n`);
   });
 }

@@ -16,6 +16,7 @@ import type { Diagnostic } from '../types.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
 import { fileDigest } from './run-score.js';
 import { TOOL_VERSION } from '../version.js';
+import { shardFilter, type ShardSpec } from '../shard/shard-of-person.js';
 
 /** Score column metadata from a scores sidecar (`scores.csv.meta.json`). */
 export interface ScoreColumnMeta {
@@ -33,6 +34,8 @@ export interface RunSeriesOptions extends Omit<SeriesOptions, 'reducers'> {
   allReducer?: BinReducer;
   /** Only these score columns (default: all). */
   columns?: string[];
+  /** Bin only this shard's persons (see shardOfPerson); other persons' rows are counted as `otherShard`. */
+  shard?: ShardSpec;
 }
 
 export interface RunSeriesResult {
@@ -49,6 +52,8 @@ export interface RunSeriesResult {
   rejected: Record<string, number>;
   columns: Array<ScoreColumnMeta & { reducer: BinReducer }>;
   resources: TableResource[];
+  /** Only with a shard: scores rows of persons of other shards. */
+  otherShard?: number;
 }
 
 /** Default reducer: word-weighted mean for `count` and `rating` categories, entry mean for `sum` and VADER. */
@@ -92,6 +97,8 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
   const rejected: Record<string, number> = {};
   let entries = 0;
   let state: ReturnType<typeof createSeriesState> | undefined;
+  const inShard = options.shard ? shardFilter(options.shard) : undefined;
+  let otherShard = 0;
   const reject = async (d: Diagnostic): Promise<void> => {
     rejected[d.code] = (rejected[d.code] ?? 0) + 1;
     await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, d.message]));
@@ -137,6 +144,10 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       if (!(r.person ?? '').trim() || !Number.isFinite(instant) || !Number.isInteger(words) || words < 0) {
         const what = !(r.person ?? '').trim() ? 'no person' : !Number.isFinite(instant) ? `time_utc \`${r.time_utc ?? ''}\` is not an RFC 3339 instant` : `words \`${r.words ?? ''}\` is not a whole number ≥ 0`;
         await reject({ code: 'bad_score_row', message: `${what}; the series stage reads rows written by lexichron score`, source: item.source, stage: 'series' });
+        continue;
+      }
+      if (inShard && !inShard((r.person as string).trim())) {
+        otherShard++;
         continue;
       }
       const values = idx.map((i) => {
@@ -224,7 +235,8 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
           lexicons: lexicons ?? 'unknown: the scores file has no .meta.json sidecar',
           options: { bin: options.bin.text, dayStart: options.dayStart, minWords: options.minWords, excludeHours: options.excludeHours, fill: options.fill, maxFill: options.maxFill, detrend: options.detrend, span: options.span, windows: options.windows ? options.windows.size : 0 },
           columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
-          counts: { persons: persons.length, bins, observed, missing, entries, excludedEntries: state.excludedEntries, rejected },
+          counts: { persons: persons.length, bins, observed, missing, entries, excludedEntries: state.excludedEntries, rejected, ...(options.shard ? { otherShard } : {}) },
+          ...(options.shard ? { shard: options.shard } : {}),
         }, null, 2) + '\n',
       );
       const describe = (name: string): string | undefined => {
@@ -253,6 +265,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
         rejected,
         columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
         resources,
+        ...(options.shard ? { otherShard } : {}),
       };
     } catch (error) {
       await long.abort();
