@@ -9,12 +9,14 @@ import { shardOfPerson } from '../../src/shard/shard-of-person.js';
 import { tempFolder } from '../support/temp-files.js';
 
 // A reduced copy of the demo study (demo-data/: the first 700 messages, all self-reports and
-// zones), run whole and in N = 1, 3 and 7 shards merged: every output file must be byte-identical
-// except the run time the manifest records (and the report shows).
+// zones, pseudonymized with a key from the environment, so shards are chosen by pseudonym), run
+// whole and in N = 1, 3 and 7 shards merged: every output file must be byte-identical except the
+// run time the manifest records (and the report shows).
 const root = resolve(__dirname, '../..');
 const tmp = tempFolder('lexichron-merge-');
 const study = tmp.path('demo/study.json');
 const NOW = '2026-12-01T00:00:00.000Z';
+const env = { HIVE_STUDY_KEY: 'an invented key for the merge test, 2026' };
 
 function files(dir: string): Map<string, string> {
   const out = new Map<string, string>();
@@ -33,7 +35,7 @@ async function runShards(n: number, tag: string, seed = 7): Promise<string[]> {
   const dirs: string[] = [];
   for (let i = 0; i < n; i++) {
     const out = tmp.path(`${tag}/${i}`);
-    await runStudy(study, { now: `2026-12-0${1 + (i % 9)}T10:00:00.000Z`, seed, stages: defaultStudyStages(), out, shard: { index: i, count: n } });
+    await runStudy(study, { now: `2026-12-0${1 + (i % 9)}T10:00:00.000Z`, seed, stages: defaultStudyStages(), env, out, shard: { index: i, count: n } });
     dirs.push(out);
   }
   return dirs;
@@ -45,7 +47,9 @@ beforeAll(async () => {
   cpSync(resolve(root, 'demo-data'), tmp.path('demo'), { recursive: true });
   const messages = readFileSync(tmp.path('demo/messages.csv'), 'utf8').split('\n');
   writeFileSync(tmp.path('demo/messages.csv'), `${messages.slice(0, 701).join('\n')}\n`);
-  await runStudy(study, { now: NOW, seed: 7, stages: defaultStudyStages(), out: tmp.path('whole') });
+  const json = JSON.parse(readFileSync(study, 'utf8')) as Record<string, unknown>;
+  writeFileSync(study, JSON.stringify({ ...json, privacy: { keyEnv: 'HIVE_STUDY_KEY' } }, null, 2));
+  await runStudy(study, { now: NOW, seed: 7, stages: defaultStudyStages(), env, out: tmp.path('whole') });
   whole = files(tmp.path('whole'));
 }, 120_000);
 
@@ -54,7 +58,7 @@ describe('mergeShards (lexichron merge)', () => {
     it(`merging the ${n} shard${n === 1 ? '' : 's'} of the reduced demo study gives the whole run's files byte for byte, but for the run time`, async () => {
       const dirs = await runShards(n, `parts${n}`);
       // Shards given in any order.
-      await mergeShards({ shardDirs: [...dirs].reverse(), now: '2026-12-02T00:00:00.000Z', stages: defaultStudyStages(), out: tmp.path(`merged${n}`) });
+      await mergeShards({ shardDirs: [...dirs].reverse(), now: '2026-12-02T00:00:00.000Z', stages: defaultStudyStages(), env, out: tmp.path(`merged${n}`) });
       const merged = files(tmp.path(`merged${n}`));
       expect([...merged.keys()].sort()).toEqual([...whole.keys()].sort());
       expect(whole.size).toBeGreaterThan(15);
@@ -63,6 +67,7 @@ describe('mergeShards (lexichron merge)', () => {
         expect(other === text, `${name} differs`).toBe(true);
       }
       expect(merged.get('manifest.json')).toContain('"created": "2026-12-02T00:00:00.000Z"');
+      expect(merged.get('scores.csv')).not.toMatch(/\bp\d\d\b/); // pseudonyms only
     }, 120_000);
   }
 
@@ -87,19 +92,19 @@ describe('mergeShards (lexichron merge)', () => {
 
   it('refuses a missing shard, naming it', async () => {
     const dirs = [tmp.path('parts3/0'), tmp.path('parts3/2')];
-    await expect(mergeShards({ shardDirs: dirs, now: NOW, out: tmp.path('refused') })).rejects.toThrow(/shard 1\/3 is missing/);
+    await expect(mergeShards({ shardDirs: dirs, now: NOW, env, out: tmp.path('refused') })).rejects.toThrow(/shard 1\/3 is missing/);
   });
 
   it('refuses a shard given twice, naming both folders', async () => {
     const dirs = [tmp.path('parts3/0'), tmp.path('parts3/1'), tmp.path('parts3/1'), tmp.path('parts3/2')];
-    await expect(mergeShards({ shardDirs: dirs, now: NOW, out: tmp.path('refused') })).rejects.toThrow(/shard 1\/3 is given 2 times \(`.*parts3\/1`, `.*parts3\/1`\)/);
+    await expect(mergeShards({ shardDirs: dirs, now: NOW, env, out: tmp.path('refused') })).rejects.toThrow(/shard 1\/3 is given 2 times \(`.*parts3\/1`, `.*parts3\/1`\)/);
   });
 
   it('refuses a shard of another run (another seed), naming its folder and what differs', async () => {
-    await runStudy(study, { now: NOW, seed: 8, stages: defaultStudyStages(), out: tmp.path('seed8-1'), shard: { index: 1, count: 3 } });
-    await expect(mergeShards({ shardDirs: [tmp.path('parts3/0'), tmp.path('seed8-1'), tmp.path('parts3/2')], now: NOW, out: tmp.path('refused') })).rejects.toThrow(/`.*seed8-1` is not a shard of the same run as `.*parts3\/0`: its seed differs/);
+    await runStudy(study, { now: NOW, seed: 8, stages: defaultStudyStages(), env, out: tmp.path('seed8-1'), shard: { index: 1, count: 3 } });
+    await expect(mergeShards({ shardDirs: [tmp.path('parts3/0'), tmp.path('seed8-1'), tmp.path('parts3/2')], now: NOW, env, out: tmp.path('refused') })).rejects.toThrow(/`.*seed8-1` is not a shard of the same run as `.*parts3\/0`: its seed differs/);
     // A shard of a 1-shard run cannot join shards of 3.
-    await expect(mergeShards({ shardDirs: [tmp.path('parts3/0'), tmp.path('parts1/0')], now: NOW, out: tmp.path('refused') })).rejects.toThrow(/split in different numbers/);
+    await expect(mergeShards({ shardDirs: [tmp.path('parts3/0'), tmp.path('parts1/0')], now: NOW, env, out: tmp.path('refused') })).rejects.toThrow(/split in different numbers/);
   }, 60_000);
 
   it('refuses a folder that is not a shard\'s output, naming it', async () => {
