@@ -35,7 +35,8 @@ export function registerScore(program: Command): void {
     .option('--pseudonym-key-file <file>', `pseudonymize person ids with a keyed hash (default key: the ${PSEUDONYM_KEY_ENV} environment variable, when set)`)
     .option('--workers <n>', 'scoring threads besides the one that reads and writes: a number (0 = none) or auto (by input size and cores)', 'auto')
     .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%')
-    .option('--shard <spec>', SHARD_HELP);
+    .option('--shard <spec>', SHARD_HELP)
+    .option('--parquet', 'also write the scores as Parquet (scores.parquet beside the CSV: UTC instant, local wall-clock time and IANA zone as separate typed columns)');
   addTimeOptions(command);
   command.addOption(new Option('--strict', 'exit with code 3 on the first rejected row\'s count (same as --max-rejects 0)'));
   command.action(async (inputs: string[], opts: Record<string, unknown>) => {
@@ -84,6 +85,7 @@ export function registerScore(program: Command): void {
     }).finally(progress.stop);
     process.stderr.write(`${reconciliationText(result.reconciliation)}\n`);
     process.stderr.write(`scores:  ${result.scoresPath}\nrejects: ${result.rejectsPath}\nsidecar: ${result.metaPath}\n`);
+    if (opts.parquet) process.stderr.write(`parquet: ${await (await import('../io/write-parquet.js')).writeParquet(result.scoresPath, 'scores')}\n`);
     if (tooManyRejects(result.reconciliation, limit)) {
       throw inputError(`Too many rejected rows (limit ${String(opts.strict ? 0 : opts.maxRejects)}); see ${result.rejectsPath} for each row's reason, fix the input or raise --max-rejects.`);
     }

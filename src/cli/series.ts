@@ -15,7 +15,8 @@ export function registerSeries(program: Command): void {
     .description('bin per-entry scores into regular per-person series in local time, with gaps explicit')
     .argument('<scores>', 'scores CSV written by `lexichron score`')
     .requiredOption('-o, --out <file>', 'long series CSV (wide, event-level and rejects files and datapackage.json go beside it)')
-    .option('--shard <spec>', SHARD_HELP);
+    .option('--shard <spec>', SHARD_HELP)
+    .option('--parquet', 'also write the long series as Parquet (series-long.parquet beside the CSV: bin starts and ends as wall-clock times and as UTC instants)');
   addSeriesOptions(command);
   command.action(async (scores: string, opts: Record<string, unknown>) => {
     const reducers = parseReducers(opts.aggregate as string | undefined);
@@ -32,6 +33,7 @@ export function registerSeries(program: Command): void {
       allReducer: typeof reducers === 'string' ? reducers : undefined,
     });
     await mergeDataPackage(join(dirname(String(opts.out)), 'datapackage.json'), 'lexichron-series', 'lexichron series', result.resources);
+    if (opts.parquet) process.stderr.write(`parquet: ${await (await import('../io/write-parquet.js')).writeParquet(result.longPath, 'series')}\n`);
     const missing = Object.entries(result.missing).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
     const rejected = Object.entries(result.rejected);
     if (rejected.length > 0) process.stderr.write(`${rejected.reduce((a, [, n]) => a + n, 0)} scores rows not used (${rejected.map(([k, n]) => `${k} ${n}`).join(', ')}): see ${result.rejectsPath}\n`);
