@@ -38,6 +38,7 @@ const self = fileURLToPath(import.meta.url);
 /** Other benches folded into this run when present: [script, args, what it measures]. */
 const HOOKS = [
   ['scripts/bench-series.mjs', [], 'series binning'],
+  ['scripts/bench-series-rows.mjs', ['1000000', '3000000'], 'series peak memory at 1M and 3M rows, same bins'],
   ['scripts/bench-import.mjs', ['20', '200'], 'import mbox (20 MB and 200 MB)'],
   ['scripts/bench-ccm.mjs', [], 'convergent cross mapping'],
 ];
