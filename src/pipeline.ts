@@ -328,6 +328,13 @@ function seriesSummary(series: RunSeriesResult): Record<string, unknown> {
   return { persons: series.persons, bins: series.bins, observed: series.observed, missing: series.missing, entries: series.entries, excludedEntries: series.excludedEntries, rejected: series.rejected, columns: series.columns };
 }
 
+/** The series result of a shard without persons: nothing binned, no files written. */
+function noSeries(outDir: string): RunSeriesResult {
+  const longPath = join(outDir, 'series-long.csv');
+  const stem = join(outDir, 'series-long');
+  return { longPath, widePath: `${stem}.wide.csv`, eventsPath: `${stem}.events.csv`, rejectsPath: `${stem}.rejects.csv`, persons: 0, bins: 0, observed: 0, missing: {}, entries: 0, excludedEntries: 0, rejected: {}, columns: [], resources: [] };
+}
+
 /** File name of a shard's manifest. */
 export const SHARD_MANIFEST = 'shard.json';
 
@@ -341,7 +348,8 @@ async function writeShardManifest(outDir: string, fields: { prepared: PreparedSt
   const { prepared: p, score, series } = fields;
   const studyFile = resolve(p.studyPath);
   const outputs: FileRecord[] = [];
-  for (const path of [score.scoresPath, `${score.scoresPath}.seq`, score.rejectsPath, score.metaPath, series.longPath, `${series.longPath}.meta.json`, series.widePath, series.eventsPath, series.rejectsPath]) {
+  const seriesFiles = series.persons > 0 ? [series.longPath, `${series.longPath}.meta.json`, series.widePath, series.eventsPath, series.rejectsPath] : [];
+  for (const path of [score.scoresPath, `${score.scoresPath}.seq`, score.rejectsPath, score.metaPath, ...seriesFiles]) {
     const d = await fileDigest(path);
     outputs.push({ path: path.slice(outDir.length + 1), sha256: d.sha256, bytes: d.bytes });
   }
@@ -380,7 +388,8 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     onRawEntry: auditEntryFeeder(p, auditors),
   });
   if (options.shard) {
-    const series = await studySeries(p, outDir, score.scoresPath);
+    // A shard may hold no person at all (more shards than persons): it then writes no series.
+    const series = score.reconciliation.scored > 0 ? await studySeries(p, outDir, score.scoresPath) : noSeries(outDir);
     const manifest = await writeShardManifest(outDir, { prepared: p, shard: options.shard, seed: options.seed ?? DEFAULT_SEED, now: options.now, score, series });
     return { outDir, manifest, score, series, stages: {} };
   }

@@ -107,6 +107,19 @@ describe('mergeShards (lexichron merge)', () => {
     await expect(mergeShards({ shardDirs: [tmp.path('parts3/0'), tmp.path('parts1/0')], now: NOW, env, out: tmp.path('refused') })).rejects.toThrow(/split in different numbers/);
   }, 60_000);
 
+  it('a shard that holds no person (more shards than persons) still finishes, with a shard manifest and no series', async () => {
+    const persons = new Set(readFileSync(join(tmp.path('whole'), 'scores.csv'), 'utf8').trim().split('\n').slice(1).map((l) => l.split(',')[1] as string));
+    const count = 1000;
+    let empty = 0;
+    while ([...persons].some((p) => shardOfPerson(p, count) === empty)) empty++;
+    const out = tmp.path('empty-shard');
+    await runStudy(study, { now: NOW, seed: 7, env, out, shard: { index: empty, count } });
+    const manifest = JSON.parse(readFileSync(join(out, 'shard.json'), 'utf8')) as { reconciliation: { scored: number; otherShard: number; read: number }; outputs: Array<{ path: string }> };
+    expect(manifest.reconciliation.scored).toBe(0);
+    expect(manifest.reconciliation.otherShard).toBe(manifest.reconciliation.read);
+    expect(manifest.outputs.map((o) => o.path)).toEqual(['scores.csv', 'scores.csv.seq', 'scores.rejects.csv', 'scores.csv.meta.json']);
+  });
+
   it('refuses a folder that is not a shard\'s output, naming it', async () => {
     await expect(mergeShards({ shardDirs: [tmp.path('whole')], now: NOW, out: tmp.path('refused') })).rejects.toThrow(/`.*whole` has no shard.json/);
   });
