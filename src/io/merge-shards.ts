@@ -90,10 +90,12 @@ async function mergeScores(shards: readonly ShardFolder[], out: string): Promise
   const writer = await openAtomicLineWriter(out);
   try {
     const cursors = shards.map((s) => ({ dir: s.dir, rows: readCsvRecords(join(s.dir, 'scores.csv')), seqs: readCsvRecords(join(s.dir, 'scores.csv.seq')), row: '', seq: Infinity }));
+    type Cursor = (typeof cursors)[number];
     let header: string | undefined;
-    const advance = async (c: (typeof cursors)[number]): Promise<void> => {
+    const advance = async (c: Cursor): Promise<void> => {
       const [row, seq] = await Promise.all([c.rows.next(), c.seqs.next()]);
       if (row.done !== seq.done) throw usageError(`\`${c.dir}\`: scores.csv and scores.csv.seq have different numbers of rows; the shard's files were changed after it ran; run that shard again.`);
+      if (!seq.done && !/^\d+$/.test(seq.value)) throw usageError(`\`${c.dir}/scores.csv.seq\` holds \`${seq.value.slice(0, 40)}\` where a row position should be; the shard's files were changed after it ran; run that shard again.`);
       c.row = row.done ? '' : row.value;
       c.seq = seq.done ? Infinity : Number(seq.value);
     };
@@ -106,15 +108,41 @@ async function mergeScores(shards: readonly ShardFolder[], out: string): Promise
       } else if (first.value !== header) throw usageError(`\`${c.dir}/scores.csv\` has other columns than \`${cursors[0]?.dir}/scores.csv\`; run every shard with the same study file.`);
       await advance(c);
     }
+    // A binary min-heap of the shards by the position of their next row (many shards stay fast).
+    const heap = cursors.filter((c) => c.seq !== Infinity);
+    const less = (a: number, b: number): boolean => (heap[a] as Cursor).seq < (heap[b] as Cursor).seq;
+    const swap = (a: number, b: number): void => {
+      const t = heap[a] as Cursor;
+      heap[a] = heap[b] as Cursor;
+      heap[b] = t;
+    };
+    const down = (i: number): void => {
+      for (;;) {
+        const l = 2 * i + 1;
+        const r = l + 1;
+        let m = i;
+        if (l < heap.length && less(l, m)) m = l;
+        if (r < heap.length && less(r, m)) m = r;
+        if (m === i) return;
+        swap(i, m);
+        i = m;
+      }
+    };
+    for (let i = (heap.length >> 1) - 1; i >= 0; i--) down(i);
     let rows = 0;
-    for (;;) {
-      let best: (typeof cursors)[number] | undefined;
-      for (const c of cursors) if (c.seq !== Infinity && (!best || c.seq < best.seq)) best = c;
-      if (!best) break;
+    while (heap.length > 0) {
+      const best = heap[0] as Cursor;
       const pending = writer.write(best.row);
       if (pending) await pending;
       rows++;
+      const before = best.seq;
       await advance(best);
+      if (best.seq <= before) throw usageError(`\`${best.dir}/scores.csv.seq\` is not in increasing order; the shard's files were changed after it ran; run that shard again.`);
+      if (best.seq === Infinity) {
+        heap[0] = heap[heap.length - 1] as Cursor;
+        heap.pop();
+      }
+      down(0);
     }
     await writer.commit();
     return rows;
