@@ -2,7 +2,7 @@ import type { Command } from 'commander';
 import { relative } from 'node:path';
 import { runStudy } from '../pipeline.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
-import { inputError } from '../errors.js';
+import { inputError, usageError } from '../errors.js';
 import { restoreJitBudget } from './jit-budget.js';
 import { parseMaxRejects, progressReporter, tooManyRejects } from './common-options.js';
 import { studyStages } from './study-stages.js';
@@ -22,6 +22,7 @@ export function registerRun(program: Command): void {
       const progress = progressReporter('scored');
       // V8 optimizes less eagerly until the first scores are written (see jit-budget.ts and main.ts).
       const shard = shardFrom(opts.shard);
+      if (shard && opts.out === undefined) throw usageError(`--shard ${shard.index}/${shard.count} needs --out DIR: every shard writes a folder of its own (e.g. --out parts/${shard.index}), which \`lexichron merge\` then puts together.`);
       const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env, allowSymlinks: opts.allowSymlinks === true, ...(opts.out !== undefined ? { out: String(opts.out) } : {}), ...(shard ? { shard } : {}) };
       const result = await runStudy(studyPath, options).finally(progress.stop);
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);

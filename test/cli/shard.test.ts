@@ -69,6 +69,12 @@ describe('--shard on score, series and import', () => {
     expect(stderr).toContain(`${36 - mine.length * 3} scores rows belong to other shards`);
   });
 
+  it('run --shard without --out is a usage error asking for a folder per shard', async () => {
+    const { code, stderr } = await runCli('run', tmp.path('no-such-study.json'), '--shard', '1/4');
+    expect(code).toBe(2);
+    expect(stderr).toMatch(/--shard 1\/4 needs --out DIR: every shard writes a folder of its own \(e\.g\. --out parts\/1\)/);
+  });
+
   it('import --shard imports an export only in its person\'s shard', async () => {
     const chat = tmp.write('chat.txt', '21/03/2025, 08:00 - Ann: Good morning\n21/03/2025, 08:30 - Bob: hi Ann\n');
     const home = shardOfPerson('P01', 4);
