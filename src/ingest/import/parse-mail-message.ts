@@ -34,7 +34,9 @@ function truncation(raw: Buffer, bodyStart: number | undefined, contentType: str
  * Turns one raw message of an mbox into an entry, a reject or a drop.
  *
  * 1. From (RFC 5322 section 3.6.2) is parsed with parseAddressList; a message whose From holds
- *    none of the participant's addresses is dropped as `third_party` before its body is decoded.
+ *    none of the participant's addresses is dropped as `third_party` before its body is decoded;
+ *    one whose From also names someone else (or that has two From fields) is rejected as
+ *    `mail_shared_from`: only text whose author is proven to be the participant is kept.
  * 2. A cut-off message (no end of headers, or a multipart body without its closing boundary) →
  *    `mail_truncated`, before the Date is looked at: a header section cut off in or before its
  *    Date line would otherwise be reported as a bad or missing date.
@@ -48,10 +50,14 @@ function truncation(raw: Buffer, bodyStart: number | undefined, contentType: str
 export async function parseMailMessage(raw: Buffer, context: MailContext): Promise<ImportItem> {
   const { file, line } = context;
   const block = readMailHeaders(raw);
-  const from = mailHeader(block, 'from');
-  if (from === undefined) return importReject(file, line, 'mail_no_from', 'the message has no From header, so its sender is unknown');
-  const senders = parseAddressList(from).map((m) => normalizeAddress(m.address));
-  if (!senders.some((address) => context.addresses.has(address))) return { kind: 'drop', reason: 'third_party', source: { file, line } };
+  const fromFields = block.headers.filter((h) => h.name === 'from');
+  if (fromFields.length === 0) return importReject(file, line, 'mail_no_from', 'the message has no From header, so its sender is unknown');
+  const senders = fromFields.flatMap((h) => parseAddressList(h.value)).map((m) => normalizeAddress(m.address));
+  const ownCount = senders.filter((address) => context.addresses.has(address)).length;
+  if (ownCount === 0) return { kind: 'drop', reason: 'third_party', source: { file, line } };
+  if (ownCount < senders.length || fromFields.length > 1) {
+    return importReject(file, line, 'mail_shared_from', `the From header names ${senders.length - ownCount} author(s) besides the participant${fromFields.length > 1 ? ` (in ${fromFields.length} From fields)` : ''}, so whose words are whose cannot be told; the message is left out`);
+  }
   const cut = truncation(raw, block.bodyStart, mailHeader(block, 'content-type'));
   if (cut) return importReject(file, line, 'mail_truncated', cut);
   const dateValue = mailHeader(block, 'date');
