@@ -4,7 +4,7 @@ import { inputError, usageError } from '../errors.js';
 import { readRecords } from '../ingest/read-records.js';
 import { formatLocal } from '../ingest/parse-instant.js';
 import { isValidZone, zoneOffset } from '../ingest/zone-offset.js';
-import { csvRow } from '../report/csv.js';
+import { csvRow, restoreCell } from '../report/csv.js';
 import { tableResource, type TableResource } from '../report/data-dictionary.js';
 import { formatNumber } from '../report/format-number.js';
 import { seriesHeader, seriesRow, type SeriesLayout } from '../report/series-rows.js';
@@ -145,11 +145,12 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       });
       const matched = nIdx.map((i) => (i >= 0 ? Number(r[(header as string[])[i] as string] ?? 0) || 0 : 0));
       entries++;
-      const placed = addSeriesEntry(state as NonNullable<typeof state>, { person: (r.person as string).trim(), instant, zone, words, values, matched });
+      const person = restoreCell((r.person as string).trim());
+      const placed = addSeriesEntry(state as NonNullable<typeof state>, { person, instant, zone, words, values, matched });
       await events.write(
         csvRow([
-          r.entry_id ?? '',
-          r.person as string,
+          restoreCell(r.entry_id ?? ''),
+          person,
           r.time_utc as string,
           formatLocal(instant, zoneOffset(zone, instant)),
           zone,

@@ -1,4 +1,5 @@
 import type { Diagnostic, SourceRef } from '../types.js';
+import { restoreCell } from '../report/csv.js';
 
 /** One bin of the long series file, as validation needs it. */
 export interface SeriesBin {
@@ -34,7 +35,7 @@ const parseNumber = (text: string | undefined): number | undefined => {
  * `bin_start` or `bin_end` is unusable; an unreadable score becomes missing.
  */
 export function seriesBinFromRecord(record: Readonly<Record<string, string>>, source: SourceRef, scoreColumns: readonly string[]): SeriesBin | Diagnostic {
-  const person = (record.person ?? '').trim();
+  const person = restoreCell((record.person ?? '').trim());
   const start = Date.parse(record.bin_start ?? '');
   const end = Date.parse(record.bin_end ?? '');
   if (person === '' || !Number.isFinite(start) || !Number.isFinite(end) || end <= start) {
