@@ -1,6 +1,7 @@
 import { DateTime } from 'luxon';
 import { writeAscii } from '../text/ascii-bytes.js';
 import { resolveWallClock, zoneOffset, type WallClockPolicy } from './zone-offset.js';
+import { describeValue, omitValue } from '../privacy/describe-value.js';
 
 /** How timestamps are read. */
 export interface TimeOptions {
@@ -126,7 +127,7 @@ function commonFields(value: string): DateTimeFields | undefined {
 }
 
 function bad(value: string, what: string): InstantResult {
-  return { ok: false, code: 'bad_time', message: `cannot read the time \`${value.slice(0, 60)}\`: ${what}` };
+  return { ok: false, code: 'bad_time', message: `cannot read the time (${describeValue(value)}): ${omitValue(what, value)}` };
 }
 
 /**

@@ -10,6 +10,7 @@ import { tableResource, type TableResource } from '../report/data-dictionary.js'
 import type { PersonSeriesInput } from '../dynamics/types.js';
 import type { Diagnostic } from '../types.js';
 import { writeFileAtomic } from './atomic-write.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** Self-reports aggregated into the series' bins, keyed `person + '\u0000' + bin_start`. */
 export interface RatingsByBin {
@@ -76,7 +77,7 @@ export async function runDynamics(
     const resource = tableResource(table.file.replace(/\.csv$/, ''), table.file, table.header, undefined, table.description);
     resources.push({ ...resource, schema: { fields: table.header.map(dynamicsColumn), missingValues: [''] } });
   }
-  await writeFileAtomic(join(out, 'dynamics.json'), JSON.stringify({ tool: 'lexichron dynamics', diagnostics: parsed.diagnostics, ...result }, null, 2) + '\n');
+  await writeFileAtomic(join(out, 'dynamics.json'), JSON.stringify({ tool: 'lexichron dynamics', diagnostics: parsed.diagnostics.map((d) => ({ ...d, message: diagnosticText(d.message) })), ...result }, null, 2) + '\n');
   files.push('dynamics.json');
   return { result, persons: parsed.persons.length, variables, diagnostics: parsed.diagnostics, files, resources };
 }

@@ -5,6 +5,7 @@ import { csvRow } from '../report/csv.js';
 import { TOOL_VERSION } from '../version.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
 import { openImportSource, type ImportSourceSpec } from './open-import-source.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** Everything `lexichron import` needs. */
 export interface RunImportOptions {
@@ -49,7 +50,7 @@ export async function runImport(options: RunImportOptions): Promise<RunImportRes
       if (item.kind === 'entry') await entries.write(entryLine(item.entry));
       else if (item.kind === 'reject') {
         const d = item.diagnostic;
-        const message = options.aggregatesOnly ? d.code : options.redactMessages(d.message);
+        const message = options.aggregatesOnly ? d.code : diagnosticText(options.redactMessages(d.message));
         await rejects.write(csvRow([d.source?.file ?? '', d.source ? String(d.source.line) : '', d.code, message]));
       }
       if (options.onProgress && reconciliation.read % 1000 === 0) options.onProgress(reconciliation.read);

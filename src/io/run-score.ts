@@ -16,6 +16,7 @@ import { createScorePool, scoreWorkerCount, type ScorePool } from './score-pool.
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
 import { openAtomicLineWriter, writeFileAtomic, type AtomicLineWriter } from './atomic-write.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** One input file with how to read it. */
 export interface ScoreInput {
@@ -138,7 +139,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
     const addReject = async (d: Diagnostic): Promise<void> => {
       reconciliation.rejected[d.code] = (reconciliation.rejected[d.code] ?? 0) + 1;
-      await rejects.write(csvRow([d.source?.file ?? '', String(d.source?.line ?? ''), d.stage, d.code, d.message]));
+      await rejects.write(csvRow([d.source?.file ?? '', String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
     };
     if (pool) pool.setLexicons(options.lexicons);
     else pool = createScorePool(options.lexicons, await scoreWorkerCount(options.inputs.map((input) => input.path), options.workers));

@@ -16,6 +16,8 @@ import type { Diagnostic } from '../types.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
 import { fileDigest } from './run-score.js';
 import { TOOL_VERSION } from '../version.js';
+import { describeValue } from '../privacy/describe-value.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** Score column metadata from a scores sidecar (`scores.csv.meta.json`). */
 export interface ScoreColumnMeta {
@@ -94,7 +96,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
   let state: ReturnType<typeof createSeriesState> | undefined;
   const reject = async (d: Diagnostic): Promise<void> => {
     rejected[d.code] = (rejected[d.code] ?? 0) + 1;
-    await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, d.message]));
+    await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
   };
   try {
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
@@ -131,11 +133,11 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       const zone = r.zone ?? '';
       const words = Number(r.words);
       if (!isValidZone(zone)) {
-        await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone \`${zone}\`; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
+        await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone ${describeValue(zone, /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/)}; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
         continue;
       }
       if (!(r.person ?? '').trim() || !Number.isFinite(instant) || !Number.isInteger(words) || words < 0) {
-        const what = !(r.person ?? '').trim() ? 'no person' : !Number.isFinite(instant) ? `time_utc \`${r.time_utc ?? ''}\` is not an RFC 3339 instant` : `words \`${r.words ?? ''}\` is not a whole number ≥ 0`;
+        const what = !(r.person ?? '').trim() ? 'no person' : !Number.isFinite(instant) ? `time_utc (${describeValue(r.time_utc ?? '')}) is not an RFC 3339 instant` : `words (${describeValue(r.words ?? '')}) is not a whole number ≥ 0`;
         await reject({ code: 'bad_score_row', message: `${what}; the series stage reads rows written by lexichron score`, source: item.source, stage: 'series' });
         continue;
       }

@@ -6,6 +6,7 @@ import { normalizeAddress, parseAddressList } from './parse-address-list.js';
 import { parseMailDate } from './parse-mail-date.js';
 import { repairMojibake } from './repair-mojibake.js';
 import { stripMailQuotes } from './strip-mail-quotes.js';
+import { diagnosticText } from '../../privacy/diagnostic-text.js';
 
 /** Who the participant is and where the message came from. */
 export interface MailContext {
@@ -25,7 +26,7 @@ function truncation(raw: Buffer, bodyStart: number | undefined, contentType: str
   const boundary = contentType && /^\s*multipart\//i.test(contentType) ? /boundary\s*=\s*(?:"([^"]+)"|([^\s;]+))/i.exec(contentType) : null;
   if (boundary) {
     const marker = `--${boundary[1] ?? boundary[2]}--`;
-    if (raw.indexOf(marker, bodyStart, 'latin1') === -1) return `the multipart body never reaches its closing boundary \`${marker}\` (the file may be cut off here)`;
+    if (raw.indexOf(marker, bodyStart, 'latin1') === -1) return 'the multipart body never reaches its closing boundary (the file may be cut off here)';
   }
   return undefined;
 }
@@ -69,7 +70,7 @@ export async function parseMailMessage(raw: Buffer, context: MailContext): Promi
     const parsed = await simpleParser(raw, { skipImageLinks: true, skipTextLinks: true, skipTextToHtml: true, keepCidLinks: true });
     text = parsed.text ?? '';
   } catch (error) {
-    return importReject(file, line, 'mail_unreadable', `the message cannot be decoded (${(error as Error).message})`);
+    return importReject(file, line, 'mail_unreadable', `the message cannot be decoded (${diagnosticText((error as Error).name || 'error', 60)} in the MIME decoder); check that the file is an mbox export`);
   }
   const notes: EntryNote[] = [];
   const repaired = repairMojibake(text);
