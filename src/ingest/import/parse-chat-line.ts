@@ -33,6 +33,41 @@ export function normalizeSender(name: string): string {
   return name.replace(INVISIBLE, '').normalize('NFC').replace(/[\s\u00a0\u202f]+/g, ' ').trim().toLowerCase();
 }
 
+/** A header of either form inside a line (not at its start), with a sender: where a lost line break joined two messages. */
+const EMBEDDED = [
+  new RegExp(`(?<![\\d\\[])\\[${DATE},?${S}+${TIME}\\]${S}*[^:\\n\\[\\]]{1,120}?:`, 'gis'),
+  new RegExp(`(?<!\\d)${DATE},?${S}+${TIME}${S}+[-\\u2013\\u2014]${S}+[^:\\n]{1,120}?:`, 'gis'),
+];
+
+/**
+ * Splits a line where a whole message header (date, time and sender) stands inside it: a line
+ * break lost or damaged (a flipped byte, a CR read as text) joins two messages into one line, and
+ * the text after the inner header is not the first message's author's. Returns the line itself
+ * when it holds no inner header. Participants rarely type `31/12/2024, 21:05 - Name:` mid-sentence;
+ * when they do, the part after it is treated as another message, which errs on the safe side.
+ */
+export function splitEmbeddedHeaders(line: string): string[] {
+  const starts: number[] = [];
+  for (const pattern of EMBEDDED) {
+    pattern.lastIndex = 1;
+    for (let m = pattern.exec(line); m !== null; m = pattern.exec(line)) {
+      if (m.index > 0) starts.push(m.index);
+      pattern.lastIndex = m.index + 1;
+    }
+  }
+  if (starts.length === 0) return [line];
+  starts.sort((a, b) => a - b);
+  const parts: string[] = [];
+  let from = 0;
+  for (const start of starts) {
+    if (start <= from) continue;
+    parts.push(line.slice(from, start));
+    from = start;
+  }
+  parts.push(line.slice(from));
+  return parts;
+}
+
 /** Leading characters skipped before a line is judged: white space, controls and invisible marks. */
 const LEADING_NOISE = /^[\s\u0000-\u001f\u007f\u200e\u200f\u202a-\u202e\u2066-\u2069\ufeff]+/;
 

@@ -2,7 +2,7 @@ import type { RawEntry } from '../../types.js';
 import { resolveWallClock, type WallClockPolicy } from '../zone-offset.js';
 import type { DecodedLine } from './decode-text-line.js';
 import { importReject, type EntryNote, type ImportItem } from './import-item.js';
-import { normalizeSender, parseChatLine, type ChatStamp } from './parse-chat-line.js';
+import { normalizeSender, parseChatLine, splitEmbeddedHeaders, type ChatStamp } from './parse-chat-line.js';
 import type { DateOrder } from './settle-date-order.js';
 
 /** Options of the chat-lines importer. */
@@ -82,34 +82,38 @@ export async function* readChatLines(lines: AsyncIterable<NumberedLine> | Iterab
     const entry: RawEntry = { id: `${file}:${p.line}`, person: options.person, instant: time.instant, zone: options.zone, offsetMinutes: time.offsetMinutes, text, source: { file, line: p.line } };
     return p.notes.size > 0 ? { kind: 'entry', entry, notes: [...p.notes] } : { kind: 'entry', entry };
   };
-  for await (const { line, text, repaired } of lines) {
-    const parsed = parseChatLine(text);
-    if (parsed.kind === 'continuation') {
-      if (pending && 'damaged' in pending) {
-        pending.damaged++;
-      } else if (pending) {
-        if (pending.own) {
-          pending.parts.push(parsed.text);
-          if (repaired) pending.notes.add(repaired);
+  for await (const numbered of lines) {
+    // a line that holds another message's header is read as two lines (see splitEmbeddedHeaders)
+    for (const text of splitEmbeddedHeaders(numbered.text)) {
+      const { line, repaired } = numbered;
+      const parsed = parseChatLine(text);
+      if (parsed.kind === 'continuation') {
+        if (pending && 'damaged' in pending) {
+          pending.damaged++;
+        } else if (pending) {
+          if (pending.own) {
+            pending.parts.push(parsed.text);
+            if (repaired) pending.notes.add(repaired);
+          }
+        } else if (parsed.text.trim() !== '') {
+          if (orphans === 0) orphanStart = line;
+          orphans++;
         }
-      } else if (parsed.text.trim() !== '') {
-        if (orphans === 0) orphanStart = line;
-        orphans++;
+        continue;
       }
-      continue;
+      if (pending) yield finish(pending);
+      pending = undefined;
+      if (parsed.kind === 'system') {
+        yield { kind: 'drop', reason: 'system_line', source: { file: options.file, line } };
+        continue;
+      }
+      if (parsed.kind === 'damaged') {
+        pending = { line, damaged: 0 };
+        continue;
+      }
+      const isOwn = own.has(normalizeSender(parsed.sender));
+      pending = { line, stamp: parsed.stamp, own: isOwn, parts: isOwn ? [parsed.text] : [], notes: new Set(isOwn && repaired ? [repaired] : []) };
     }
-    if (pending) yield finish(pending);
-    pending = undefined;
-    if (parsed.kind === 'system') {
-      yield { kind: 'drop', reason: 'system_line', source: { file: options.file, line } };
-      continue;
-    }
-    if (parsed.kind === 'damaged') {
-      pending = { line, damaged: 0 };
-      continue;
-    }
-    const isOwn = own.has(normalizeSender(parsed.sender));
-    pending = { line, stamp: parsed.stamp, own: isOwn, parts: isOwn ? [parsed.text] : [], notes: new Set(isOwn && repaired ? [repaired] : []) };
   }
   if (pending) yield finish(pending);
   if (orphans > 0) {

@@ -105,6 +105,13 @@ describe('readChatLines never glues text of an unproven author onto the particip
       expect(JSON.stringify(items)).not.toMatch(/SECRET/);
     });
   }
+  it('splits a line where a lost or damaged line break joined another sender\'s header onto it', async () => {
+    for (const glue of ['', 'X', '\u0000']) {
+      const items = await read(`${own}${glue}03/04/2024, 09:02 - Bob: SECRET of Bob\nmore SECRET words\n03/04/2024, 09:03 - Ann Lee: bye`);
+      expect(entries(items).map((e) => e.text)).toEqual([`Good morning!${glue}`.trim(), 'bye']);
+      expect(others(items)).toEqual(['drop:third_party']);
+    }
+  });
   it('still joins ordinary continuation lines, including ones that start with a number', async () => {
     const items = await read(`${own}\n2 coffees later\nand a walk at 10:30`);
     expect(entries(items).map((e) => e.text)).toEqual(['Good morning!\n2 coffees later\nand a walk at 10:30']);
