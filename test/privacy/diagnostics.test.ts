@@ -7,6 +7,7 @@ import { readDiary, compileDiaryHeading } from '../../src/ingest/import/read-dia
 import { parseMailDate } from '../../src/ingest/import/parse-mail-date.js';
 import { parseInstant, DEFAULT_TIME_OPTIONS } from '../../src/ingest/parse-instant.js';
 import { readEntries } from '../../src/ingest/read-entries.js';
+import { buildZoneTable } from '../../src/ingest/zone-table.js';
 import { readRecords } from '../../src/ingest/read-records.js';
 import { describeValue } from '../../src/privacy/describe-value.js';
 import { diagnosticText } from '../../src/privacy/diagnostic-text.js';
@@ -17,7 +18,7 @@ import { collect, tempFolder } from '../support/temp-files.js';
 
 const tmp = tempFolder();
 const SECRET = 'SECRET words about my brother';
-const zones = { byPerson: new Map(), defaultZone: 'Europe/Brussels' } as never;
+const zones = buildZoneTable([], 'zones', 'Europe/Brussels');
 
 async function thrown(run: () => Promise<unknown>): Promise<string> {
   try {
