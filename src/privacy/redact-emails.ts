@@ -64,26 +64,26 @@ function domainEnd(text: string, at: number): number {
     while (j < n && text.charCodeAt(j) !== 0x5d && text.charCodeAt(j) !== 0x5b && !isSpace(text.charCodeAt(j))) j++;
     return j < n && text.charCodeAt(j) === 0x5d && j > i + 1 ? j + 1 : -1;
   }
-  const labels: Array<[number, number]> = [];
-  for (;;) {
+  // labels one by one: the domain ends after the last label that can be the top-level one while
+  // every label before it starts and ends with a letter or digit
+  let best = -1;
+  let prefixValid = true;
+  for (let k = 0; prefixValid; k++) {
     const start = i;
     while (i < n && isLabelChar(text, i)) i++;
     if (i === start) break;
-    labels.push([start, i]);
+    if (k >= 1) {
+      const first = text.charCodeAt(start);
+      const letter = first >= 0xd800 && first <= 0xdbff ? true : LETTER.test(text[start] as string);
+      let last = i;
+      while (last > start && text.charCodeAt(last - 1) === 0x2d) last--;
+      if (letter && last - start >= 2) best = last;
+    }
+    prefixValid = text.charCodeAt(start) !== 0x2d && text.charCodeAt(i - 1) !== 0x2d;
     if (text.charCodeAt(i) === 0x2e && i + 1 < n && isLabelChar(text, i + 1)) i++;
     else break;
   }
-  // labels before the top-level one must start and end with a letter or digit
-  let valid = 0;
-  while (valid < labels.length && text.charCodeAt((labels[valid] as [number, number])[0]) !== 0x2d && text.charCodeAt((labels[valid] as [number, number])[1] - 1) !== 0x2d) valid++;
-  for (let j = Math.min(valid + 1, labels.length); j >= 2; j--) {
-    const [start, end] = labels[j - 1] as [number, number];
-    if (!LETTER.test(text[start] as string) && !(text.charCodeAt(start) >= 0xd800 && text.charCodeAt(start) <= 0xdbff)) continue;
-    let last = end;
-    while (last > start && text.charCodeAt(last - 1) === 0x2d) last--;
-    if (last - start >= 2) return last;
-  }
-  return -1;
+  return best;
 }
 
 /** Start of the local part before an `@` at `at` (dot-atom or quoted string), not before `floor`; -1 when none. */
