@@ -152,3 +152,18 @@ export function entriesCase(seed: number, format: 'csv' | 'jsonl'): FuzzCase {
     return `person,time,text\n${rows.map((r) => r.map(q).join(',')).join('\n')}\n`;
   });
 }
+
+/**
+ * A numeric table as lexichron's side readers take it (self-reports, a long series), where some
+ * cells hold text instead of a number (`tpsecret…`, a note typed into a rating column).
+ */
+export function numericTableCase(seed: number, kind: 'ratings' | 'series'): FuzzCase {
+  return fuzzCase(seed, (rand) => {
+    const rows: string[] = [kind === 'ratings' ? 'person,time,mood,stress' : 'person,t,bin_start,lag_valid,mood'];
+    for (let m = 0; m < 4 + int(rand, 10); m++) {
+      const value = (): string => (rand() < 0.2 ? `note tpsecret${m}x` : (1 + int(rand, 7)).toString());
+      rows.push(kind === 'ratings' ? `p01,2025-03-0${1 + int(rand, 9)}T10:00:00Z,${value()},${value()}` : `p01,${rand() < 0.1 ? `tpsecret${m}x` : m},2025-03-0${1 + int(rand, 9)}T00:00:00+01:00,1,${value()}`);
+    }
+    return `${rows.join('\n')}\n`;
+  });
+}

@@ -11,12 +11,15 @@ import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { LexichronError } from '../../src/errors.js';
+import { parseSeriesCsv } from '../../src/dynamics/parse-series-csv.js';
 import { readEntries } from '../../src/ingest/read-entries.js';
+import { readRecords } from '../../src/ingest/read-records.js';
+import { ratingValues } from '../../src/validate/rating-values.js';
 import { buildZoneTable } from '../../src/ingest/zone-table.js';
 import { runImport } from '../../src/io/run-import.js';
 import type { ImportSourceSpec } from '../../src/io/open-import-source.js';
 import { collect, tempFolder } from '../support/temp-files.js';
-import { chatLinesCase, chatTableCase, diaryCase, entriesCase, mboxCase, type FuzzCase } from './privacy-fuzz-generator.js';
+import { chatLinesCase, chatTableCase, diaryCase, entriesCase, mboxCase, numericTableCase, type FuzzCase } from './privacy-fuzz-generator.js';
 
 const CASES = Number(process.env.LEXICHRON_FUZZ_CASES ?? 20);
 const tmp = tempFolder('lexichron-fuzz-');
@@ -108,4 +111,35 @@ describe(`privacy fuzz: ${CASES} damaged tables per entries reader`, () => {
       }
     });
   }
+});
+
+describe(`privacy fuzz: ${CASES} damaged self-report and series tables`, () => {
+  it('self-reports (readRecords, ratingValues): a text in a rating column is described, never repeated', async () => {
+    for (const seed of seeds) {
+      const c = numericTableCase(seed, 'ratings');
+      const path = tmp.write(`ratings-${seed}.csv`, c.bytes);
+      try {
+        for await (const item of readRecords(path)) {
+          if (item.kind === 'reject') expect(item.diagnostic.message, describeCase(c)).not.toMatch(/secret/i);
+          if (item.kind !== 'record') continue;
+          const { diagnostics } = ratingValues(item.record, ['mood', 'stress'], new Map(), item.source);
+          expect(JSON.stringify(diagnostics), describeCase(c)).not.toMatch(/secret/i);
+        }
+      } catch (error) {
+        expect(error, describeCase(c)).toBeInstanceOf(LexichronError);
+        expect((error as Error).message, describeCase(c)).not.toMatch(/secret/i);
+      }
+    }
+  });
+  it('long series (parseSeriesCsv): a bad bin index or value is described, never repeated', () => {
+    for (const seed of seeds) {
+      const c = numericTableCase(seed, 'series');
+      try {
+        expect(JSON.stringify(parseSeriesCsv(c.bytes.toString('utf8')).diagnostics), describeCase(c)).not.toMatch(/secret/i);
+      } catch (error) {
+        expect(error, describeCase(c)).toBeInstanceOf(LexichronError);
+        expect((error as Error).message, describeCase(c)).not.toMatch(/secret/i);
+      }
+    }
+  });
 });
