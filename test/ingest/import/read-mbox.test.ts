@@ -81,6 +81,12 @@ describe('readMbox keeps the participant\'s own messages only', () => {
     expect(texts(items)).toEqual(['my own words']);
     expect(JSON.stringify(items)).not.toMatch(/SECRET/);
   });
+  it('leaves out the next message when its separator line lost its line break (privacy fuzz seed 3105)', async () => {
+    const cleo = message('cleo@example.net', 'Mon, 3 Mar 2025 09:30:00 +0100', 'SECRET of Cleo').replace('2025\nFrom: cleo', '2025From: cleo');
+    const items = await read(message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', 'my own words'), cleo);
+    expect(texts(items)).toEqual(['my own words']);
+    expect(JSON.stringify(items)).not.toMatch(/SECRET|cleo/);
+  });
   it('decodes quoted-printable (RFC 2045 section 6.7) and base64 (section 6.8) bodies in their charsets', async () => {
     const qp = message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', 'Caf=E9 au lait, tr=E8s bien =\nmerci.', 'MIME-Version: 1.0\nContent-Type: text/plain; charset=ISO-8859-1\nContent-Transfer-Encoding: quoted-printable\n');
     const b64 = message('ann@example.org', 'Mon, 3 Mar 2025 10:00:00 +0100', Buffer.from('Grüße aus Köln', 'utf8').toString('base64'), 'MIME-Version: 1.0\nContent-Type: text/plain; charset=utf-8\nContent-Transfer-Encoding: base64\n');
