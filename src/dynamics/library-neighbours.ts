@@ -1,7 +1,6 @@
 import type { StatePoints } from './delay-embedding.js';
 import { nearestNeighboursInto } from './nearest-neighbours.js';
 import type { NeighbourTable } from './neighbour-table.js';
-import { pointDistance } from './point-distance.js';
 
 /** A library as a membership mask (for the table scan) and an index list (for the direct search). */
 export interface Library {
@@ -51,6 +50,8 @@ export function libraryNeighbours(
   table?: NeighbourTable,
 ): LibraryNeighbours {
   const k = out.k;
+  const { index, weight, weightSum, found: foundOut } = out;
+  const mask = library.mask;
   const size = library.members.length;
   const direct = table === undefined || size * size * (points.E + 2) < k * table.count;
   const indices = new Int32Array(k);
@@ -59,28 +60,29 @@ export function libraryNeighbours(
     const i = prediction[p] as number;
     let found = 0;
     if (!direct) {
-      const { order, filled, width } = table;
+      const { order, distance, filled, width } = table;
       const start = i * width;
       const end = start + (filled[i] as number);
       for (let s = start; s < end && found < k; s++) {
         const j = order[s] as number;
-        if (library.mask[j] === 0) continue;
-        distances[found] = pointDistance(points, i, j);
+        if (mask[j] === 0) continue;
+        distances[found] = distance[s] as number;
         indices[found] = j;
         found++;
       }
     }
     if (direct || (found < k && !table.complete)) found = nearestNeighboursInto(points, i, library.members, k, exclusionRadius, indices, distances);
     const scale = Math.max(found > 0 ? (distances[0] as number) : 0, 1e-6);
+    const o = p * k;
     let sum = 0;
     for (let m = 0; m < found; m++) {
       const w = Math.exp(-(distances[m] as number) / scale);
-      out.index[p * k + m] = indices[m] as number;
-      out.weight[p * k + m] = w;
+      index[o + m] = indices[m] as number;
+      weight[o + m] = w;
       sum += w;
     }
-    out.weightSum[p] = sum;
-    out.found[p] = found;
+    weightSum[p] = sum;
+    foundOut[p] = found;
   }
   return out;
 }

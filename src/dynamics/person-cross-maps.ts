@@ -1,7 +1,7 @@
-import { random } from '../stats/random.js';
+import { random, type RandomSource } from '../stats/random.js';
 import { calendarPhase, type Season } from './calendar-phase.js';
 import { chooseEmbeddingDimension, type DimensionSkill } from './choose-embedding-dimension.js';
-import { ccmNotEnoughData, convergentCrossMapping, type CcmDirection, type CcmOptions } from './convergent-cross-mapping.js';
+import { ccmNotEnoughData, convergentCrossMappings, type CcmDirection, type CcmOptions } from './convergent-cross-mapping.js';
 import { exclusionRadius } from './exclusion-radius.js';
 import type { PhasedSeries } from './stack-segments.js';
 import type { PersonSeriesInput } from './types.js';
@@ -60,9 +60,10 @@ export function personSeries(person: PersonSeriesInput, variable: string, season
 /**
  * Cross maps every pair in both directions for one person (or the stack, `scope` 'stacked'):
  * E chosen once per series by simplex forecast skill (with the default exclusion radius of each
- * E unless one is given), then {@link convergentCrossMapping} with a random stream of its own per
- * (scope, person, cause, effect), so a direction's result does not depend on which other pairs,
- * persons or threads run. Pure.
+ * E unless one is given), then {@link convergentCrossMappings} once per effect for all its causes
+ * (one set of libraries and neighbours), with random streams of their own per (scope, person,
+ * effect) for the libraries and per (scope, person, cause, effect) for the surrogates, so a
+ * direction's result does not depend on which other pairs, persons or threads run. Pure.
  */
 export function personCrossMaps(scope: 'person' | 'stacked', personId: string, series: (variable: string) => PhasedSeries, settings: CrossMapSettings): PersonCrossMaps {
   const ccmOptions = settings.ccm;
@@ -87,20 +88,31 @@ export function personCrossMaps(scope: 'person' | 'stacked', personId: string, s
     }
     return chosenE.get(variable);
   };
-  for (const [a, b] of settings.pairs)
-    for (const [cause, effect] of [
-      [a, b],
-      [b, a],
-    ] as const) {
-      const E = eFor(effect);
-      const base = { scope, person: personId, cause, effect };
-      if (E === undefined) {
-        ccm.push({ ...base, ...ccmNotEnoughData(`no embedding dimension of \`${effect}\` gave a forecast skill (too few usable bins)`, undefined, tau, 0) });
-        continue;
-      }
-      const result = convergentCrossMapping(series(effect), series(cause), { ...ccmOptions, E }, random(`${String(settings.seed)}|${scope}|${personId}|${cause}|${effect}`));
-      ccm.push({ ...base, ...result });
+  // Directions in output order; those with the same effect are cross mapped together (one set of
+  // libraries and neighbours), each cause with a surrogate stream of its own.
+  const directions = settings.pairs.flatMap(([a, b]) => [
+    { cause: a, effect: b },
+    { cause: b, effect: a },
+  ]);
+  const results = new Map<string, CcmDirection>();
+  const done = new Set<string>();
+  for (const { effect } of directions) {
+    const E = eFor(effect);
+    if (done.has(effect)) continue;
+    done.add(effect);
+    const causes = [...new Set(directions.filter((d) => d.effect === effect).map((d) => d.cause))];
+    if (E === undefined) {
+      for (const cause of causes) results.set(`${effect}\u0000${cause}`, ccmNotEnoughData(`no embedding dimension of \`${effect}\` gave a forecast skill (too few usable bins)`, undefined, tau, 0));
+      continue;
     }
+    const stream = (cause: string): RandomSource => random(`${String(settings.seed)}|${scope}|${personId}|${cause}|${effect}`);
+    const mapped = convergentCrossMappings(series(effect), causes.map(series), { ...ccmOptions, E }, {
+      libraries: () => random(`${String(settings.seed)}|${scope}|${personId}|${effect}|libraries`),
+      surrogates: causes.map(stream),
+    });
+    causes.forEach((cause, i) => results.set(`${effect}\u0000${cause}`, mapped[i] as CcmDirection));
+  }
+  for (const { cause, effect } of directions) ccm.push({ scope, person: personId, cause, effect, ...(results.get(`${effect}\u0000${cause}`) as CcmDirection) });
   return { ccm, embedding };
 }
 
