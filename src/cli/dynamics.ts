@@ -7,6 +7,8 @@ import { writeFileAtomic } from '../io/atomic-write.js';
 import { runDynamics } from '../io/run-dynamics.js';
 import { readBinRatings } from '../io/read-bin-ratings.js';
 import { dataPackage } from '../report/data-dictionary.js';
+import { parseWorkers } from './common-options.js';
+import { crossMapProgress } from './cross-map-progress.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
 
@@ -49,6 +51,7 @@ export function registerDynamics(program: Command): void {
     .option('--stack', 'also cross map all persons stacked end to end (breaks between persons)')
     .option('--no-cross-mapping', 'skip convergent cross mapping')
     .option('--seed <seed>', 'seed of every random step', '1')
+    .option('--workers <n>', 'cross-mapping threads: a number (0 = this thread only) or auto (one per core, at most 4, for runs of more than a few seconds)', 'auto')
     .action(async (seriesPath: string, opts: Record<string, unknown>) => {
       const pairs = (opts.pair as string[] | undefined)?.map((p): [string, string] => {
         const parts = p.split(':');
@@ -76,7 +79,8 @@ export function registerDynamics(program: Command): void {
       };
       const out = String(opts.out);
       const ratings = opts.ratingsByBin ? await readBinRatings(String(opts.ratingsByBin), (opts.rating as string[] | undefined)?.flatMap((r) => r.split(',')) ?? []) : undefined;
-      const { result, persons, variables, diagnostics, resources } = await runDynamics(seriesPath, out, options, ratings);
+      const workers = parseWorkers(String(opts.workers));
+      const { result, persons, variables, diagnostics, resources } = await runDynamics(seriesPath, out, options, ratings, { workers, onProgress: crossMapProgress() });
       await writeFileAtomic(join(out, 'datapackage.json'), JSON.stringify(dataPackage('lexichron-dynamics', 'lexichron dynamics', resources), null, 2) + '\n');
       const ready = result.summaries.filter((s) => s.ready).length;
       const drives = result.ccm.filter((c) => c.verdict === 'drives').length;

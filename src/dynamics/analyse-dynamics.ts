@@ -82,6 +82,17 @@ export interface DynamicsResult {
 
 const STACKED = '';
 
+/** The variables, pairs and cross-mapping settings {@link analyseDynamics} uses for these options (for running the cross maps elsewhere, e.g. in worker threads). */
+export function crossMapSettings(persons: readonly PersonSeriesInput[], options: DynamicsOptions): CrossMapSettings & { variables: string[]; pairs: Array<[string, string]>; minLagPairs: number } {
+  const variables = [...(options.variables ?? Object.keys(persons[0]?.values ?? {}))];
+  const pairs: Array<[string, string]> = options.pairs
+    ? options.pairs.map(([a, b]) => [a, b])
+    : variables.flatMap((a, i) => variables.slice(i + 1).map((b): [string, string] => [a, b]));
+  const minLagPairs = options.minLagPairs ?? DEFAULT_MIN_LAG_PAIRS;
+  const ccm: CcmOptions = { ...options.ccm, minPoints: options.ccm?.minPoints ?? minLagPairs };
+  return { variables, pairs, minLagPairs, ccm, seed: options.seed, season: options.season ?? 'auto' };
+}
+
 /**
  * Runs the dynamics analyses over persons' series: per person and variable the descriptive
  * dynamics ({@link personVariableSummary}); per pair the within-person VAR(1) per person
@@ -91,12 +102,9 @@ const STACKED = '';
  * stream per (person, cause, effect), so results do not depend on which other pairs are run.
  */
 export function analyseDynamics(persons: readonly PersonSeriesInput[], options: DynamicsOptions): DynamicsResult {
-  const variables = [...(options.variables ?? Object.keys(persons[0]?.values ?? {}))];
-  const pairs: Array<[string, string]> = options.pairs
-    ? options.pairs.map(([a, b]) => [a, b])
-    : variables.flatMap((a, i) => variables.slice(i + 1).map((b): [string, string] => [a, b]));
-  const minLagPairs = options.minLagPairs ?? DEFAULT_MIN_LAG_PAIRS;
-  const ccmOptions: CcmOptions = { ...options.ccm, minPoints: options.ccm?.minPoints ?? minLagPairs };
+  const settings = crossMapSettings(persons, options);
+  const { variables, pairs, minLagPairs, ccm: ccmOptions } = settings;
+  const season = settings.season ?? 'auto';
   const notes: string[] = [
     'Person-mean centring biases autoregressive effects downward in short series (Hamaker & Grasman 2015); compare with the pooled fixed-effects estimates and treat short series with care.',
   ];
@@ -122,8 +130,6 @@ export function analyseDynamics(persons: readonly PersonSeriesInput[], options: 
     else for (const c of pooled.coefficients) varRows.push({ scope: 'pooled', person: '', pair, status: 'ok', lagPairs: pooled.pairs, df: pooled.df, persons: pooled.persons, ready: true, ...c });
   }
 
-  const season = options.season ?? 'auto';
-  const settings: CrossMapSettings = { pairs, ccm: ccmOptions, seed: options.seed, season };
   const embedding: EmbeddingRow[] = [];
   const ccmRows: CcmRow[] = [];
   if (!options.skipCrossMapping && pairs.length > 0) {
