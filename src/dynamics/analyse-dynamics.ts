@@ -140,8 +140,9 @@ export function analyseDynamics(persons: readonly PersonSeriesInput[], options: 
       options.onPerson?.(i + 1, persons.length);
     });
     if (options.stack) {
-      // Gap between persons: wide enough that the default exclusion radius (at most max(E·τ, 50)) never reaches the next person.
-      const gap = Math.max(ccmOptions.exclusionRadius ?? 0, (ccmOptions.maxE ?? 8) * (ccmOptions.tau ?? 1), 50);
+      // Gap between persons: an embedding vector's span. A default exclusion radius longer than the gap only
+      // keeps a few of the next person's first bins from being neighbours, which is harmless.
+      const gap = Math.max(ccmOptions.exclusionRadius ?? 0, (ccmOptions.maxE ?? 8) * (ccmOptions.tau ?? 1));
       const cache = new Map<string, PhasedSeries>();
       const stacked = personCrossMaps('stacked', STACKED, (variable) => {
         if (!cache.has(variable)) cache.set(variable, stackSegments(persons.map((p) => personSeries(p, variable, season)), gap));
