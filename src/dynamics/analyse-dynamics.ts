@@ -1,5 +1,5 @@
 import type { Season } from './calendar-phase.js';
-import type { CcmOptions } from './convergent-cross-mapping.js';
+import { ccmNotEnoughData, type CcmOptions } from './convergent-cross-mapping.js';
 import { crossMapPerson, personCrossMaps, personSeries, type CcmRow, type CrossMapSettings, type EmbeddingRow, type PersonCrossMaps } from './person-cross-maps.js';
 import { DEFAULT_MIN_LAG_PAIRS, personVariableSummary, type PersonVariableSummary } from './person-variable-summary.js';
 import { pooledVar1 } from './pooled-var1.js';
@@ -23,6 +23,8 @@ export interface DynamicsOptions {
   skipCrossMapping?: boolean;
   /** Also cross map all persons' segments stacked end to end (default false). */
   stack?: boolean;
+  /** Most observed bins of a stacked series that is cross mapped (default {@link MAX_STACKED_BINS}); above it the stacked rows say why not. */
+  maxStackedBins?: number;
   /**
    * Calendar cycle kept by the seasonal surrogates (see calendarPhase): `auto` (default) is the
    * hour of the local day for bins shorter than a day and the local weekday for daily bins.
@@ -81,6 +83,12 @@ export interface DynamicsResult {
 }
 
 const STACKED = '';
+
+/**
+ * Most bins a stacked series may have for cross mapping: the work grows with the square of the
+ * bins (neighbour tables, choosing E), and 10,000 bins already take minutes (docs/performance.md).
+ */
+export const MAX_STACKED_BINS = 10_000;
 
 /** The variables, pairs and cross-mapping settings {@link analyseDynamics} uses for these options (for running the cross maps elsewhere, e.g. in worker threads). */
 export function crossMapSettings(persons: readonly PersonSeriesInput[], options: DynamicsOptions): CrossMapSettings & { variables: string[]; pairs: Array<[string, string]>; minLagPairs: number } {
@@ -144,12 +152,26 @@ export function analyseDynamics(persons: readonly PersonSeriesInput[], options: 
       // keeps a few of the next person's first bins from being neighbours, which is harmless.
       const gap = Math.max(ccmOptions.exclusionRadius ?? 0, (ccmOptions.maxE ?? 8) * (ccmOptions.tau ?? 1));
       const cache = new Map<string, PhasedSeries>();
-      const stacked = personCrossMaps('stacked', STACKED, (variable) => {
+      const stackOf = (variable: string): PhasedSeries => {
         if (!cache.has(variable)) cache.set(variable, stackSegments(persons.map((p) => personSeries(p, variable, season)), gap));
         return cache.get(variable) as PhasedSeries;
-      }, settings);
-      ccmRows.push(...stacked.ccm);
-      embedding.push(...stacked.embedding);
+      };
+      const bins = Math.max(0, ...variables.map((v) => stackOf(v).values.filter((x) => x !== undefined).length));
+      const maxBins = options.maxStackedBins ?? MAX_STACKED_BINS;
+      if (bins > maxBins) {
+        const reason = `the stacked series has ${bins} observed bins, more than the ${maxBins} that stacked cross mapping handles in reasonable time; read the per-person rows, or stack fewer persons or a coarser bin`;
+        for (const [a, b] of pairs)
+          for (const [cause, effect] of [
+            [a, b],
+            [b, a],
+          ])
+            ccmRows.push({ scope: 'stacked', person: STACKED, cause: cause as string, effect: effect as string, ...ccmNotEnoughData(reason, undefined, ccmOptions.tau ?? 1, bins) });
+        notes.push(`Stacked cross mapping was skipped: ${reason}.`);
+      } else {
+        const stacked = personCrossMaps('stacked', STACKED, stackOf, settings);
+        ccmRows.push(...stacked.ccm);
+        embedding.push(...stacked.embedding);
+      }
     }
   }
   const unskilled = embedding.filter((e) => e.note !== undefined).length;

@@ -46,6 +46,16 @@ describe('analyseDynamics', () => {
     expect(stacked[0]!.points).toBeGreaterThan(result.ccm.find((c) => c.person === 'P1' && c.cause === stacked[0]!.cause)!.points);
   });
 
+  it('skips stacked cross mapping with a reason and a note when the stack has more bins than it handles in reasonable time', () => {
+    const persons = syntheticPersons(2, 120);
+    const result = analyseDynamics(persons, { seed: 3, ccm, stack: true, maxStackedBins: 200 });
+    const stacked = result.ccm.filter((c) => c.scope === 'stacked');
+    expect(stacked.map((c) => `${c.cause}->${c.effect}`)).toEqual(['mood->tone', 'tone->mood']);
+    expect(stacked.every((c) => c.status === 'not_enough_data' && /^the stacked series has 2\d\d observed bins, more than the 200/.test(c.reason ?? ''))).toBe(true);
+    expect(result.notes.some((n) => n.startsWith('Stacked cross mapping was skipped'))).toBe(true);
+    expect(result.ccm.filter((c) => c.scope === 'person').every((c) => c.status === 'ok')).toBe(true);
+  });
+
   it('notes a series with no positive forecast skill at any E, and not a chaotic one (common practice: a positive simplex skill before cross mapping)', () => {
     // Invented: uniform noise (seed 20; its best simplex skill over E = 1…8 is −0.026, at E = 1, with the default exclusion radius max(E·τ, decorrelation time))
     // beside the logistic map x ← 3.7x(1 − x), whose one-bin-ahead skill is high (Sugihara & May 1990).
