@@ -2,11 +2,11 @@ import type { CrossMapSettings } from './person-cross-maps.js';
 import type { PersonSeriesInput } from './types.js';
 
 /**
- * Nanoseconds of one thread per work unit of {@link crossMapWork}, measured with the bench's study
- * workload (scripts/bench-ccm.mjs, 2,016 hourly bins × 3 variables, defaults) on the 2-core
- * development machine while it was shared: 11 s of CPU per person for 381 million units.
+ * Nanoseconds of one thread per work unit of {@link crossMapWork}, measured on the 2-core
+ * development machine with one person × 2,016 hourly bins × 3 variables and the defaults
+ * (docs/performance.md): 10.2–11.2 s of CPU for 468 million units, 22–24 ns each.
  */
-export const CROSS_MAP_NS_PER_UNIT = 30;
+export const CROSS_MAP_NS_PER_UNIT = 24;
 
 /**
  * A rough count of the arithmetic cross mapping will do for each person, for estimates of the run
