@@ -14,9 +14,13 @@
  * file's folder, calls the stages in order and records provenance.
  */
 import { readFile } from 'node:fs/promises';
-import { dirname, join, relative, resolve } from 'node:path';
+import { basename, dirname, join, relative, resolve } from 'node:path';
 import { usageError } from './errors.js';
 import { writeFileAtomic } from './io/atomic-write.js';
+import { checkOutputFolder } from './io/check-output-folder.js';
+import { lockOutputFolder } from './io/lock-output-folder.js';
+import { removeStaleTemporaries } from './io/own-temporaries.js';
+import { openStagedOutput } from './io/staged-output.js';
 import { loadLexicons } from './io/load-lexicon.js';
 import { readZoneFile } from './io/read-zone-file.js';
 import { fileDigest, runScore, type RunScoreResult } from './io/run-score.js';
@@ -27,9 +31,10 @@ import { parseReducers, seriesOptionsFrom } from './cli/series-options.js';
 import { parseStudy, type Study } from './study/parse-study.js';
 import type { AuditSettings } from './study/stage-settings.js';
 import type { TimeOptions } from './ingest/parse-instant.js';
+import { timeWindow } from './ingest/time-window.js';
 import type { ZoneTable } from './ingest/zone-table.js';
 import { readPseudonymKey, PSEUDONYM_KEY_ENV } from './io/read-pseudonym-key.js';
-import { pseudonymizePerson } from './privacy/pseudonymize-person.js';
+import { createPseudonymizer } from './privacy/create-pseudonymizer.js';
 import { createRedactor } from './privacy/create-redactor.js';
 import { termAuditor } from './terms/term-auditor.js';
 import { random } from './stats/random.js';
@@ -64,6 +69,8 @@ export interface StudyContext {
   time: TimeOptions;
   /** Maps raw person ids to the ids written in outputs (pseudonyms when a key is given). */
   person: (id: string) => string;
+  /** Whether a key was given: files are then named by role in outputs, never by file name. */
+  pseudonymized?: boolean;
   score: RunScoreResult;
   series: RunSeriesResult;
   /** Seed for every random draw of the run (bootstrap, surrogates). */
@@ -94,6 +101,36 @@ async function dataRows(path: string): Promise<number> {
   return rows;
 }
 
+/**
+ * The study as the manifest records it: person ids as written in the outputs (pseudonyms when a
+ * key was given); participants' addresses and sender names only as counts; no key file, no
+ * redaction names; and, with pseudonyms, inputs and side files named by position or role
+ * (`input-1`, `zones`, `ratings`, `windows`) instead of file names that may hold an id.
+ */
+function recordedStudy(study: Study, person: (id: string) => string, pseudonymized: boolean): Record<string, unknown> {
+  const inputs = study.inputs.map((input, n) => {
+    const { addresses, senders, ...rest } = input;
+    return {
+      ...rest,
+      ...(pseudonymized ? { path: `input-${n + 1}` } : {}),
+      ...(input.person ? { person: person(input.person) } : {}),
+      ...(addresses ? { addresses: addresses.length } : {}),
+      ...(senders ? { senders: senders.length } : {}),
+    };
+  });
+  const recorded: Record<string, unknown> = {
+    ...study,
+    inputs,
+    privacy: study.privacy ? { ...study.privacy, keyFile: study.privacy.keyFile ? '(key file, not recorded)' : undefined, names: undefined } : undefined,
+  };
+  if (pseudonymized) {
+    if (study.zones) recorded.zones = 'zones';
+    if (study.ratings) recorded.ratings = { ...study.ratings, path: 'ratings' };
+    if (study.series.windows) recorded.series = { ...study.series, windows: 'windows' };
+  }
+  return recorded;
+}
+
 /** Reads and validates a study file; throws a usage error listing every problem with its JSON path. */
 export async function readStudy(path: string): Promise<Study> {
   let json: unknown;
@@ -109,46 +146,80 @@ export async function readStudy(path: string): Promise<Study> {
   return study;
 }
 
+/** Options of runStudy. */
+export interface RunStudyOptions {
+  now: string;
+  stages?: Array<[string, StudyStage]>;
+  seed?: number;
+  onProgress?: (rows: number) => void;
+  /** Called once, when the first scored rows are written (see RunScoreOptions.onFirstRows). */
+  onFirstRows?: () => void;
+  /** Environment variables the study may name (`privacy.keyEnv`), passed in by the caller. */
+  env?: Readonly<Record<string, string | undefined>>;
+  /** Accept an output folder that is a symbolic link (refused by default, see checkOutputFolder). */
+  allowSymlinks?: boolean;
+}
+
 /**
  * Runs a study: score → series → the optional stages (validation, dynamics, term audit,
- * report) → datapackage.json and manifest.json, all in the study's output folder.
+ * report) → datapackage.json and manifest.json, into the study's output folder.
  * `now` (ISO 8601) is the run time recorded in the manifest; `stages` are called in order.
+ *
+ * One run at a time, and never half-old outputs: the run holds the output folder's lock
+ * (lockOutputFolder; a second run fails with a usage error), removes what killed runs left
+ * there, and writes every output into a staging folder (openStagedOutput) that replaces the
+ * old outputs only when every stage has finished. manifest.json and report.html are removed first
+ * and put in place last, so they never describe files of another run. On any error the old outputs
+ * stay as they were. An output folder that is a symbolic link is refused unless `allowSymlinks`.
  */
-export async function runStudy(
-  studyPath: string,
-  options: {
-    now: string;
-    stages?: Array<[string, StudyStage]>;
-    seed?: number;
-    onProgress?: (rows: number) => void;
-    /** Called once, when the first scored rows are written (see RunScoreOptions.onFirstRows). */
-    onFirstRows?: () => void;
-    /** Environment variables the study may name (`privacy.keyEnv`), passed in by the caller. */
-    env?: Readonly<Record<string, string | undefined>>;
-  },
-): Promise<RunStudyResult> {
+export async function runStudy(studyPath: string, options: RunStudyOptions): Promise<RunStudyResult> {
   const study = await readStudy(studyPath);
+  const finalDir = resolve(dirname(resolve(studyPath)), study.out);
+  await checkOutputFolder(finalDir, options.allowSymlinks);
+  const lock = await lockOutputFolder(finalDir, `lexichron run ${studyPath}`);
+  try {
+    await removeStaleTemporaries(finalDir, { recursive: true });
+    const staged = await openStagedOutput(finalDir, ['report.html', 'manifest.json']);
+    let result: RunStudyResult;
+    try {
+      result = await runStudyInto(staged.dir, study, studyPath, options);
+      await staged.commit();
+    } catch (error) {
+      await staged.abort();
+      throw error;
+    }
+    // Paths as they are after the commit.
+    const moved = (path: string): string => join(finalDir, relative(staged.dir, path));
+    const { score, series } = result;
+    return {
+      ...result,
+      outDir: finalDir,
+      score: { ...score, scoresPath: moved(score.scoresPath), rejectsPath: moved(score.rejectsPath), metaPath: moved(score.metaPath) },
+      series: { ...series, longPath: moved(series.longPath), widePath: moved(series.widePath), eventsPath: moved(series.eventsPath), rejectsPath: moved(series.rejectsPath) },
+      ...(result.report ? { report: { ...result.report, path: moved(result.report.path) } } : {}),
+    };
+  } finally {
+    await lock.release();
+  }
+}
+
+/** The stages of runStudy, writing every output into `outDir` (the staging folder). */
+async function runStudyInto(outDir: string, study: Study, studyPath: string, options: RunStudyOptions): Promise<RunStudyResult> {
   const studyDir = dirname(resolve(studyPath));
   const at = (p: string): string => resolve(studyDir, p);
-  const outDir = at(study.out);
   const lexicons = await loadLexicons(study.lexicons.map((l) => (l.includes('/') || l.endsWith('.tsv') ? at(l) : l)));
   if (study.timeZone && !isValidZone(study.timeZone)) {
     throw usageError(`Study file \`${studyPath}\`, $.timeZone: unknown time zone \`${study.timeZone}\`; expected an IANA name such as \`Europe/Brussels\`.`);
   }
   const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
-  const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap };
+  const window = timeWindow(Date.parse(options.now), study.time.window, `Study file \`${studyPath}\`, $.time.window`);
+  const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap, window };
   const privacy = study.privacy ?? {};
   const keyEnv = privacy.keyEnv ?? PSEUDONYM_KEY_ENV;
   const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, options.env?.[keyEnv]);
   if (privacy.keyEnv && !key) throw usageError(`The study names the key variable \`${privacy.keyEnv}\` ($.privacy.keyEnv), but it is not set; set it or remove the key from the study file.`);
-  const pseudonyms = new Map<string, string>();
-  const person = key
-    ? (id: string): string => {
-        let p = pseudonyms.get(id);
-        if (p === undefined) pseudonyms.set(id, (p = pseudonymizePerson(id, key)));
-        return p;
-      }
-    : (id: string): string => id;
+  const pseudonyms = key ? createPseudonymizer(key) : undefined;
+  const person = pseudonyms ? pseudonyms.person : (id: string): string => id;
   const redact = createRedactor({ names: privacy.names });
   const auditors = study.audit === false ? [] : lexicons.filter((l) => l.scoring === 'rules').map((l) => ({ lexicon: l, auditor: termAuditor(l, { random: random(options.seed ?? DEFAULT_SEED), redact, maxShare: (study.audit as AuditSettings).maxShare, minPersons: (study.audit as AuditSettings).minPersons }) }));
   // Series settings are checked before anything is scored, and their errors name the study file's keys.
@@ -170,7 +241,7 @@ export async function runStudy(
     out: join(outDir, 'scores.csv'),
     keepText: study.keepText,
     redact,
-    ...(key ? { person } : {}),
+    ...(pseudonyms ? { pseudonyms } : {}),
     onProgress: options.onProgress,
     onFirstRows: options.onFirstRows,
     onRawEntry: auditors.length === 0 ? undefined : (entry) => {
@@ -190,7 +261,7 @@ export async function runStudy(
   const seed = options.seed ?? DEFAULT_SEED;
   const stages: Record<string, StageOutput> = {};
   if (auditors.length > 0) stages.audit = await writeStudyAudit(outDir, auditors.map((a) => a.auditor.finish()), (study.audit as AuditSettings).top, study.keepText);
-  const context: StudyContext = { study, studyDir, outDir, at, zones, time, person, score, series, seed, shared: {} };
+  const context: StudyContext = { study, studyDir, outDir, at, zones, time, person, pseudonymized: pseudonyms !== undefined, score, series, seed, shared: {} };
   for (const [name, stage] of options.stages ?? []) {
     const out = await stage(context);
     if (out) stages[name] = out;
@@ -212,10 +283,12 @@ export async function runStudy(
   }
   outputs.push(...Object.values(stages).flatMap((s) => s.outputs));
   const inputs: FileRecord[] = [...score.inputs];
-  for (const extra of [study.zones, study.ratings?.path, study.series.windows]) {
+  // With pseudonyms, files are recorded by their role, never by a name that may hold an id.
+  const extras: Array<[string | undefined, string]> = [[study.zones, 'zones'], [study.ratings?.path, 'ratings'], [study.series.windows, 'windows']];
+  for (const [extra, role] of extras) {
     if (!extra) continue;
     const d = await fileDigest(at(extra));
-    inputs.push({ path: extra, sha256: d.sha256, bytes: d.bytes, rows: await dataRows(at(extra)) });
+    inputs.push({ path: pseudonyms ? role : extra, sha256: d.sha256, bytes: d.bytes, rows: await dataRows(at(extra)) });
   }
   const manifest = buildManifest({
     version: TOOL_VERSION,
@@ -225,9 +298,9 @@ export async function runStudy(
     lexicons: score.lexicons,
     parameters: {
       // Person ids in the recorded study are the ones written in the outputs (pseudonyms when a key was given).
-      study: { ...study, inputs: study.inputs.map((i) => (i.person ? { ...i, person: person(i.person) } : i)), privacy: study.privacy ? { ...study.privacy, keyFile: study.privacy.keyFile ? '(key file, not recorded)' : undefined, names: undefined } : undefined },
+      study: recordedStudy(study, person, pseudonyms !== undefined),
       seed,
-      privacy: { pseudonymized: key !== undefined, aggregatesOnly: privacy.aggregatesOnly === true, redactedNames: privacy.names?.length ?? 0 },
+      privacy: { pseudonymized: key !== undefined || score.pseudonymized, aggregatesOnly: privacy.aggregatesOnly === true, redactedNames: privacy.names?.length ?? 0 },
     },
     reconciliation: score.reconciliation,
     stages: {
@@ -242,6 +315,6 @@ export async function runStudy(
   }
   await writeFileAtomic(join(outDir, 'manifest.json'), JSON.stringify(manifest, null, 2) + '\n');
   let report: WriteReportResult | undefined;
-  if (study.report !== false) report = await writeReport(outDir, { ...study.report, ...(study.report.title ? {} : { title: study.name }) });
+  if (study.report !== false) report = await writeReport(outDir, { ...study.report, ...(study.report.title ? {} : { title: study.name }), source: basename(at(study.out)) });
   return { outDir, manifest, score, series, stages, report };
 }

@@ -38,6 +38,11 @@ export interface RawEntry {
   offsetMinutes: number;
   text: string;
   source: SourceRef;
+  /**
+   * Set when `person` and `id` were already pseudonymized (at import): the key's check value
+   * (Pseudonymizer.keyCheck). Such an entry is never pseudonymized again.
+   */
+  pseudonymKey?: string;
 }
 
 /** What a reader yields: either an entry or a diagnostic for a rejected row. */

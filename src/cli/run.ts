@@ -14,14 +14,16 @@ export function registerRun(program: Command): void {
     .description('run a whole study from its study file: score, series, validation, dynamics, term audit, report')
     .argument('<study>', 'study file (JSON; see README "Study file")')
     .option('--seed <n>', 'seed for bootstrap and surrogate draws', '20261201')
+    .option('--allow-symlinks', 'accept an output folder that is a symbolic link (refused by default)')
     .action(async (studyPath: string, opts: Record<string, unknown>) => {
       const progress = progressReporter('scored');
       // V8 optimizes less eagerly until the first scores are written (see jit-budget.ts and main.ts).
-      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env };
+      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env, allowSymlinks: opts.allowSymlinks === true };
       const result = await runStudy(studyPath, options).finally(progress.stop);
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;
       process.stderr.write(`series: ${s.persons} persons, ${s.bins} bins, ${s.observed} observed\n`);
+      for (const warning of s.warnings) process.stderr.write(`warning: series: ${warning}\n`);
       const seriesRejected = Object.values(s.rejected).reduce((a, b) => a + b, 0);
       if (seriesRejected > 0) process.stderr.write(`series: ${seriesRejected} scores rows not used: see ${relative(process.cwd(), s.rejectsPath)}\n`);
       for (const [name, stage] of Object.entries(result.stages)) process.stderr.write(`${name}: ${stage.outputs.length} files\n`);

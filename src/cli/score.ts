@@ -6,19 +6,12 @@ import type { ZoneTable } from '../ingest/zone-table.js';
 import { readNamesFile } from '../io/read-names-file.js';
 import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
 import { createRedactor } from '../privacy/create-redactor.js';
-import { pseudonymizePerson } from '../privacy/pseudonymize-person.js';
+import { createPseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { restoreJitBudget } from './jit-budget.js';
-import { addTimeOptions, delimiterFrom, parseMaxRejects, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
+import { addTimeOptions, delimiterFrom, parseMaxRejects, parseWorkers, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
-
-/** `--workers`: `auto` or a whole number from 0 to 16. */
-function parseWorkers(value: string): number | 'auto' {
-  if (value === 'auto') return 'auto';
-  if (!/^\d+$/.test(value) || Number(value) > 16) throw usageError(`--workers \`${value}\` must be auto or a whole number from 0 to 16.`);
-  return Number(value);
-}
 
 /** `lexichron score INPUT... --lexicon NAME_OR_PATH... --out FILE` */
 export function registerScore(program: Command): void {
@@ -72,7 +65,7 @@ export function registerScore(program: Command): void {
       out: String(opts.out),
       keepText: opts.keepText === true && opts.aggregatesOnly !== true,
       redact,
-      ...(key ? { person: (id: string) => pseudonymizePerson(id, key) } : {}),
+      ...(key ? { pseudonyms: createPseudonymizer(key) } : {}),
       workers,
       pool,
       onProgress: progress.update,

@@ -4,7 +4,6 @@ import { runSeries } from '../io/run-series.js';
 import { readWindowsFile } from '../io/read-windows-file.js';
 import { readZoneFile } from '../io/read-zone-file.js';
 import { zoneOnDay } from '../series/zone-on-day.js';
-import { mergeDataPackage } from '../io/merge-data-package.js';
 import { addSeriesOptions, parseReducers, seriesOptionsFrom } from './series-options.js';
 
 /** `lexichron series SCORES --bin DURATION --out FILE` */
@@ -26,8 +25,9 @@ export function registerSeries(program: Command): void {
       out: String(opts.out),
       reducers: typeof reducers === 'string' ? undefined : reducers,
       allReducer: typeof reducers === 'string' ? reducers : undefined,
+      dataPackage: { path: join(dirname(String(opts.out)), 'datapackage.json'), name: 'lexichron-series', title: 'lexichron series' },
     });
-    await mergeDataPackage(join(dirname(String(opts.out)), 'datapackage.json'), 'lexichron-series', 'lexichron series', result.resources);
+    for (const warning of result.warnings) process.stderr.write(`warning: ${warning}\n`);
     const missing = Object.entries(result.missing).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
     const rejected = Object.entries(result.rejected);
     if (rejected.length > 0) process.stderr.write(`${rejected.reduce((a, [, n]) => a + n, 0)} scores rows not used (${rejected.map(([k, n]) => `${k} ${n}`).join(', ')}): see ${result.rejectsPath}\n`);

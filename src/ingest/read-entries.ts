@@ -16,6 +16,8 @@ export interface ReadEntriesOptions extends ReadRecordsOptions {
 /** Values shown as they are in a diagnostic: what looks like an IANA zone name or a person id (see describeValue). */
 const ZONE_LIKE = /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/;
 const ID_LIKE = /^[\p{L}\p{N}_.:@#-]+$/u;
+/** Column of entries pseudonymized at import that holds the key's check value (see entryLine). */
+export const PSEUDONYM_KEY_COLUMN = 'pseudonym_key';
 
 function reject(code: string, message: string, source: SourceRef): ReadItem {
   const diagnostic: Diagnostic = { code, message, source, stage: 'ingest' };
@@ -28,6 +30,7 @@ function reject(code: string, message: string, source: SourceRef): ReadItem {
  * The zone is the record's own `zone` column when present, otherwise the person's zone from
  * the zone table (for a wall-clock time, the zone in force on that local date). Times with an
  * offset keep their instant; the entry's offset is always the person's zone offset at that instant.
+ * A `pseudonym_key` column marks an entry pseudonymized at import (RawEntry.pseudonymKey).
  */
 export function recordToEntry(record: Record<string, string>, source: SourceRef, columns: ColumnMapping, zones: ZoneTable, time: TimeOptions): ReadItem {
   const person = (record[columns.person] ?? '').trim();
@@ -59,6 +62,9 @@ export function recordToEntry(record: Record<string, string>, source: SourceRef,
     text,
     source,
   };
+  // The mark of entries pseudonymized at import (entryLine): they are not pseudonymized again.
+  const pseudonymKey = (record[PSEUDONYM_KEY_COLUMN] ?? '').trim();
+  if (pseudonymKey !== '') entry.pseudonymKey = pseudonymKey;
   return { kind: 'entry', entry };
 }
 

@@ -1,25 +1,40 @@
 import { createWriteStream } from 'node:fs';
 import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
+import { removeStaleTemporaries, temporaryPathFor, trackTemporary } from './own-temporaries.js';
 
-/** Temporary path beside `path` (same folder, so the final rename is atomic). */
-function temporaryPath(path: string): string {
-  return `${path}.${process.pid}.${Math.random().toString(36).slice(2)}.tmp`;
+/** Folders this process has already cleaned of stale temporaries. */
+const cleaned = new Map<string, Promise<unknown>>();
+
+/**
+ * Creates `dir` when missing and, the first time this process writes there, removes the stale
+ * temporaries that killed runs of this tool left in it (removeStaleTemporaries).
+ */
+async function prepareFolder(dir: string): Promise<void> {
+  await mkdir(dir, { recursive: true });
+  let done = cleaned.get(dir);
+  if (!done) cleaned.set(dir, (done = removeStaleTemporaries(dir)));
+  await done;
 }
 
 /**
- * Writes a whole file atomically: the content goes to a temporary file in the same folder,
- * which is then renamed over `path`. A failed write leaves nothing at `path`.
+ * Writes a whole file atomically: the content goes to a temporary file in the same folder
+ * (`<path>.lexichron-<pid>-<random>.tmp`, see own-temporaries.ts), which is then renamed over
+ * `path`. The first write of a process into a folder removes stale temporaries there. A failed write leaves nothing at `path`; the temporary is removed on failure, and when
+ * the process exits or is stopped by a signal before the rename.
  */
 export async function writeFileAtomic(path: string, content: string | Uint8Array): Promise<void> {
-  await mkdir(dirname(path), { recursive: true });
-  const tmp = temporaryPath(path);
+  await prepareFolder(dirname(path));
+  const tmp = temporaryPathFor(path);
+  const tracked = trackTemporary(tmp);
   try {
     await writeFile(tmp, content);
     await rename(tmp, path);
   } catch (error) {
     await rm(tmp, { force: true });
     throw error;
+  } finally {
+    tracked.forget();
   }
 }
 
@@ -37,10 +52,15 @@ export interface AtomicLineWriter {
   abort(): Promise<void>;
 }
 
-/** Opens an AtomicLineWriter for `path`; each `write` appends the line and a `\n`, honouring back-pressure. */
+/**
+ * Opens an AtomicLineWriter for `path`; each `write` appends the line and a `\n`, honouring
+ * back-pressure. The temporary file is named as writeFileAtomic's and removed on exit or signal
+ * when neither `commit` nor `abort` ran.
+ */
 export async function openAtomicLineWriter(path: string): Promise<AtomicLineWriter> {
-  await mkdir(dirname(path), { recursive: true });
-  const tmp = temporaryPath(path);
+  await prepareFolder(dirname(path));
+  const tmp = temporaryPathFor(path);
+  const tracked = trackTemporary(tmp);
   const stream = createWriteStream(tmp);
   // Lines are encoded straight into a buffer (no joined string in between); a full buffer is
   // handed to the stream and a new one started.
@@ -83,6 +103,7 @@ export async function openAtomicLineWriter(path: string): Promise<AtomicLineWrit
       await flush();
       await new Promise<void>((resolve, reject) => stream.end((error?: Error | null) => (error ? reject(error) : resolve())));
       await rename(tmp, path);
+      tracked.forget();
     },
     async abort() {
       // The file may still be opening: wait until the stream has closed it, or the removal
@@ -93,6 +114,7 @@ export async function openAtomicLineWriter(path: string): Promise<AtomicLineWrit
         await closed;
       }
       await rm(tmp, { force: true });
+      tracked.forget();
     },
   };
 }

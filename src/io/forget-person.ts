@@ -1,45 +1,55 @@
 import { createReadStream } from 'node:fs';
 import { lstat, readdir, readFile, rm, stat } from 'node:fs/promises';
-import { basename, extname, join, relative } from 'node:path';
+import { extname, join, relative } from 'node:path';
 import { createInterface } from 'node:readline';
+import { StringDecoder } from 'node:string_decoder';
 import { usageError } from '../errors.js';
 import { createPersonRowFilter } from '../privacy/create-person-row-filter.js';
 import { removePersonFromJson } from '../privacy/remove-person-from-json.js';
-import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
+import { openAtomicLineWriter, writeFileAtomic, type AtomicLineWriter } from './atomic-write.js';
+import { LOCK_NAME, lockOutputFolder } from './lock-output-folder.js';
+import { processRuns, temporaryOwner } from './own-temporaries.js';
 import { fileDigest } from './run-score.js';
 
 /** What to forget and how to record it. */
 export interface ForgetOptions {
-  /** Every form under which the person appears in the outputs (the raw id and/or its pseudonym). */
+  /** Every form under which the person appears in the outputs as a person value (the pseudonym when the study used a key). */
   ids: readonly string[];
   /** What the manifest records for the removal: a pseudonymous id, never the raw id. */
   record: string;
   /** Time of the removal (RFC 3339), passed in by the caller. */
   at: string;
-  /** Record nothing in the manifest when no output held the person. */
-  onlyIfFound?: boolean;
 }
 
 /** What forgetPerson did, with paths relative to the study folder. */
 export interface ForgetResult {
+  /** Whether any output held the person; when false, nothing was changed or recorded. */
+  found: boolean;
   /** Files rewritten without the person, with the rows/elements removed. */
   changed: Array<{ file: string; removed: number }>;
-  /** Files removed because they are about the person alone (a name holding the id, or a JSON document of the person). */
+  /** JSON documents removed because they are about the person alone (a top-level `person` of the id). */
   deleted: string[];
-  /** Files the tool cannot edit (HTML, SVG, text…) that still mention an id: regenerate or delete them. */
+  /** Other files that mention an id as a word (reports, plots, notes, unknown formats): regenerate or delete them. */
   stale: string[];
+  /** Symbolic links in the folder: not followed, so whatever they point to was neither read nor changed. */
+  symlinks: string[];
+  /** Temporary files and staging folders that killed runs of this tool left (removed: they may hold the person's rows). */
+  temporaries: string[];
 }
 
-const TEXT_SCAN = new Set(['.html', '.htm', '.svg', '.txt', '.md', '.xml']);
-const MAX_SCAN_BYTES = 256 * 1024 * 1024;
+const TABLES: Record<string, 'csv' | 'tsv' | 'jsonl'> = { '.csv': 'csv', '.tsv': 'tsv', '.jsonl': 'jsonl', '.ndjson': 'jsonl' };
 
-async function* walk(dir: string): AsyncGenerator<string> {
+/** Every entry under `dir` (sorted), without following symbolic links. */
+async function* walk(dir: string): AsyncGenerator<{ path: string; kind: 'file' | 'link' | 'temporary' | 'other' }> {
   const entries = await readdir(dir, { withFileTypes: true });
   entries.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
   for (const entry of entries) {
     const path = join(dir, entry.name);
-    if (entry.isDirectory()) yield* walk(path);
-    else if (entry.isFile()) yield path;
+    if (entry.isSymbolicLink()) yield { path, kind: 'link' };
+    else if (temporaryOwner(entry.name) !== undefined) yield { path, kind: 'temporary' };
+    else if (entry.isDirectory()) yield* walk(path);
+    else if (entry.isFile()) yield { path, kind: entry.name === LOCK_NAME ? 'other' : 'file' };
+    else yield { path, kind: 'other' };
   }
 }
 
@@ -48,9 +58,28 @@ function idPattern(ids: readonly string[]): RegExp {
   return new RegExp(`(?<![\\p{L}\\p{N}_])(?:${escaped.join('|')})(?![\\p{L}\\p{N}_])`, 'u');
 }
 
-/** Rewrites a CSV/TSV/JSON Lines file without the person's rows; returns the rows removed (0 leaves the file untouched). */
-async function filterLines(path: string, format: 'csv' | 'tsv' | 'jsonl', ids: ReadonlySet<string>, mentions: RegExp): Promise<number> {
-  const filter = createPersonRowFilter(ids, format, mentions);
+/** Whether a file mentions `pattern`, read as UTF-8 in chunks of any size (a window of `overlap` characters spans chunk ends). */
+async function fileMentions(path: string, pattern: RegExp, overlap: number): Promise<boolean> {
+  const decoder = new StringDecoder('utf8');
+  let tail = '';
+  for await (const chunk of createReadStream(path)) {
+    const text = tail + decoder.write(chunk as Buffer);
+    if (pattern.test(text)) return true;
+    tail = text.slice(-overlap);
+  }
+  return pattern.test(tail + decoder.end());
+}
+
+/** A table rewritten without the person into a temporary file, not yet in place. */
+interface PendingTable {
+  file: string;
+  removed: number;
+  writer: AtomicLineWriter;
+}
+
+/** Writes a CSV/TSV/JSON Lines file without the person's rows to a temporary; returns undefined (and keeps nothing) when no row is the person's. */
+async function filterTable(path: string, file: string, format: 'csv' | 'tsv' | 'jsonl', ids: ReadonlySet<string>): Promise<PendingTable | undefined> {
+  const filter = createPersonRowFilter(ids, format);
   const writer = await openAtomicLineWriter(path);
   const input = createReadStream(path, { encoding: 'utf8' });
   try {
@@ -67,70 +96,117 @@ async function filterLines(path: string, format: 'csv' | 'tsv' | 'jsonl', ids: R
   }
   if (filter.removed === 0) {
     await writer.abort();
-    return 0;
+    return undefined;
   }
-  await writer.commit();
-  return filter.removed;
+  return { file, removed: filter.removed, writer };
 }
 
 /**
- * Removes a person from every output of a study folder (withdrawal of consent), then records
- * the removal in the folder's `manifest.json` under `forgotten` as `{person: record, at, files}`.
+ * Removes a person from every output of a study folder (withdrawal of consent, the right to
+ * erasure of GDPR Art. 17), under the folder's lock (lockOutputFolder), and records the removal in
+ * its `manifest.json` under `forgotten` as `{person: record, at, files}`. Only person values count:
  *
- * - CSV/TSV with a `person` column and JSON Lines: the person's rows are removed (createPersonRowFilter),
- *   other lines stay byte for byte; files without a match are not touched;
- * - JSON: the person is removed wherever listed (removePersonFromJson); a JSON document that is
- *   about the person alone is deleted;
- * - files whose name holds one of the ids as a whole word are deleted;
- * - HTML, SVG, Markdown, XML and text files cannot be edited safely: those that still mention an id are
- *   returned as `stale` (regenerate the report, or delete them).
- * Every rewrite is atomic. The raw id is never written; the caller passes the pseudonymous `record`.
+ * - CSV/TSV: rows whose `person` column is one of `ids`; in a diagnostics table without one, rows
+ *   whose message names the person as this tool's diagnostics do; JSON Lines: objects whose `person`
+ *   is one of them. Other lines stay byte for byte;
+ * - JSON: objects whose `person` is one of them, and entries of a `persons` list (removePersonFromJson);
+ *   a JSON document whose top-level `person` is the id is deleted;
+ * - every other regular file is scanned (streamed, any size) and returned as `stale` when it
+ *   mentions an id as a word; symbolic links are listed, never followed; no file is ever deleted
+ *   because of its name.
+ *
+ * When no output holds the person, nothing is changed or recorded (`found` is false). Otherwise
+ * all rewrites are prepared in temporary files first and then renamed into place; temporaries that
+ * killed runs left are removed; the manifest keeps everything else and gets fresh SHA-256 and sizes
+ * for every file it lists that was rewritten (deleted files are dropped from it). The raw id is
+ * never written; the caller passes the pseudonymous `record`.
  */
 export async function forgetPerson(dir: string, options: ForgetOptions): Promise<ForgetResult> {
   const info = await stat(dir).catch(() => undefined);
   if (!info?.isDirectory()) throw usageError(`Cannot forget a person in \`${dir}\`: it is not a folder; pass the study's output folder with --study DIR.`);
   const ids = new Set(options.ids.map((id) => id.trim()).filter((id) => id !== ''));
   if (ids.size === 0) throw usageError('Cannot forget a person without an id; pass the person id as it appears in the study.');
-  const pattern = idPattern([...ids]);
-  const result: ForgetResult = { changed: [], deleted: [], stale: [] };
-  const manifestPath = join(dir, 'manifest.json');
-  for await (const path of walk(dir)) {
-    const rel = relative(dir, path).split('\\').join('/');
-    const ext = extname(path).toLowerCase();
-    if ((await lstat(path)).isSymbolicLink()) continue;
-    if (pattern.test(basename(path, extname(path)))) {
-      await rm(path, { force: true });
-      result.deleted.push(rel);
-      continue;
-    }
-    if (ext === '.csv' || ext === '.tsv' || ext === '.jsonl' || ext === '.ndjson') {
-      const removed = await filterLines(path, ext === '.tsv' ? 'tsv' : ext === '.csv' ? 'csv' : 'jsonl', ids, pattern);
-      if (removed > 0) result.changed.push({ file: rel, removed });
-      continue;
-    }
-    if (ext === '.json') {
-      let parsed: unknown;
-      try {
-        parsed = JSON.parse(await readFile(path, 'utf8'));
-      } catch {
-        continue; // not JSON after all: leave it
-      }
-      const removal = removePersonFromJson(parsed, ids);
-      if (removal.wholeDocument) {
-        await rm(path, { force: true });
-        result.deleted.push(rel);
-      } else if (removal.removed > 0) {
-        if (path === manifestPath) continue; // rewritten below, with the record
-        await writeFileAtomic(path, `${JSON.stringify(removal.value, null, 2)}\n`);
-        result.changed.push({ file: rel, removed: removal.removed });
-      }
-      continue;
-    }
-    if (TEXT_SCAN.has(ext) && (await stat(path)).size <= MAX_SCAN_BYTES) {
-      if (pattern.test(await readFile(path, 'utf8'))) result.stale.push(rel);
-    }
+  const lock = await lockOutputFolder(dir, 'lexichron forget');
+  try {
+    return await forgetLocked(dir, ids, options);
+  } finally {
+    await lock.release();
   }
-  if (options.onlyIfFound && result.changed.length === 0 && result.deleted.length === 0) return result;
+}
+
+async function forgetLocked(dir: string, ids: ReadonlySet<string>, options: ForgetOptions): Promise<ForgetResult> {
+  const pattern = idPattern([...ids]);
+  const overlap = Math.max(...[...ids].map((id) => id.length)) + 2;
+  const result: ForgetResult = { found: false, changed: [], deleted: [], stale: [], symlinks: [], temporaries: [] };
+  const manifestPath = join(dir, 'manifest.json');
+  const tables: PendingTable[] = [];
+  const documents: Array<{ path: string; file: string; removed: number; content: string }> = [];
+  const deletions: Array<{ path: string; file: string }> = [];
+  const temporaries: Array<{ path: string; file: string }> = [];
+  const rel = (path: string): string => relative(dir, path).split('\\').join('/');
+  try {
+    for await (const { path, kind } of walk(dir)) {
+      const file = rel(path);
+      if (kind === 'link') {
+        result.symlinks.push(file);
+        continue;
+      }
+      if (kind === 'temporary') {
+        const owner = temporaryOwner(path.slice(path.lastIndexOf('/') + 1)) as number;
+        if (processRuns(owner)) result.stale.push(file); // being written by a command that is not done yet
+        else temporaries.push({ path, file });
+        continue;
+      }
+      if (kind !== 'file' || path === manifestPath) continue;
+      const ext = extname(path).toLowerCase();
+      const format = TABLES[ext];
+      if (format) {
+        const pending = await filterTable(path, file, format, ids);
+        if (pending) tables.push(pending);
+        continue;
+      }
+      if (ext === '.json') {
+        let parsed: unknown;
+        try {
+          parsed = JSON.parse(await readFile(path, 'utf8'));
+        } catch {
+          parsed = undefined; // not JSON after all: scanned as text below
+        }
+        if (parsed !== undefined) {
+          const removal = removePersonFromJson(parsed, ids);
+          if (removal.wholeDocument) deletions.push({ path, file });
+          else if (removal.removed > 0) documents.push({ path, file, removed: removal.removed, content: `${JSON.stringify(removal.value, null, 2)}\n` });
+          continue;
+        }
+      }
+      // Any other file: a table without an extension, a report, a plot, notes. Checked, not edited.
+      if (await fileMentions(path, pattern, overlap)) result.stale.push(file);
+    }
+  } catch (error) {
+    await Promise.all(tables.map((t) => t.writer.abort()));
+    throw error;
+  }
+  result.found = tables.length + documents.length + deletions.length > 0;
+  if (!result.found) return result;
+
+  // The person is there: put every rewrite in place, then the manifest.
+  for (const t of tables) {
+    await t.writer.commit();
+    result.changed.push({ file: t.file, removed: t.removed });
+  }
+  for (const d of documents) {
+    await writeFileAtomic(d.path, d.content);
+    result.changed.push({ file: d.file, removed: d.removed });
+  }
+  for (const d of deletions) {
+    await rm(d.path, { force: true });
+    result.deleted.push(d.file);
+  }
+  for (const t of temporaries) {
+    await rm(t.path, { recursive: true, force: true });
+    result.temporaries.push(t.file);
+  }
+  result.changed.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
   let manifest: Record<string, unknown> = {};
   try {
     const parsed = JSON.parse(await readFile(manifestPath, 'utf8')) as unknown;
@@ -142,16 +218,16 @@ export async function forgetPerson(dir: string, options: ForgetOptions): Promise
       if (earlier !== undefined) manifest.forgotten = earlier;
     }
   } catch {
-    // no manifest yet: start one that holds the record
+    // no manifest (or not JSON): start one that holds the record
   }
-  // Outputs listed in the manifest: fresh hashes for rewritten files, deleted files dropped.
+  // Outputs listed in the manifest: fresh hashes and sizes for rewritten files, deleted files dropped.
   if (Array.isArray(manifest.outputs)) {
     const changed = new Set(result.changed.map((c) => c.file));
     const deleted = new Set(result.deleted);
     const outputs: unknown[] = [];
     for (const output of manifest.outputs as Array<{ path?: string; sha256?: string; bytes?: number }>) {
-      if (typeof output?.path !== 'string' || deleted.has(output.path)) continue;
-      if (changed.has(output.path) && output.sha256 !== undefined) {
+      if (typeof output?.path === 'string' && deleted.has(output.path)) continue;
+      if (typeof output?.path === 'string' && changed.has(output.path) && output.sha256 !== undefined) {
         const d = await fileDigest(join(dir, output.path));
         outputs.push({ ...output, sha256: d.sha256, bytes: d.bytes });
       } else outputs.push(output);

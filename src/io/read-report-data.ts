@@ -61,15 +61,15 @@ async function readJson(path: string): Promise<{ value?: unknown; reason?: strin
  * Reads whatever a study output folder holds (series-long.csv, manifest.json, the scores sidecar,
  * validation, term audit and dynamics outputs) and assembles the report's {@link ReportData}.
  * Missing files are not errors: their sections say what is absent. Throws a usage error only when
- * the folder itself does not exist.
+ * the folder itself does not exist. `source` is the folder name shown on the page (default: the folder's own name).
  */
-export async function readReportData(outDir: string, options: ReportOptions = {}): Promise<ReportData> {
+export async function readReportData(outDir: string, options: ReportOptions = {}, source?: string): Promise<ReportData> {
   const dir = resolve(outDir);
   const info = await stat(dir).catch(() => undefined);
   if (!info?.isDirectory()) throw usageError(`Cannot read \`${outDir}\`: no such folder; give the output folder of \`lexichron run\` (the \`out\` of the study file).`);
   const found = locateReportFiles(await listFiles(dir));
   const at = (rel: string): string => join(dir, rel);
-  const inputs: ReportInputs = { source: basename(dir), tool: { name: 'lexichron', version: TOOL_VERSION }, reasons: {} };
+  const inputs: ReportInputs = { source: source ?? basename(dir), tool: { name: 'lexichron', version: TOOL_VERSION }, reasons: {} };
   const reasons = inputs.reasons as NonNullable<ReportInputs['reasons']>;
   if (found.series) inputs.seriesCsv = await readFile(at(found.series), 'utf8');
   if (found.manifest) {

@@ -8,6 +8,7 @@ import { readEntryBatches } from '../ingest/read-entries.js';
 import type { TableFormat } from '../ingest/read-records.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
+import type { Pseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { csvRow } from '../report/csv.js';
 import { scoreRowFiller, scoresHeader } from '../report/score-rows.js';
 import { scoreColumns, scoredEntryFrom, type ScoreColumn } from '../score/score-entry.js';
@@ -40,8 +41,16 @@ export interface RunScoreOptions {
   keepText?: boolean;
   /** Maps kept text before it is written (redaction). */
   redact?: (text: string) => string;
-  /** Maps person ids before anything is written (pseudonymization). */
+  /** Maps person ids before anything is written (pseudonymization); `pseudonyms` does this and more. */
   person?: (id: string) => string;
+  /**
+   * Pseudonymization with a key: person ids become pseudonyms, entry ids keyed digests, and input
+   * files are named by position (`input-1`, `input-2`…) in the rejects, the sidecar and the result,
+   * so that no raw id or file name sits beside a pseudonym. Entries marked as pseudonymized at
+   * import with this key are kept as they are; those marked with another key are rejected
+   * (`pseudonym_other_key`).
+   */
+  pseudonyms?: Pseudonymizer;
   /** Called every 1,000 rows with the rows read so far. */
   onProgress?: (rows: number) => void;
   /** Scoring workers: a number (0 = score in this thread) or `auto` (the default: by input size and cores). */
@@ -70,6 +79,8 @@ export interface InputRecord {
 
 export interface RunScoreResult {
   reconciliation: Reconciliation;
+  /** Whether the scores hold pseudonyms (a key was given, or entries pseudonymized at import were read). */
+  pseudonymized: boolean;
   columns: ScoreColumn[];
   lexicons: LexiconRef[];
   inputs: InputRecord[];
@@ -132,14 +143,19 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
   }
   const reconciliation: Reconciliation = { read: 0, scored: 0, rejected: {}, dropped: {} };
   const inputs: InputRecord[] = [];
-  const mapPerson = options.person ?? ((id: string) => id);
+  const pseudonyms = options.pseudonyms;
+  const mapPerson = pseudonyms ? pseudonyms.person : (options.person ?? ((id: string) => id));
+  /** Whether an entry pseudonymized at import was read (the outputs hold pseudonyms even without a key). */
+  let markedEntries = false;
+  let inputName = '';
   const row = scoreRowFiller(columns, options.lexicons, keepText);
   try {
     await scores.write(csvRow(scoresHeader(columns, options.lexicons, keepText)));
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
     const addReject = async (d: Diagnostic): Promise<void> => {
       reconciliation.rejected[d.code] = (reconciliation.rejected[d.code] ?? 0) + 1;
-      await rejects.write(csvRow([d.source?.file ?? '', String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
+      const file = pseudonyms && d.source ? inputName : (d.source?.file ?? '');
+      await rejects.write(csvRow([file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
     };
     if (pool) pool.setLexicons(options.lexicons);
     else pool = createScorePool(options.lexicons, await scoreWorkerCount(options.inputs.map((input) => input.path), options.workers));
@@ -195,8 +211,9 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
         }
       }
     };
-    for (const input of options.inputs) {
+    for (const [index, input] of options.inputs.entries()) {
       let rows = 0;
+      inputName = pseudonyms ? `input-${index + 1}` : basename(input.path);
       // Table files are read a chunk of rows at a time (one step of the event loop per chunk, not per row).
       // A table file's digest is taken from the bytes as they are read (one read of the file, and
       // the digest is of exactly what was scored); an importer's source is digested afterwards.
@@ -222,7 +239,16 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
             continue;
           }
           const entry = item.entry;
-          entry.person = mapPerson(entry.person);
+          if (entry.pseudonymKey === undefined) {
+            entry.person = mapPerson(entry.person);
+            if (pseudonyms) {
+              entry.id = pseudonyms.entryId(entry.id);
+              entry.source = { ...entry.source, file: inputName };
+            }
+          } else if (pseudonyms && entry.pseudonymKey !== pseudonyms.keyCheck) {
+            await addReject({ code: 'pseudonym_other_key', message: 'the entry was pseudonymized at import with another key; give the key it was imported with, or import the export again with this key', source: entry.source, stage: 'ingest' });
+            continue;
+          } else markedEntries = true; // pseudonymized once, at import: kept as it is
           options.onRawEntry?.(entry);
           batch.push(entry);
           if (batch.length >= BATCH_SIZE) {
@@ -234,7 +260,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       submit();
       await drain(0);
       const read = digest ? { sha256: digest.hash.digest('hex'), bytes: digest.bytes } : await fileDigest(input.path);
-      inputs.push({ path: basename(input.path), bytes: read.bytes, sha256: read.sha256, rows });
+      inputs.push({ path: inputName, bytes: read.bytes, sha256: read.sha256, rows });
     }
     options.onProgress?.(reconciliation.read);
     const meta = {
@@ -243,7 +269,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       columns,
       inputs,
       reconciliation,
-      options: { keepText, time: options.time, pseudonymized: options.person !== undefined },
+      options: { keepText, time: options.time, pseudonymized: options.person !== undefined || pseudonyms !== undefined || markedEntries },
     };
     await scores.commit();
     await rejects.commit();
@@ -257,6 +283,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
   }
   return {
     reconciliation,
+    pseudonymized: options.person !== undefined || pseudonyms !== undefined || markedEntries,
     columns,
     lexicons: options.lexicons.map((l) => l.ref),
     inputs,

@@ -15,10 +15,11 @@ export interface WriteReportResult {
 /**
  * Builds the self-contained HTML report of a study output folder and writes it atomically to
  * `<outDir>/report.html` (or `options.file`). Call it after manifest.json is written so the
- * provenance section shows the final manifest.
+ * provenance section shows the final manifest. `source` is the folder name the page shows (default:
+ * the name of `outDir`; `run` passes the output folder's name while it writes into a staging folder).
  */
-export async function writeReport(outDir: string, options: ReportOptions & { file?: string } = {}): Promise<WriteReportResult> {
-  const data = await readReportData(outDir, options);
+export async function writeReport(outDir: string, options: ReportOptions & { file?: string; source?: string } = {}): Promise<WriteReportResult> {
+  const data = await readReportData(outDir, options, options.source);
   const html = renderReport(data);
   const path = options.file ?? join(outDir, 'report.html');
   await writeFileAtomic(path, html);

@@ -4,6 +4,7 @@ import {
   type Category,
   type Lexicon,
   type LexiconProblem,
+  type LexiconScoring,
   type NegationRule,
   type TermRow,
   type TermStatus,
@@ -142,7 +143,7 @@ export function parseLexicon(text: string): ParseLexiconResult {
     problems.push({ line: 1, message: '`## scale` needs two numbers, lowest then highest weight, e.g. `## scale<TAB>-5<TAB>5`' });
   } else scale = [scaleValues[0] as number, scaleValues[1] as number];
   const scoring = meta.get('scoring')?.[0] ?? 'rules';
-  if (scoring !== 'rules' && scoring !== 'vader') problems.push({ line: 1, message: `unknown scoring ${shown(scoring)}; use rules or vader` });
+  if (scoring !== 'rules' && scoring !== 'vader' && scoring !== 'plain-words') problems.push({ line: 1, message: `unknown scoring ${shown(scoring)}; use rules, vader or plain-words` });
   const negation = (meta.get('negation')?.[0] ?? 'ignore') as NegationRule;
   if (!NEGATIONS.includes(negation)) problems.push({ line: 1, message: `unknown negation rule ${shown(negation)}; use flip, drop or ignore` });
   const windowText = meta.get('window')?.[0] ?? '3';
@@ -183,7 +184,7 @@ export function parseLexicon(text: string): ParseLexiconResult {
       source: one('source'),
       language: one('language'),
       scale,
-      scoring: scoring as 'rules' | 'vader',
+      scoring: scoring as LexiconScoring,
       negation,
       negators: meta.has('negators') ? (meta.get('negators') as string[]).map((n) => n.toLowerCase()) : [...DEFAULT_NEGATORS],
       window,

@@ -1,3 +1,5 @@
+import Papa from 'papaparse';
+
 /** A line-by-line filter that removes one person's rows from a CSV, TSV or JSON Lines file. */
 export interface PersonRowFilter {
   /** Feeds one physical line (without its line end); returns the lines to write (none while a quoted field spans lines). */
@@ -6,32 +8,8 @@ export interface PersonRowFilter {
   end(): string[];
   /** Rows removed so far. */
   readonly removed: number;
-  /** For CSV/TSV: whether the header has a `person` column (known after the first record); always true for JSON Lines. */
+  /** For CSV/TSV: whether the header has a `person` column or a diagnostics `message` column (known after the first record); always true for JSON Lines. */
   readonly hasPersonColumn: boolean;
-}
-
-/** Splits one CSV record (possibly spanning lines) into fields, with RFC 4180 quoting. */
-export function splitCsvRecord(record: string, delimiter: string): string[] {
-  const fields: string[] = [];
-  let field = '';
-  let quoted = false;
-  for (let i = 0; i < record.length; i++) {
-    const c = record[i] as string;
-    if (quoted) {
-      if (c === '"') {
-        if (record[i + 1] === '"') {
-          field += '"';
-          i++;
-        } else quoted = false;
-      } else field += c;
-    } else if (c === '"' && field === '') quoted = true;
-    else if (c === delimiter) {
-      fields.push(field);
-      field = '';
-    } else field += c;
-  }
-  fields.push(field);
-  return fields;
 }
 
 function quoteCount(text: string): number {
@@ -40,28 +18,49 @@ function quoteCount(text: string): number {
   return n;
 }
 
+function escapeRegExp(text: string): string {
+  return text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+}
+
+/**
+ * How a diagnostic message of this tool names a person: "person `ID`" or "the self-report of `ID`"
+ * (validation and dynamics diagnostics). Only this form counts: an id that appears in a message as
+ * a column name, a word of the text or anything else is not the person.
+ */
+export function personMentionPattern(ids: Iterable<string>): RegExp | undefined {
+  const list = [...ids].filter((id) => id !== '').map(escapeRegExp);
+  return list.length === 0 ? undefined : new RegExp(`(?:\\bperson|\\bself-report of) \`(?:${list.join('|')})\``, 'u');
+}
+
+/** The fields of one CSV/TSV record (possibly spanning lines), read by papaparse (RFC 4180 quoting for CSV; none for TSV). */
+function fieldsOf(record: string, format: 'csv' | 'tsv'): string[] {
+  const parsed = Papa.parse<string[]>(record, format === 'tsv' ? { delimiter: '\t', quoteChar: '\u0000', newline: '\n' } : { delimiter: ',', newline: '\n' });
+  return (parsed.data[0] as string[] | undefined) ?? [];
+}
+
 /**
  * Creates a filter that removes the rows of a person from a file, line by line, leaving every
- * other line byte for byte as it was:
- * - CSV (`,`) and TSV (tab) with a header: rows whose `person` column equals one of `ids`
- *   (records spanning lines inside RFC 4180 quotes are kept together); without a `person`
- *   column, rows with a field that names one of the ids as a whole word (`mentions`, e.g. a
- *   diagnostic message "the self-report of `p07` …"), or nothing when `mentions` is not given;
+ * other line byte for byte as it was. A row is the person's only through a person value:
+ * - CSV (`,`) and TSV (tab) with a header: rows whose `person` column equals one of `ids` (records
+ *   spanning lines inside RFC 4180 quotes are kept together and read with papaparse); without a
+ *   `person` column, rows of a diagnostics table whose `message` column names the person as this
+ *   tool's diagnostics do (personMentionPattern); any other table is left alone;
  * - JSON Lines: lines holding an object whose `person` equals one of `ids`; other lines are kept.
  */
-export function createPersonRowFilter(ids: ReadonlySet<string>, format: 'csv' | 'tsv' | 'jsonl', mentions?: RegExp): PersonRowFilter {
+export function createPersonRowFilter(ids: ReadonlySet<string>, format: 'csv' | 'tsv' | 'jsonl'): PersonRowFilter {
   let removed = 0;
   let personIndex: number | undefined;
+  let messageIndex: number | undefined;
   let header = true;
   let held: string[] = [];
   let quotes = 0;
-  const delimiter = format === 'tsv' ? '\t' : ',';
+  const mention = personMentionPattern(ids);
   const filter: PersonRowFilter = {
     get removed() {
       return removed;
     },
     get hasPersonColumn() {
-      return format === 'jsonl' || personIndex !== undefined;
+      return format === 'jsonl' || personIndex !== undefined || messageIndex !== undefined;
     },
     push(line) {
       if (format === 'jsonl') {
@@ -85,14 +84,21 @@ export function createPersonRowFilter(ids: ReadonlySet<string>, format: 'csv' | 
       const lines = held;
       held = [];
       quotes = 0;
-      const fields = splitCsvRecord(lines.join('\n'), delimiter);
+      const fields = fieldsOf(lines.join('\n'), format);
       if (header) {
         header = false;
-        const i = fields.findIndex((f) => f.trim() === 'person');
-        if (i >= 0) personIndex = i;
+        const names = fields.map((f) => f.trim());
+        const person = names.indexOf('person');
+        const message = names.indexOf('message');
+        if (person >= 0) personIndex = person;
+        else if (message >= 0) messageIndex = message;
         return lines;
       }
-      if (personIndex !== undefined ? ids.has((fields[personIndex] ?? '').trim()) : mentions !== undefined && fields.some((f) => mentions.test(f))) {
+      const own =
+        personIndex !== undefined
+          ? ids.has((fields[personIndex] ?? '').trim())
+          : messageIndex !== undefined && mention !== undefined && mention.test(fields[messageIndex] ?? '');
+      if (own) {
         removed++;
         return [];
       }

@@ -8,34 +8,36 @@ export interface JsonRemoval {
 }
 
 /**
- * Removes a person from a JSON document such as a summary, a sidecar or a manifest, wherever it is listed:
- * array elements that are one of `ids` or objects whose `person` is one of them, and object keys that
- * are one of them (objects keyed by person). Everything else is kept as it was.
+ * Removes a person from a JSON document such as a summary, a sidecar or a manifest, wherever a
+ * person value names them: objects whose `person` is one of `ids` (dropped from their array or,
+ * as a member, from their object), and, inside a member named `persons`, string elements of a list
+ * and keys of an object. A key or string anywhere else is not a person value (a column, a stage,
+ * a file name) and is kept even when it equals the id. Everything else is kept as it was.
  */
 export function removePersonFromJson(value: unknown, ids: ReadonlySet<string>): JsonRemoval {
   let removed = 0;
-  const visit = (node: unknown): unknown => {
+  const visit = (node: unknown, persons: boolean): unknown => {
     if (Array.isArray(node)) {
       const kept: unknown[] = [];
       for (const element of node) {
-        if (typeof element === 'string' && ids.has(element)) removed++;
+        if (persons && typeof element === 'string' && ids.has(element)) removed++;
         else if (isPersonObject(element, ids)) removed++;
-        else kept.push(visit(element));
+        else kept.push(visit(element, false));
       }
       return kept;
     }
     if (node !== null && typeof node === 'object') {
       const out: Record<string, unknown> = {};
       for (const [key, child] of Object.entries(node as Record<string, unknown>)) {
-        if (ids.has(key)) removed++;
-        else out[key] = visit(child);
+        if ((persons && ids.has(key)) || isPersonObject(child, ids)) removed++;
+        else out[key] = visit(child, key === 'persons');
       }
       return out;
     }
     return node;
   };
   if (isPersonObject(value, ids)) return { value, removed: 1, wholeDocument: true };
-  return { value: visit(value), removed, wholeDocument: false };
+  return { value: visit(value, false), removed, wholeDocument: false };
 }
 
 function isPersonObject(node: unknown, ids: ReadonlySet<string>): boolean {

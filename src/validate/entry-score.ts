@@ -1,3 +1,4 @@
+import { inTimeWindow } from '../ingest/time-window.js';
 import type { Diagnostic, SourceRef } from '../types.js';
 import { restoreCell } from '../report/csv.js';
 
@@ -30,7 +31,7 @@ export function entryScoreFromRecord(record: Readonly<Record<string, string>>, s
   const person = restoreCell((record.person ?? '').trim());
   const instant = Date.parse(record.time_utc ?? '');
   const words = Number(record.words);
-  if (person === '' || !Number.isFinite(instant) || !Number.isInteger(words) || words < 0) {
+  if (person === '' || !inTimeWindow(instant, undefined) || !Number.isInteger(words) || words < 0) {
     return { code: 'bad_entry_row', message: 'the row lacks a person, a readable time_utc or a whole word count; was it written by lexichron score or series?', source, stage: 'validate' };
   }
   const binStart = record.bin_start ? Date.parse(record.bin_start) : undefined;

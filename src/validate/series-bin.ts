@@ -1,3 +1,4 @@
+import { inTimeWindow } from '../ingest/time-window.js';
 import type { Diagnostic, SourceRef } from '../types.js';
 import { restoreCell } from '../report/csv.js';
 
@@ -38,7 +39,7 @@ export function seriesBinFromRecord(record: Readonly<Record<string, string>>, so
   const person = restoreCell((record.person ?? '').trim());
   const start = Date.parse(record.bin_start ?? '');
   const end = Date.parse(record.bin_end ?? '');
-  if (person === '' || !Number.isFinite(start) || !Number.isFinite(end) || end <= start) {
+  if (person === '' || !inTimeWindow(start, undefined) || !inTimeWindow(end, undefined) || end <= start) {
     return { code: 'bad_series_row', message: 'the row lacks a person or a readable bin_start/bin_end; was it written by lexichron series?', source, stage: 'validate' };
   }
   const scores: Record<string, number | undefined> = {};

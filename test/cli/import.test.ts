@@ -115,13 +115,17 @@ describe('lexichron import', () => {
     } finally {
       vi.unstubAllEnvs();
     }
-    const { pseudonymizePerson } = await import('../../src/privacy/pseudonymize-person.js');
+    const { createPseudonymizer } = await import('../../src/privacy/create-pseudonymizer.js');
+    const pseudonyms = createPseudonymizer(new TextEncoder().encode(key));
     const lines = readFileSync(out, 'utf8').trim().split('\n').map((l) => JSON.parse(l));
-    expect(lines).toEqual([{ id: 'chat.txt:1', person: pseudonymizePerson('P01', new TextEncoder().encode(key)), time: '2025-03-21T08:00:00+01:00', zone: 'Europe/Brussels', text: 'Good morning\nagain' }]);
+    // The entry id is keyed too (no file name beside the pseudonym), and the entry carries the key's check value.
+    expect(lines).toEqual([{ id: pseudonyms.entryId('chat.txt:1'), person: pseudonyms.person('P01'), pseudonym_key: pseudonyms.keyCheck, time: '2025-03-21T08:00:00+01:00', zone: 'Europe/Brussels', text: 'Good morning\nagain' }]);
+    expect(lines[0].id).toMatch(/^e[0-9a-f]{16}$/);
     for (const file of [out, `${out}.rejects.csv`, `${out}.meta.json`]) {
       const text = readFileSync(file, 'utf8');
       expect(text).not.toContain(key);
       expect(text).not.toContain('P01');
+      expect(text).not.toContain('chat.txt');
     }
     expect(attempts).toEqual([]);
   });

@@ -14,9 +14,9 @@ function study(name: string): string {
   const write = (file: string, text: string) => tmp.write(join(name, file), text);
   write('scores.csv', 'entry_id,person,time_utc,text\na:1,pA,2025-03-03T08:00:00.000Z,"fine,\nreally"\na:2,pB,2025-03-03T09:00:00.000Z,ok\na:3,pA,2025-03-03T10:00:00.000Z,"she said ""pA"""\n');
   write('series-long.csv', 'person,t,value\npB,0,1\npB,1,2\n');
-  write('rejects.csv', 'file,line,code,message\nx,1,bad_time,pA\n');
+  write('rejects.csv', 'file,line,code,message\nx,1,no_zone,person `pA` has no time zone\nx,2,bad_time,the time pA is not a time\n');
   write('entries.jsonl', '{"id":"1","person":"pA","text":"x"}\n{"id":"2","person":"pB","text":"y"}\n');
-  write('summary.json', JSON.stringify({ persons: ['pA', 'pB'], byPerson: { pA: { n: 2 }, pB: { n: 1 } }, rows: [{ person: 'pA', r: 0.1 }, { person: 'pB', r: 0.2 }] }));
+  write('summary.json', JSON.stringify({ persons: ['pA', 'pB'], columns: ['pA', 'n'], stages: { pA: 1 }, rows: [{ person: 'pA', r: 0.1 }, { person: 'pB', r: 0.2 }] }));
   write('people/pA.json', JSON.stringify({ person: 'pA', n: 2 }));
   write('people/plot-pA.svg', '<svg>pA</svg>');
   write('report.html', '<p>pB pA</p>');
@@ -25,38 +25,53 @@ function study(name: string): string {
 }
 
 describe('forgetPerson removes a person from every output of a study folder', () => {
-  it('removes rows, list entries and per-person files, flags the report, and records the removal in the manifest', async () => {
+  it('removes rows, list entries and documents of the person (person values only), flags other mentions, and records the removal in the manifest (GDPR Art. 17)', async () => {
     const dir = study('s1');
     const result = await forgetPerson(dir, { ids: ['pA'], record: 'pA', at: '2025-04-01T10:00:00Z' });
     expect(readFileSync(join(dir, 'scores.csv'), 'utf8')).toBe('entry_id,person,time_utc,text\na:2,pB,2025-03-03T09:00:00.000Z,ok\n');
     expect(readFileSync(join(dir, 'entries.jsonl'), 'utf8')).toBe('{"id":"2","person":"pB","text":"y"}\n');
-    expect(JSON.parse(readFileSync(join(dir, 'summary.json'), 'utf8'))).toEqual({ persons: ['pB'], byPerson: { pB: { n: 1 } }, rows: [{ person: 'pB', r: 0.2 }] });
+    // Only `persons` lists and `person` values name persons: a column or a key that equals the id stays.
+    expect(JSON.parse(readFileSync(join(dir, 'summary.json'), 'utf8'))).toEqual({ persons: ['pB'], columns: ['pA', 'n'], stages: { pA: 1 }, rows: [{ person: 'pB', r: 0.2 }] });
     expect(existsSync(join(dir, 'people/pA.json'))).toBe(false);
-    expect(existsSync(join(dir, 'people/plot-pA.svg'))).toBe(false);
+    expect(existsSync(join(dir, 'people/plot-pA.svg'))).toBe(true); // never deleted by its name
     expect(readFileSync(join(dir, 'series-long.csv'), 'utf8')).toBe('person,t,value\npB,0,1\npB,1,2\n');
-    // No person column: a row whose message names the person (as diagnostics do) is removed too.
-    expect(readFileSync(join(dir, 'rejects.csv'), 'utf8')).toBe('file,line,code,message\n');
+    // No person column: a row whose message names the person as diagnostics do is removed; a word in a message is not the person.
+    expect(readFileSync(join(dir, 'rejects.csv'), 'utf8')).toBe('file,line,code,message\nx,2,bad_time,the time pA is not a time\n');
     expect(result).toEqual({
-      changed: [{ file: 'entries.jsonl', removed: 1 }, { file: 'rejects.csv', removed: 1 }, { file: 'scores.csv', removed: 2 }, { file: 'summary.json', removed: 3 }, { file: 'manifest.json', removed: 1 }],
-      deleted: ['people/pA.json', 'people/plot-pA.svg'],
-      stale: ['report.html'],
+      found: true,
+      changed: [{ file: 'entries.jsonl', removed: 1 }, { file: 'rejects.csv', removed: 1 }, { file: 'scores.csv', removed: 2 }, { file: 'summary.json', removed: 2 }, { file: 'manifest.json', removed: 1 }],
+      deleted: ['people/pA.json'],
+      stale: ['people/plot-pA.svg', 'report.html'],
+      symlinks: [],
+      temporaries: [],
     });
     expect(JSON.parse(readFileSync(join(dir, 'manifest.json'), 'utf8'))).toEqual({
       tool: 'lexichron',
       persons: ['pB'],
-      forgotten: [{ person: 'pA', at: '2025-04-01T10:00:00Z', files: ['entries.jsonl', 'manifest.json', 'people/pA.json', 'people/plot-pA.svg', 'rejects.csv', 'scores.csv', 'summary.json'] }],
+      forgotten: [{ person: 'pA', at: '2025-04-01T10:00:00Z', files: ['entries.jsonl', 'manifest.json', 'people/pA.json', 'rejects.csv', 'scores.csv', 'summary.json'] }],
     });
   });
 
-  it('keeps earlier removal records when forgetting again, and changes nothing else when the person is gone', async () => {
+  it('keeps earlier removal records, and changes and records nothing once the person is gone', async () => {
     const dir = study('s2');
+    await forgetPerson(dir, { ids: ['pB'], record: 'pB', at: '2025-03-01T10:00:00Z' });
     await forgetPerson(dir, { ids: ['pA'], record: 'pA', at: '2025-04-01T10:00:00Z' });
     const before = readFileSync(join(dir, 'scores.csv'), 'utf8');
+    const manifestBefore = readFileSync(join(dir, 'manifest.json'), 'utf8');
     const again = await forgetPerson(dir, { ids: ['pA'], record: 'pA', at: '2025-04-02T10:00:00Z' });
-    expect(again.changed).toEqual([]);
+    expect(again).toMatchObject({ found: false, changed: [], deleted: [] });
     expect(readFileSync(join(dir, 'scores.csv'), 'utf8')).toBe(before);
-    const manifest = JSON.parse(readFileSync(join(dir, 'manifest.json'), 'utf8'));
-    expect(manifest.forgotten.map((f: { at: string }) => f.at)).toEqual(['2025-04-01T10:00:00Z', '2025-04-02T10:00:00Z']);
+    expect(readFileSync(join(dir, 'manifest.json'), 'utf8')).toBe(manifestBefore);
+    const manifest = JSON.parse(manifestBefore);
+    expect(manifest.forgotten.map((f: { at: string }) => f.at)).toEqual(['2025-03-01T10:00:00Z', '2025-04-01T10:00:00Z']);
+  });
+
+  it('refuses while another process holds the folder\'s lock, and changes nothing', async () => {
+    const dir = study('s3');
+    const before = readFileSync(join(dir, 'scores.csv'), 'utf8');
+    tmp.write('s3/.lexichron-lock', JSON.stringify({ pid: process.pid, command: 'lexichron run' }));
+    await expect(forgetPerson(dir, { ids: ['pA'], record: 'pA', at: 'x' })).rejects.toThrow(/another lexichron command \(process \d+, `lexichron run`\) is writing there/);
+    expect(readFileSync(join(dir, 'scores.csv'), 'utf8')).toBe(before);
   });
 
   it('refuses a path that is not a folder', async () => {
@@ -67,9 +82,9 @@ describe('forgetPerson removes a person from every output of a study folder', ()
 describe('createPersonRowFilter and removePersonFromJson', () => {
   it('keeps a CSV record whose quoted field spans lines together (RFC 4180 section 2 rule 6)', () => {
     const filter = createPersonRowFilter(new Set(['x']), 'csv');
-    const out = ['person,text', 'x,"a', 'b"', 'y,"c', 'd"'].flatMap((l) => filter.push(l));
-    expect(out).toEqual(['person,text', 'y,"c', 'd"']);
-    expect(filter.removed).toBe(1);
+    const out = ['person,text', 'x,"a', 'b"', 'y,"c', 'd"', '"x","q ""x"", r"', 'z,x'].flatMap((l) => filter.push(l));
+    expect(out).toEqual(['person,text', 'y,"c', 'd"', 'z,x']);
+    expect(filter.removed).toBe(2);
   });
   it('reads TSV and leaves a table without a person column alone', () => {
     const tsv = createPersonRowFilter(new Set(['x']), 'tsv');

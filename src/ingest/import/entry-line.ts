@@ -7,7 +7,13 @@ export function entryTime(instant: number, offsetMinutes: number): string {
   return instant % 1000 === 0 ? text.replace(/\.000(?=[+-])/, '') : text;
 }
 
-/** One line of the entries contract of docs/architecture.md: `{id, person, time, zone, text}`. */
+/**
+ * One line of the entries contract of docs/architecture.md: `{id, person, time, zone, text}`, with
+ * `pseudonym_key` after `person` when the entry was pseudonymized (the key's check value, see
+ * createPseudonymizer): the mark that keeps `score` and `run` from pseudonymizing it again.
+ */
 export function entryLine(entry: RawEntry): string {
-  return JSON.stringify({ id: entry.id, person: entry.person, time: entryTime(entry.instant, entry.offsetMinutes), zone: entry.zone, text: entry.text });
+  const time = entryTime(entry.instant, entry.offsetMinutes);
+  if (entry.pseudonymKey !== undefined) return JSON.stringify({ id: entry.id, person: entry.person, pseudonym_key: entry.pseudonymKey, time, zone: entry.zone, text: entry.text });
+  return JSON.stringify({ id: entry.id, person: entry.person, time, zone: entry.zone, text: entry.text });
 }

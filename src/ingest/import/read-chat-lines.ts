@@ -1,4 +1,5 @@
 import type { RawEntry } from '../../types.js';
+import { daysInMonth, utcFromFields } from '../utc-from-fields.js';
 import { resolveWallClock, type WallClockPolicy } from '../zone-offset.js';
 import type { DecodedLine } from './decode-text-line.js';
 import { importReject, type EntryNote, type ImportItem } from './import-item.js';
@@ -34,7 +35,7 @@ export function chatStampTime(stamp: ChatStamp, order: DateOrder, zone: string, 
   if (yearDigits <= 2) year += 2000;
   const shown = stamp.parts.join('/');
   if (month < 1 || month > 12) return { ok: false, code: 'chat_bad_date', message: `the date ${shown} has no month ${month} when read as ${order}` };
-  const days = new Date(Date.UTC(year, month, 0)).getUTCDate();
+  const days = daysInMonth(year, month);
   if (day < 1 || day > days) return { ok: false, code: 'chat_bad_date', message: `the date ${shown} read as ${order} has day ${day}, which does not exist in ${year}-${String(month).padStart(2, '0')}` };
   let hour = stamp.hour;
   if (stamp.meridiem) {
@@ -42,7 +43,9 @@ export function chatStampTime(stamp: ChatStamp, order: DateOrder, zone: string, 
     hour = (hour % 12) + (stamp.meridiem === 'pm' ? 12 : 0);
   }
   if (hour > 23 || stamp.minute > 59 || stamp.second > 59) return { ok: false, code: 'chat_bad_time', message: 'the time of day is out of range' };
-  const resolved = resolveWallClock(Date.UTC(year, month - 1, day, hour, stamp.minute, stamp.second), zone, dst);
+  const wall = utcFromFields(year, month, day, hour, stamp.minute, stamp.second);
+  if (wall === undefined) return { ok: false, code: 'chat_bad_date', message: 'the date has a year outside 0000–9999' };
+  const resolved = resolveWallClock(wall, zone, dst);
   return resolved.ok ? resolved : { ok: false, code: resolved.code, message: resolved.message };
 }
 

@@ -1,6 +1,7 @@
 import { DateTime } from 'luxon';
 import { usageError } from '../../errors.js';
 import type { RawEntry } from '../../types.js';
+import { utcFromFields } from '../utc-from-fields.js';
 import { resolveWallClock, type WallClockPolicy } from '../zone-offset.js';
 import { importReject, type EntryNote, type ImportItem } from './import-item.js';
 import type { NumberedLine } from './read-chat-lines.js';
@@ -108,7 +109,9 @@ export async function* readDiary(lines: AsyncIterable<NumberedLine> | Iterable<N
       }
       clock = { hour: t.hour, minute: t.minute, second: t.second };
     }
-    const resolved = resolveWallClock(Date.UTC(dt.year, dt.month - 1, dt.day, clock.hour, clock.minute, clock.second), options.zone, options.dst);
+    const wall = utcFromFields(dt.year, dt.month, dt.day, clock.hour, clock.minute, clock.second);
+    if (wall === undefined) return importReject(file, p.line, 'diary_bad_date', 'the heading date has a year outside 0000–9999; check the heading and --date-format');
+    const resolved = resolveWallClock(wall, options.zone, options.dst);
     if (!resolved.ok) return importReject(file, p.line, resolved.code, resolved.message);
     const text = p.parts.join('\n').trim();
     if (text === '') return importReject(file, p.line, 'diary_empty_entry', p.time === undefined ? 'the heading is followed by no text' : 'the timed line is followed by no text');
