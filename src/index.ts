@@ -9,6 +9,7 @@ export { TOOL_VERSION } from './version.js';
 export { readRecords, formatFromPath, type RecordItem, type ReadRecordsOptions, type TableFormat } from './ingest/read-records.js';
 export { readEntries, recordToEntry, type ReadEntriesOptions } from './ingest/read-entries.js';
 export { parseInstant, formatLocal, formatUtc, DEFAULT_TIME_OPTIONS, type TimeOptions, type InstantResult } from './ingest/parse-instant.js';
+export { timeWindow, type TimeWindow } from './ingest/time-window.js';
 export { resolveWallClock, zoneOffset, isValidZone, type WallClockPolicy } from './ingest/zone-offset.js';
 export { buildZoneTable, zoneAtInstant, zoneOnLocalDate, type ZoneTable } from './ingest/zone-table.js';
 export { parseColumnMapping, resolveColumns, type ColumnMapping } from './ingest/column-mapping.js';
@@ -93,11 +94,11 @@ export {
   mean, variance, moments, standardDeviation, quantile, isNumber, groupBy,
   pearsonCorrelation, correlationFromMoments, fisherInterval,
   repeatedMeasuresCorrelation, intraclassCorrelation, oneWayIntraclassCorrelation,
-  linearMixedModel, cronbachAlpha, spearmanBrown, spearmanBrownFactor, splitHalfReliability,
+  linearMixedModel, randomSlopeMixedModel, randomSlopeTest, minimizeNelderMead, cronbachAlpha, spearmanBrown, spearmanBrownFactor, splitHalfReliability,
   clusterBootstrap, random, randomInteger, shuffle, minimizeScalar, cholesky, notEstimable,
   normalCdf, normalQuantile, studentTCdf, studentTQuantile, studentTTwoSidedP, normalTwoSidedP, fCdf, fQuantile,
   type StatResult, type NotEstimable, type Correlation, type RepeatedMeasuresCorrelation, type IntraclassCorrelations, type IccForm,
-  type OneWayIntraclassCorrelation, type LinearMixedModelFit, type LinearMixedModelOptions, type FixedEffect, type FixedEffectInference,
+  type OneWayIntraclassCorrelation, type LinearMixedModelFit, type RandomSlopeFit, type RandomSlopeOptions, type RandomSlopeTest, type MixedModelMethod, type LinearMixedModelOptions, type FixedEffect, type FixedEffectInference,
   type CronbachAlpha, type SplitHalfReliability, type BootstrapInterval, type RandomSource,
 } from './stats/index.js';
 

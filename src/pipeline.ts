@@ -31,6 +31,7 @@ import { parseReducers, seriesOptionsFrom } from './cli/series-options.js';
 import { parseStudy, type Study } from './study/parse-study.js';
 import type { AuditSettings } from './study/stage-settings.js';
 import type { TimeOptions } from './ingest/parse-instant.js';
+import { timeWindow } from './ingest/time-window.js';
 import type { ZoneTable } from './ingest/zone-table.js';
 import { readPseudonymKey, PSEUDONYM_KEY_ENV } from './io/read-pseudonym-key.js';
 import { createPseudonymizer } from './privacy/create-pseudonymizer.js';
@@ -234,10 +235,11 @@ export interface PreparedStudy {
 
 /**
  * Reads what a study file names (lexicons, zones, the pseudonym key, windows) and checks its
- * series settings, before anything is scored; errors name the study file's keys. `studyFile`
- * is where to read it, `studyPath` how the command line named it.
+ * series settings, before anything is scored; errors name the study file's keys. `now` (ISO 8601)
+ * bounds the plausible time window; `studyFile` is where to read it, `studyPath` how the command
+ * line named it.
  */
-export async function prepareStudy(study: Study, studyPath: string, env: RunStudyOptions['env'], studyFile = studyPath): Promise<PreparedStudy> {
+export async function prepareStudy(study: Study, studyPath: string, env: RunStudyOptions['env'], now: string, studyFile = studyPath): Promise<PreparedStudy> {
   const studyDir = dirname(resolve(studyFile));
   const at = (p: string): string => resolve(studyDir, p);
   const lexicons = await loadLexicons(study.lexicons.map((l) => (l.includes('/') || l.endsWith('.tsv') ? at(l) : l)));
@@ -245,7 +247,8 @@ export async function prepareStudy(study: Study, studyPath: string, env: RunStud
     throw usageError(`Study file \`${studyPath}\`, $.timeZone: unknown time zone \`${study.timeZone}\`; expected an IANA name such as \`Europe/Brussels\`.`);
   }
   const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
-  const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap };
+  const window = timeWindow(Date.parse(now), study.time.window, `Study file \`${studyPath}\`, $.time.window`);
+  const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap, window };
   const privacy = study.privacy ?? {};
   const keyEnv = privacy.keyEnv ?? PSEUDONYM_KEY_ENV;
   const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, env?.[keyEnv]);
@@ -332,7 +335,7 @@ function seriesSummary(series: RunSeriesResult): Record<string, unknown> {
 function noSeries(outDir: string): RunSeriesResult {
   const longPath = join(outDir, 'series-long.csv');
   const stem = join(outDir, 'series-long');
-  return { longPath, widePath: `${stem}.wide.csv`, eventsPath: `${stem}.events.csv`, rejectsPath: `${stem}.rejects.csv`, persons: 0, bins: 0, observed: 0, missing: {}, entries: 0, excludedEntries: 0, rejected: {}, columns: [], resources: [] };
+  return { longPath, widePath: `${stem}.wide.csv`, eventsPath: `${stem}.events.csv`, rejectsPath: `${stem}.rejects.csv`, persons: 0, bins: 0, observed: 0, missing: {}, entries: 0, excludedEntries: 0, rejected: {}, columns: [], resources: [], warnings: [] };
 }
 
 /** File name of a shard's manifest. */
@@ -370,7 +373,7 @@ async function writeShardManifest(outDir: string, fields: { prepared: PreparedSt
 
 /** The stages of runStudy, writing every output into `outDir` (the staging folder). */
 async function runStudyInto(outDir: string, study: Study, studyPath: string, options: RunStudyOptions): Promise<RunStudyResult> {
-  const p = await prepareStudy(study, studyPath, options.env);
+  const p = await prepareStudy(study, studyPath, options.env, options.now);
   // A shard runs no term audit: `lexichron merge` audits the whole study (see merge-shards.ts).
   const auditors = options.shard ? [] : studyAuditors(p, options.seed);
   const score = await runScore({

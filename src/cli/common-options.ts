@@ -1,7 +1,8 @@
 import { Option, type Command } from 'commander';
 import cliProgress from 'cli-progress';
 import { usageError } from '../errors.js';
-import type { TimeOptions } from '../ingest/parse-instant.js';
+import { EPOCH_UNITS, type TimeOptions } from '../ingest/parse-instant.js';
+import { timeWindow } from '../ingest/time-window.js';
 import type { WallClockPolicy } from '../ingest/zone-offset.js';
 import type { Reconciliation } from '../types.js';
 
@@ -22,16 +23,23 @@ export function addTimeOptions(command: Command): Command {
     .option('--time-zone <zone>', 'IANA zone for every person (times without an offset are read in it)')
     .option('--zones <file>', 'CSV with columns person, zone[, from] giving each person\'s IANA zone (from: local date a move takes effect)')
     .option('--time-format <format>', 'luxon format of the time column, e.g. "dd/MM/yyyy HH:mm" (default: RFC 3339 / ISO 8601 or epoch)')
-    .addOption(new Option('--epoch <unit>', 'unit of numeric times').choices(['auto', 's', 'ms']).default('auto'))
+    .addOption(new Option('--epoch <unit>', 'unit of numeric times (auto: told apart by magnitude; us = microseconds)').choices([...EPOCH_UNITS]).default('auto'))
+    .addOption(timeWindowOption())
     .addOption(dstGapOption())
     .addOption(dstOverlapOption())
     .option('--delimiter <char>', 'field delimiter of delimited text (default: , for .csv, tab for .tsv)')
     .addOption(new Option('--format <format>', 'input format when the extension does not tell').choices(['csv', 'tsv', 'jsonl', 'json']));
 }
 
-/** Time options from parsed commander options. */
-export function timeOptionsFrom(opts: Record<string, unknown>): TimeOptions {
+/** `--time-window FROM/TO`: the plausible times (shared by every command that reads times). */
+export function timeWindowOption(): Option {
+  return new Option('--time-window <from/to>', 'plausible times, FROM/TO as dates YYYY-MM-DD or times with an offset; a side left empty keeps its default (1970-01-01 / ten years from today); times outside are rejected as time_outside_window');
+}
+
+/** Time options from parsed commander options; `now` (the clock, read here in the shell) sets the default window. */
+export function timeOptionsFrom(opts: Record<string, unknown>, now: number = Date.now()): TimeOptions {
   return {
+    window: timeWindow(now, opts.timeWindow as string | undefined),
     format: opts.timeFormat as string | undefined,
     epoch: (opts.epoch as TimeOptions['epoch']) ?? 'auto',
     gap: (opts.dstGap as WallClockPolicy) ?? 'reject',
@@ -72,4 +80,11 @@ export function progressReporter(label: string): { update: (rows: number) => voi
   );
   bar.start(0, 0);
   return { update: (rows) => bar.update(rows), stop: () => bar.stop() };
+}
+
+/** `--workers`: `auto` or a whole number from 0 to 16. */
+export function parseWorkers(value: string): number | 'auto' {
+  if (value === 'auto') return 'auto';
+  if (!/^\d+$/.test(value) || Number(value) > 16) throw usageError(`--workers \`${value}\` must be auto or a whole number from 0 to 16.`);
+  return Number(value);
 }

@@ -13,7 +13,8 @@ import { createRedactor } from '../privacy/create-redactor.js';
 import { createPseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { importReconciliationText } from '../report/import-reconciliation-text.js';
 import type { WallClockPolicy } from '../ingest/zone-offset.js';
-import { dstGapOption, dstOverlapOption } from './common-options.js';
+import { timeWindow } from '../ingest/time-window.js';
+import { dstGapOption, dstOverlapOption, timeWindowOption } from './common-options.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
 
@@ -48,6 +49,7 @@ export function registerImport(program: Command): void {
     .option('--time-format <format>', 'chat-table: luxon format of the time field (default: RFC 3339 / ISO 8601 or epoch)')
     .addOption(dstGapOption())
     .addOption(dstOverlapOption())
+    .addOption(timeWindowOption())
     .option('--merge-burst <minutes>', 'merge the participant\'s messages that follow each other within this many minutes into one entry')
     .option('--dedupe', 'drop exact and near-duplicate entries (repeated or forwarded text)')
     .option('--near-threshold <jaccard>', 'with --dedupe: word-shingle Jaccard similarity that counts as a near duplicate', '0.8')
@@ -74,6 +76,7 @@ export function registerImport(program: Command): void {
       if (threshold > 1) throw usageError(`--near-threshold \`${String(opts.nearThreshold)}\` must lie between 0 and 1`);
       const dedupe: DedupeOptions | undefined = opts.dedupe ? { threshold } : undefined;
       const mergeBurstMinutes = positiveNumber('--merge-burst', opts.mergeBurst);
+      const window = timeWindow(Date.now(), opts.timeWindow as string | undefined);
       const result = await runImport({
         source: {
           format,
@@ -94,8 +97,9 @@ export function registerImport(program: Command): void {
           timeFormat: opts.timeFormat as string | undefined,
           dstGap: opts.dstGap as WallClockPolicy,
           dstOverlap: opts.dstOverlap as WallClockPolicy,
+          window,
         },
-        steps: { ...(dedupe ? { dedupe } : {}), ...(mergeBurstMinutes !== undefined ? { mergeBurstMinutes } : {}), ...(redact ? { redact } : {}) },
+        steps: { window, ...(dedupe ? { dedupe } : {}), ...(mergeBurstMinutes !== undefined ? { mergeBurstMinutes } : {}), ...(redact ? { redact } : {}) },
         out: String(opts.out),
         ...(pseudonyms ? { pseudonyms } : {}),
         redactMessages: redactor,

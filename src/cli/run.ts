@@ -28,6 +28,7 @@ export function registerRun(program: Command): void {
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;
       process.stderr.write(`series: ${s.persons} persons, ${s.bins} bins, ${s.observed} observed\n`);
+      for (const warning of s.warnings) process.stderr.write(`warning: series: ${warning}\n`);
       const seriesRejected = Object.values(s.rejected).reduce((a, b) => a + b, 0);
       if (seriesRejected > 0) process.stderr.write(`series: ${seriesRejected} scores rows not used: see ${relative(process.cwd(), s.rejectsPath)}\n`);
       for (const [name, stage] of Object.entries(result.stages)) process.stderr.write(`${name}: ${stage.outputs.length} files\n`);

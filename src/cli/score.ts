@@ -10,16 +10,9 @@ import { createPseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { restoreJitBudget } from './jit-budget.js';
 import { SHARD_HELP, shardFrom } from './shard-option.js';
-import { addTimeOptions, delimiterFrom, parseMaxRejects, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
+import { addTimeOptions, delimiterFrom, parseMaxRejects, parseWorkers, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
-
-/** `--workers`: `auto` or a whole number from 0 to 16. */
-function parseWorkers(value: string): number | 'auto' {
-  if (value === 'auto') return 'auto';
-  if (!/^\d+$/.test(value) || Number(value) > 16) throw usageError(`--workers \`${value}\` must be auto or a whole number from 0 to 16.`);
-  return Number(value);
-}
 
 /** `lexichron score INPUT... --lexicon NAME_OR_PATH... --out FILE` */
 export function registerScore(program: Command): void {

@@ -1,3 +1,4 @@
+import { isCalendarDate } from '../ingest/is-calendar-date.js';
 import { Option, type Command } from 'commander';
 import { usageError } from '../errors.js';
 import type { BinReducer } from '../series/bin-accumulator.js';
@@ -19,7 +20,9 @@ export function addSeriesOptions(command: Command): Command {
     .option('--windows <file>', 'per-person study windows: CSV with person, from, to (local dates); bins outside are marked outside_window')
     .option('--zones <file>', 'the zone table used when scoring (person, zone[, from]): days are laid out in the zone in force, also on days without entries')
     .option('--from <date>', 'first local date of a common grid for everyone (YYYY-MM-DD)')
-    .option('--to <date>', 'last local date of the common grid (YYYY-MM-DD)');
+    .option('--to <date>', 'last local date of the common grid (YYYY-MM-DD)')
+    .option('--max-bins <n>', 'most bins one person\'s series may have; more stops with the person and the entries at the ends of their series (a stray timestamp)', '100000')
+    .option('--warn-span-days <n>', 'warn when a person\'s entries span more days than this', '730');
 }
 
 function wholeNumber(value: unknown, option: string, min = 0): number {
@@ -30,7 +33,7 @@ function wholeNumber(value: unknown, option: string, min = 0): number {
 
 function date(value: unknown, option: string): number {
   const text = String(value);
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(text) || Number.isNaN(Date.parse(`${text}T00:00:00Z`))) throw usageError(`${option} \`${text}\` is not a date YYYY-MM-DD.`);
+  if (!isCalendarDate(text)) throw usageError(`${option} \`${text}\` is not a date YYYY-MM-DD.`);
   return dayNumberOfDate(text);
 }
 
@@ -52,7 +55,7 @@ export function parseReducers(spec: string | undefined, columns?: readonly strin
 }
 
 /** Series options (without reducers) from parsed commander options. */
-export function seriesOptionsFrom(opts: Record<string, unknown>): Omit<SeriesOptions, 'reducers'> {
+export function seriesOptionsFrom(opts: Record<string, unknown>): Omit<SeriesOptions, 'reducers'> & { maxBins: number; warnSpanDays: number } {
   const span = opts.from !== undefined || opts.to !== undefined ? { from: date(opts.from, '--from'), to: date(opts.to, '--to') } : undefined;
   if ((opts.from === undefined) !== (opts.to === undefined)) throw usageError('--from and --to go together: give both dates of the common grid.');
   if (span && span.from > span.to) throw usageError('--from must not be after --to.');
@@ -65,5 +68,7 @@ export function seriesOptionsFrom(opts: Record<string, unknown>): Omit<SeriesOpt
     maxFill: wholeNumber(opts.maxFill ?? 1, '--max-fill'),
     detrend: opts.detrend === true,
     span,
+    maxBins: wholeNumber(opts.maxBins ?? 100_000, '--max-bins', 1),
+    warnSpanDays: wholeNumber(opts.warnSpanDays ?? 730, '--warn-span-days', 1),
   };
 }

@@ -4,7 +4,6 @@ import { runSeries } from '../io/run-series.js';
 import { readWindowsFile } from '../io/read-windows-file.js';
 import { readZoneFile } from '../io/read-zone-file.js';
 import { zoneOnDay } from '../series/zone-on-day.js';
-import { mergeDataPackage } from '../io/merge-data-package.js';
 import { SHARD_HELP, shardFrom } from './shard-option.js';
 import { addSeriesOptions, parseReducers, seriesOptionsFrom } from './series-options.js';
 
@@ -31,8 +30,9 @@ export function registerSeries(program: Command): void {
       ...(shard ? { shard } : {}),
       reducers: typeof reducers === 'string' ? undefined : reducers,
       allReducer: typeof reducers === 'string' ? reducers : undefined,
+      dataPackage: { path: join(dirname(String(opts.out)), 'datapackage.json'), name: 'lexichron-series', title: 'lexichron series' },
     });
-    await mergeDataPackage(join(dirname(String(opts.out)), 'datapackage.json'), 'lexichron-series', 'lexichron series', result.resources);
+    for (const warning of result.warnings) process.stderr.write(`warning: ${warning}\n`);
     if (opts.parquet) process.stderr.write(`parquet: ${await (await import('../io/write-parquet.js')).writeParquet(result.longPath, 'series')}\n`);
     const missing = Object.entries(result.missing).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
     const rejected = Object.entries(result.rejected);

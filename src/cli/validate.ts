@@ -25,6 +25,7 @@ export function registerValidate(program: Command): void {
     .requiredOption('-r, --ratings <file>', 'self-reports: CSV, TSV, JSON Lines or JSON with person, time and rating columns')
     .requiredOption('-o, --out <dir>', 'folder for the validation tables, validation.json and datapackage.json')
     .option('--rating <column>', 'a rating column to validate (repeatable or comma-separated; default: every column but person, time, zone, id)', collect)
+    .option('--missing <codes>', 'missing-value codes of the rating columns, comma-separated (e.g. NA,-99): read as missing, not as errors')
     .option('--scale <scales>', 'declared scale of each rating, NAME=MIN:MAX, comma-separated (e.g. mood=0:100,calm=1:7; *=1:7 for all); values outside are rejected')
     .option('--score <column>', 'a text score column to validate (repeatable or comma-separated; default: all)', collect)
     .addOption(new Option('--align <how>', 'pair by the series\' bins, or by the text written in a window before each self-report').choices(['bins', 'window']).default('bins'))
@@ -35,7 +36,8 @@ export function registerValidate(program: Command): void {
     .option('--replicates <n>', 'bootstrap resamples of persons (0 skips the bootstrap)', '2000')
     .option('--min-pairs <n>', 'fewest pairs for a person\'s own correlation', '10')
     .option('--reliability <r>', 'target reliability for the recommended --min-words', '0.7')
-    .addOption(new Option('--model-inference <how>', 'intervals of the mixed model\'s fixed effects').choices(['between-within-t', 'wald-z']).default('between-within-t'));
+    .addOption(new Option('--model-inference <how>', 'intervals of the mixed model\'s fixed effects').choices(['between-within-t', 'wald-z']).default('between-within-t'))
+    .addOption(new Option('--random-slopes <when>', 'let each person\'s within-person slope vary in the mixed model: auto (when the likelihood-ratio test favours it), always or never').choices(['auto', 'always', 'never']).default('auto'));
   addTimeOptions(command);
   command.action(async (series: string | undefined, opts: Record<string, unknown>) => {
     const reliability = Number(opts.reliability);
@@ -52,6 +54,7 @@ export function registerValidate(program: Command): void {
       zones,
       time: timeOptionsFrom(opts),
       ratingColumns: opts.rating as string[] | undefined,
+      missing: opts.missing !== undefined ? String(opts.missing).split(',') : undefined,
       scales: String(opts.scale),
       scoreColumns: opts.score as string[] | undefined,
       out: String(opts.out),
@@ -64,6 +67,7 @@ export function registerValidate(program: Command): void {
         minPairs: positiveInteger('--min-pairs', opts.minPairs),
         reliability,
         inference: opts.modelInference as 'between-within-t' | 'wald-z',
+        randomSlopes: opts.randomSlopes as 'auto' | 'always' | 'never',
       },
     });
     await writeFileAtomic(join(String(opts.out), 'datapackage.json'), JSON.stringify(dataPackage('lexichron-validation', 'lexichron validation', result.resources), null, 2) + '\n');
@@ -79,7 +83,10 @@ export function registerValidate(program: Command): void {
       lines.push('', `${score} × ${rating}: ${analysis.verdict.text}`);
       for (const w of analysis.verdict.warnings) lines.push(`  warning (${w.code}): ${w.message}`);
     }
-    for (const rel of result.result.reliability) lines.push('', rel.text);
+    for (const rel of result.result.reliability) {
+      lines.push('', rel.text);
+      if (rel.warning) lines.push(`  warning (min_words_below_reliability): ${rel.warning}`);
+    }
     lines.push('', ...Object.entries(result.files).filter(([, p]) => p).map(([k, p]) => `${k}: ${p}`));
     process.stderr.write(lines.join('\n') + '\n');
   });

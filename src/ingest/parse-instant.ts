@@ -1,18 +1,35 @@
 import { DateTime } from 'luxon';
 import { writeAscii } from '../text/ascii-bytes.js';
+import { inTimeWindow, type TimeWindow } from './time-window.js';
+import { daysInMonth, utcFromFields } from './utc-from-fields.js';
 import { resolveWallClock, zoneOffset, type WallClockPolicy } from './zone-offset.js';
+import { describeValue, omitValue } from '../privacy/describe-value.js';
 
 /** How timestamps are read. */
 export interface TimeOptions {
   /** A luxon format such as `dd/MM/yyyy HH:mm`; when absent, ISO 8601 / RFC 3339 or epoch numbers. */
   format?: string;
-  /** Unit of numeric timestamps: seconds, milliseconds, or `auto` (12 or more integer digits → ms, fewer → seconds). */
-  epoch: 'auto' | 's' | 'ms';
+  /**
+   * Unit of numeric timestamps: seconds, milliseconds, microseconds, nanoseconds, or `auto`, which
+   * tells them apart by magnitude (below 10^11 seconds, below 10^14 milliseconds, below 10^17
+   * microseconds, else nanoseconds; each range holds the years 1973–5138 of its unit).
+   */
+  epoch: EpochUnit;
   /** Spring-forward gap policy for times without an offset. */
   gap: WallClockPolicy;
   /** Fall-back overlap policy for times without an offset. */
   overlap: WallClockPolicy;
+  /**
+   * The plausible times (see timeWindow); a time outside is rejected as `time_outside_window`.
+   * Absent: any time RFC 3339 can write (years 0000–9999) is accepted. The command line and
+   * study runs always set it (default 1970-01-01 to ten years after now).
+   */
+  window?: TimeWindow;
 }
+
+/** Units of numeric timestamps (`us` is microseconds). */
+export type EpochUnit = 'auto' | 's' | 'ms' | 'us' | 'ns';
+export const EPOCH_UNITS: readonly EpochUnit[] = ['auto', 's', 'ms', 'us', 'ns'];
 
 export const DEFAULT_TIME_OPTIONS: TimeOptions = { epoch: 'auto', gap: 'reject', overlap: 'reject' };
 
@@ -22,15 +39,7 @@ export type InstantResult =
   | { ok: false; code: string; message: string };
 
 const RFC3339 = /^(\d{4})-(\d{2})-(\d{2})(?:[Tt ](\d{2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?)?\s*(Z|z|[+-]\d{2}(?::?\d{2})?)?$/;
-const EPOCH = /^-?\d{9,16}(?:\.\d+)?$/;
-
-const MONTH_DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
-
-/** Days in `month` (1–12) of `year` in the proleptic Gregorian calendar. */
-function daysInMonth(year: number, month: number): number {
-  if (month !== 2) return MONTH_DAYS[month - 1] as number;
-  return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28;
-}
+const EPOCH = /^-?\d{9,19}(?:\.\d+)?$/;
 
 function parseOffset(text: string): number {
   if (text === 'Z' || text === 'z') return 0;
@@ -126,7 +135,7 @@ function commonFields(value: string): DateTimeFields | undefined {
 }
 
 function bad(value: string, what: string): InstantResult {
-  return { ok: false, code: 'bad_time', message: `cannot read the time \`${value.slice(0, 60)}\`: ${what}` };
+  return { ok: false, code: 'bad_time', message: `cannot read the time (${describeValue(value)}): ${omitValue(what, value)}` };
 }
 
 /**
@@ -141,14 +150,44 @@ function bad(value: string, what: string): InstantResult {
  * as POSIX time has no leap seconds.
  */
 export function parseInstant(raw: string, zone: string, options: TimeOptions = DEFAULT_TIME_OPTIONS): InstantResult {
+  const result = readInstant(raw, zone, options);
+  if (!result.ok) return result;
+  if (!inTimeWindow(result.instant, undefined)) {
+    return { ok: false, code: 'bad_time', message: 'the time lies outside the years 0000–9999 that RFC 3339 can write (or outside ECMA-262\'s ±8.64e15 ms); check the value and its epoch unit (--epoch)' };
+  }
+  if (!inTimeWindow(result.instant, options.window)) {
+    return { ok: false, code: 'time_outside_window', message: 'the time lies outside the plausible window (by default 1970-01-01 to ten years from today); check the value and its epoch unit (--epoch), or widen the window with --time-window FROM/TO' };
+  }
+  const offsetMinutes = result.offsetMinutes ?? zoneOffset(zone, result.instant);
+  return { ok: true, instant: result.instant, offsetMinutes, hadOffset: result.hadOffset };
+}
+
+/** The epoch milliseconds of a plain number in `unit` (`auto`: by magnitude, see TimeOptions.epoch). */
+export function epochMillis(value: string, unit: EpochUnit): number {
+  const n = Number(value);
+  const size = Math.abs(n);
+  const chosen = unit !== 'auto' ? unit : size < 1e11 ? 's' : size < 1e14 ? 'ms' : size < 1e17 ? 'us' : 'ns';
+  if (chosen === 's') return Math.round(n * 1000);
+  if (chosen === 'ms') return Math.round(n);
+  if (chosen === 'us') return Math.round(n / 1000);
+  // Nanoseconds beyond 2^53 lose precision as a Number: drop the last six digits exactly.
+  const [whole = '0', fraction = ''] = value.replace(/^-/, '').split('.');
+  const sign = value.startsWith('-') ? -1 : 1;
+  const digits = whole.padStart(7, '0');
+  const ms = Number(digits.slice(0, -6));
+  const rest = Number(`0.${digits.slice(-6)}${fraction}`);
+  return sign * (ms + (rest >= 0.5 ? 1 : 0));
+}
+
+type ReadResult = { ok: true; instant: number; offsetMinutes: number | undefined; hadOffset: boolean } | { ok: false; code: string; message: string };
+
+/** parseInstant before the range checks; an epoch number's offset is left undefined (looked up after the checks). */
+function readInstant(raw: string, zone: string, options: TimeOptions): ReadResult {
   const value = raw.trim();
   if (value === '') return { ok: false, code: 'missing_time', message: 'the time is empty; every row needs a time' };
   if (options.format) return parseWithFormat(value, zone, options);
   if (EPOCH.test(value)) {
-    const n = Number(value);
-    const digits = value.replace(/^-/, '').split('.')[0]?.length ?? 0;
-    const ms = options.epoch === 'ms' || (options.epoch === 'auto' && digits >= 12) ? n : n * 1000;
-    return { ok: true, instant: Math.round(ms), offsetMinutes: zoneOffset(zone, Math.round(ms)), hadOffset: true };
+    return { ok: true, instant: epochMillis(value, options.epoch), offsetMinutes: undefined, hadOffset: true };
   }
   const f = commonFields(value) ?? regexFields(value);
   if (f) {
@@ -157,7 +196,9 @@ export function parseInstant(raw: string, zone: string, options: TimeOptions = D
     if (month < 1 || month > 12) return bad(value, `month ${month} is not 1–12`);
     if (day < 1 || day > daysInMonth(year, month)) return bad(value, `day ${day} does not exist in ${year}-${String(month).padStart(2, '0')}`);
     if (hour > 23 || minute > 59 || second > 60) return bad(value, 'the clock time is out of range (hours 00–23, minutes 00–59, seconds 00–60)');
-    const wall = Date.UTC(year, month - 1, day, hour, minute, second, fraction);
+    const start = utcFromFields(year, month, day, hour, minute, second);
+    if (start === undefined) return bad(value, 'the year is outside 0000–9999');
+    const wall = start + fraction; // a fraction may round up to 1000 ms
     if (f.offset !== undefined) {
       // `-00:00` (RFC 3339 section 4.3: UTC, local offset unknown) gives 0, not −0.
       const offset = f.offset === 0 ? 0 : f.offset;
@@ -169,24 +210,26 @@ export function parseInstant(raw: string, zone: string, options: TimeOptions = D
   const iso = DateTime.fromISO(value, { setZone: true, zone: 'UTC' });
   if (iso.isValid) {
     if (/(?:Z|[+-]\d{2}(?::?\d{2})?)$/i.test(value)) return { ok: true, instant: iso.toMillis(), offsetMinutes: iso.offset, hadOffset: true };
-    const wall = Date.UTC(iso.year, iso.month - 1, iso.day, iso.hour, iso.minute, iso.second, iso.millisecond);
+    const wall = utcFromFields(iso.year, iso.month, iso.day, iso.hour, iso.minute, iso.second, iso.millisecond);
+    if (wall === undefined) return bad(value, 'the year is outside 0000–9999');
     return fromWall(wall, zone, options);
   }
   return bad(value, 'expected RFC 3339 such as 2026-03-29T08:15:00+02:00, a local time such as 2026-03-29 08:15, epoch seconds or milliseconds, or pass --time-format');
 }
 
-function fromWall(wall: number, zone: string, options: TimeOptions): InstantResult {
+function fromWall(wall: number, zone: string, options: TimeOptions): ReadResult {
   const resolved = resolveWallClock(wall, zone, options);
   if (!resolved.ok) return resolved;
   return { ok: true, instant: resolved.instant, offsetMinutes: resolved.offsetMinutes, hadOffset: false };
 }
 
-function parseWithFormat(value: string, zone: string, options: TimeOptions): InstantResult {
+function parseWithFormat(value: string, zone: string, options: TimeOptions): ReadResult {
   const format = options.format as string;
   const dt = DateTime.fromFormat(value, format, { zone: 'UTC', setZone: true });
   if (!dt.isValid) return bad(value, `it does not match the format \`${format}\` (${dt.invalidExplanation ?? dt.invalidReason ?? 'no reason given'})`);
   if (/Z{1,3}|ZZZZ/.test(format.replace(/'[^']*'/g, ''))) return { ok: true, instant: dt.toMillis(), offsetMinutes: dt.offset, hadOffset: true };
-  const wall = Date.UTC(dt.year, dt.month - 1, dt.day, dt.hour, dt.minute, dt.second, dt.millisecond);
+  const wall = utcFromFields(dt.year, dt.month, dt.day, dt.hour, dt.minute, dt.second, dt.millisecond);
+  if (wall === undefined) return bad(value, 'the year is outside 0000–9999');
   return fromWall(wall, zone, options);
 }
 
@@ -206,8 +249,14 @@ export function formatUtc(instant: number): string {
   return `${isoWithoutZone(instant)}Z`;
 }
 
-/** Formats an instant as local time with its offset (`2026-03-29T08:15:00.000+02:00`). */
+/**
+ * Formats an instant as local time with its offset (`2026-03-29T08:15:00.000+02:00`). RFC 3339's
+ * `time-numoffset` has whole minutes only, so an offset with seconds (local mean time before a
+ * zone adopted standard time, e.g. +00:19:32 in Amsterdam before 1937) is written rounded to the
+ * minute and the clock time shifted with it: the text still names the exact instant.
+ */
 export function formatLocal(instant: number, offsetMinutes: number): string {
+  offsetMinutes = Math.round(offsetMinutes);
   const wall = instant + offsetMinutes * 60000;
   const local = Number.isInteger(wall) ? isoWithoutZone(wall) : new Date(wall).toISOString().slice(0, 23);
   return local + offsetText(offsetMinutes);
@@ -265,6 +314,7 @@ export function writeUtcTime(buffer: Uint8Array, at: number, instant: number): n
 
 /** Writes formatLocal(instant, offsetMinutes) as ASCII bytes into `buffer` at `at` (at most 32); returns where it ended. */
 export function writeLocalTime(buffer: Uint8Array, at: number, instant: number, offsetMinutes: number): number {
+  offsetMinutes = Math.round(offsetMinutes);
   const end = writeIsoWithoutZone(buffer, at, instant + offsetMinutes * 60000);
   if (end === undefined) return writeAscii(buffer, at, formatLocal(instant, offsetMinutes));
   return writeAscii(buffer, end, offsetText(offsetMinutes));

@@ -3,10 +3,11 @@ import { open, readFile } from 'node:fs/promises';
 import { basename, extname } from 'node:path';
 import { createInterface } from 'node:readline';
 import { Readable } from 'node:stream';
-import { StringDecoder } from 'node:string_decoder';
 import Papa from 'papaparse';
 import { inputError, usageError } from '../errors.js';
 import type { Diagnostic, SourceRef } from '../types.js';
+import { lineBreakState, normalizeLineBreaks } from './normalize-line-breaks.js';
+import { textDecoder, textEncoding } from './text-encoding.js';
 
 /** The table formats lexichron reads. */
 export type TableFormat = 'csv' | 'tsv' | 'jsonl' | 'json';
@@ -79,20 +80,21 @@ export async function* readRecordBatches(path: string, options: ReadRecordsOptio
 }
 
 /**
- * The text of a file in chunks as it is read (UTF-8; a character split between chunks is
- * joined, invalid bytes become U+FFFD, as for a stream read with encoding `utf8`), handing the
- * bytes to `onBytes` on the way.
+ * The text of a file in chunks as it is read (UTF-8, or UTF-16 when textEncoding finds it in the
+ * first chunk; a character split between chunks is joined, invalid bytes become U+FFFD), handing
+ * the bytes to `onBytes` on the way.
  */
 async function* readTextChunks(path: string, onBytes: ((bytes: Buffer) => void) | undefined): AsyncGenerator<string> {
   const stream = createReadStream(path, { highWaterMark: 1 << 16 });
-  const decoder = new StringDecoder('utf8');
+  let decoder: ReturnType<typeof textDecoder> | undefined;
   try {
     for await (const bytes of stream as AsyncIterable<Buffer>) {
       onBytes?.(bytes);
+      decoder ??= textDecoder(textEncoding(bytes));
       const text = decoder.write(bytes);
       if (text !== '') yield text;
     }
-    const rest = decoder.end();
+    const rest = decoder?.end() ?? '';
     if (rest !== '') yield rest;
   } finally {
     stream.destroy();
@@ -118,10 +120,12 @@ function stripBom(text: string): string {
   return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
 }
 
+/** Line breaks inside the fields of a row: LF, CRLF and a lone CR count one each. */
 function countNewlines(fields: readonly string[]): number {
   let n = 0;
   for (const field of fields) {
     for (let i = field.indexOf('\n'); i !== -1; i = field.indexOf('\n', i + 1)) n++;
+    for (let i = field.indexOf('\r'); i !== -1; i = field.indexOf('\r', i + 1)) if (field[i + 1] !== '\n') n++;
   }
   return n;
 }
@@ -142,16 +146,19 @@ function fieldProblem(fields: readonly string[], maxField: number): { code: stri
 const MAX_ROW_CHARS = 64 * 1024 * 1024;
 
 /**
- * The line break of delimited text, judged outside quoted fields: `\r\n`, `\n` or `\r`;
- * undefined while `text` holds no line break yet (unless `final`).
+ * Throws when two header cells hold the same name (RFC 4180 section 2 rule 3: the header names
+ * the fields; with a name twice, one column would silently hide the other). Empty cells, as left
+ * by trailing delimiters, may repeat. The message gives positions, never the names.
  */
-export function guessLineBreak(text: string, final = false): '\n' | '\r' | '\r\n' | undefined {
-  const outside = text.replace(/"[^"]*"?/g, '');
-  const n = outside.indexOf('\n');
-  const r = outside.indexOf('\r');
-  if (n === -1 && (r === -1 || (r === outside.length - 1 && !final))) return final ? '\n' : undefined;
-  if (r !== -1 && (n === -1 || r < n)) return outside[r + 1] === '\n' ? '\r\n' : '\r';
-  return '\n';
+function assertUniqueColumns(header: readonly string[], path: string, line: number): void {
+  const seen = new Map<string, number>();
+  for (let i = 0; i < header.length; i++) {
+    const name = header[i] as string;
+    if (name === '') continue;
+    const earlier = seen.get(name);
+    if (earlier !== undefined) throw inputError(`Cannot read \`${path}\`: the header on line ${line} gives columns ${earlier + 1} and ${i + 1} the same name; rename one of them so that every column has its own name.`);
+    seen.set(name, i);
+  }
 }
 
 /**
@@ -166,8 +173,8 @@ async function* readDelimited(path: string, delimiter: string, maxField: number,
   const chunks = readTextChunks(path, onBytes);
   let header: string[] | undefined;
   let line = 1;
-  let newline: '\n' | '\r' | '\r\n' | undefined;
   let pending = '';
+  const breaks = lineBreakState();
   let retryAt = 0;
   let first = true;
 
@@ -184,6 +191,7 @@ async function* readDelimited(path: string, delimiter: string, maxField: number,
       if (isBlank && !quoteError) continue;
       if (!header) {
         header = data.map((h) => h.trim());
+        assertUniqueColumns(header, path, start);
         items.push({ kind: 'header', columns: header, source: { file, line: start } });
         continue;
       }
@@ -209,11 +217,10 @@ async function* readDelimited(path: string, delimiter: string, maxField: number,
 
   try {
     for await (const chunk of chunks) {
-      pending += first ? stripBom(chunk) : chunk;
+      pending += normalizeLineBreaks(first ? stripBom(chunk) : chunk, delimiter, breaks);
       first = false;
-      newline ??= guessLineBreak(pending);
-      if (newline === undefined || pending.length < retryAt) continue;
-      const parsed = new Papa.Parser({ delimiter, newline }).parse(pending, 0, true);
+      if (pending.length < retryAt) continue;
+      const parsed = new Papa.Parser({ delimiter, newline: '\n' }).parse(pending, 0, true);
       const cursor = parsed.meta.cursor;
       pending = pending.slice(cursor);
       retryAt = cursor === 0 ? pending.length * 2 : 0;
@@ -223,8 +230,9 @@ async function* readDelimited(path: string, delimiter: string, maxField: number,
       const items = emit(parsed.data as string[][], parsed.errors);
       if (items.length > 0) yield items;
     }
+    pending += normalizeLineBreaks('', delimiter, breaks, true);
     if (pending !== '') {
-      const parsed = new Papa.Parser({ delimiter, newline: newline ?? guessLineBreak(pending, true) }).parse(pending, 0, false);
+      const parsed = new Papa.Parser({ delimiter, newline: '\n' }).parse(pending, 0, false);
       pending = '';
       const items = emit(parsed.data as string[][], parsed.errors);
       if (items.length > 0) yield items;
@@ -235,8 +243,35 @@ async function* readDelimited(path: string, delimiter: string, maxField: number,
   }
 }
 
-function toRecord(value: unknown): Record<string, string> | undefined {
+/**
+ * Where JSON.parse stopped, from its error (` at character 13`), or nothing: its message is not
+ * shown, since V8 quotes the text it could not read (a participant's words).
+ */
+function jsonErrorPlace(error: unknown): string {
+  const position = /position (\d+)/.exec((error as Error).message);
+  return position ? ` at character ${Number(position[1]) + 1}` : '';
+}
+
+
+/** A JSON value nested deeper than this (objects and arrays) makes its row `bad_json`: no mapped field is that deep. */
+const MAX_JSON_DEPTH = 64;
+
+/** True when `value` holds objects or arrays nested more than `limit` deep (checked without recursion). */
+function nestedDeeper(value: unknown, limit: number): boolean {
+  const stack: Array<[unknown, number]> = [[value, 1]];
+  while (stack.length > 0) {
+    const [v, depth] = stack.pop() as [unknown, number];
+    if (v === null || typeof v !== 'object') continue;
+    if (depth > limit) return true;
+    for (const child of Object.values(v as object)) if (child !== null && typeof child === 'object') stack.push([child, depth + 1]);
+  }
+  return false;
+}
+
+/** The fields of a JSON object as text (nested values as JSON); 'deep' when nested beyond MAX_JSON_DEPTH; undefined when not an object. */
+function toRecord(value: unknown): Record<string, string> | 'deep' | undefined {
   if (value === null || typeof value !== 'object' || Array.isArray(value)) return undefined;
+  if (nestedDeeper(value, MAX_JSON_DEPTH)) return 'deep';
   const record: Record<string, string> = {};
   for (const [key, v] of Object.entries(value as Record<string, unknown>)) {
     if (v === null || v === undefined) record[key] = '';
@@ -245,6 +280,8 @@ function toRecord(value: unknown): Record<string, string> | undefined {
   }
   return record;
 }
+
+const DEEP_JSON_MESSAGE = `the line holds JSON nested more than ${MAX_JSON_DEPTH} levels deep; flatten the object so that each entry's fields are at most a few levels deep`;
 
 /** Reads JSON Lines: one object per line; blank lines are skipped, bad lines rejected. */
 async function* readJsonLines(path: string, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
@@ -269,10 +306,14 @@ async function* readJsonLines(path: string, maxField: number, onBytes?: (bytes: 
     try {
       parsed = JSON.parse(text);
     } catch (error) {
-      items.push(reject(file, line, 'bad_json', `the line is not valid JSON (${(error as Error).message}); each line must hold one JSON object`));
+      items.push(reject(file, line, 'bad_json', `the line is not valid JSON${jsonErrorPlace(error)}; each line must hold one JSON object`));
       continue;
     }
     const record = toRecord(parsed);
+    if (record === 'deep') {
+      items.push(reject(file, line, 'bad_json', DEEP_JSON_MESSAGE));
+      continue;
+    }
     if (!record) {
       items.push(reject(file, line, 'bad_json', 'the line holds JSON that is not an object; each line must hold one JSON object such as {"person": …, "time": …, "text": …}'));
       continue;
@@ -297,12 +338,13 @@ async function* readJsonArray(path: string, maxField: number, onBytes?: (bytes: 
   const file = basename(path);
   const bytes = await readFile(path);
   onBytes?.(bytes);
-  const text = stripBom(bytes.toString('utf8'));
+  const decoder = textDecoder(textEncoding(bytes));
+  const text = stripBom(decoder.write(bytes) + decoder.end());
   let parsed: unknown;
   try {
     parsed = JSON.parse(text);
   } catch (error) {
-    throw inputError(`Cannot read \`${path}\`: not valid JSON (${(error as Error).message}); expected an array of objects, or use JSON Lines (.jsonl).`);
+    throw inputError(`Cannot read \`${path}\`: not valid JSON${jsonErrorPlace(error)}; expected an array of objects, or use JSON Lines (.jsonl).`);
   }
   if (!Array.isArray(parsed)) throw inputError(`Cannot read \`${path}\`: the JSON is not an array; expected [ {…}, {…} ] with one object per entry.`);
   let items: RecordItem[] = [{ kind: 'header', columns: [], source: { file, line: 1 } }];
@@ -312,6 +354,10 @@ async function* readJsonArray(path: string, maxField: number, onBytes?: (bytes: 
       items = [];
     }
     const record = toRecord(parsed[i]);
+    if (record === 'deep') {
+      items.push(reject(file, i + 1, 'bad_json', DEEP_JSON_MESSAGE));
+      continue;
+    }
     if (!record) {
       items.push(reject(file, i + 1, 'bad_json', `element ${i + 1} of the array is not an object; each element must be an object such as {"person": …, "time": …, "text": …}`));
       continue;

@@ -1,3 +1,5 @@
+import { isCalendarDate } from './is-calendar-date.js';
+import { utcFromFields } from './utc-from-fields.js';
 import { usageError } from '../errors.js';
 import { isValidZone, zoneOffset } from './zone-offset.js';
 
@@ -24,7 +26,7 @@ export function assertZone(zone: string, where: string): void {
 
 function midnightInstant(date: string, zone: string): number {
   const [y, m, d] = date.split('-').map(Number) as [number, number, number];
-  const wall = Date.UTC(y, m - 1, d);
+  const wall = utcFromFields(y, m, d) as number; // checked by isCalendarDate
   const offset = zoneOffset(zone, wall - zoneOffset(zone, wall) * 60000);
   return wall - offset * 60000;
 }
@@ -44,8 +46,8 @@ export function buildZoneTable(
   for (const row of rows) {
     assertZone(row.zone, `Cannot read \`${file}\` on line ${row.line}`);
     const from = row.from?.trim() || undefined;
-    if (from !== undefined && (!/^\d{4}-\d{2}-\d{2}$/.test(from) || Number.isNaN(Date.parse(`${from}T00:00:00Z`)))) {
-      throw usageError(`Cannot read \`${file}\` on line ${row.line}: \`from\` must be a local date YYYY-MM-DD (or empty for the first period), not \`${from}\``);
+    if (from !== undefined && !isCalendarDate(from)) {
+      throw usageError(`Cannot read \`${file}\` on line ${row.line}: \`from\` must be a local date YYYY-MM-DD that exists (or empty for the first period); fix the date on that line`);
     }
     const list = periods.get(row.person) ?? [];
     if (list.some((p) => p.from === from)) {

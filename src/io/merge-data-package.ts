@@ -8,6 +8,11 @@ import { writeFileAtomic } from './atomic-write.js';
  * folder add to one package instead of replacing it.
  */
 export async function mergeDataPackage(path: string, name: string, title: string, resources: readonly TableResource[]): Promise<void> {
+  await writeFileAtomic(path, await mergedDataPackage(path, name, title, resources));
+}
+
+/** The text mergeDataPackage writes (for callers that write it together with other files). */
+export async function mergedDataPackage(path: string, name: string, title: string, resources: readonly TableResource[]): Promise<string> {
   let kept: TableResource[] = [];
   try {
     const existing = JSON.parse(await readFile(path, 'utf8')) as { resources?: TableResource[] };
@@ -17,5 +22,5 @@ export async function mergeDataPackage(path: string, name: string, title: string
   } catch {
     // no package yet (or not JSON): start a new one
   }
-  await writeFileAtomic(path, JSON.stringify(dataPackage(name, title, [...kept, ...resources]), null, 2) + '\n');
+  return JSON.stringify(dataPackage(name, title, [...kept, ...resources]), null, 2) + '\n';
 }

@@ -210,7 +210,7 @@ export async function mergeShards(options: MergeShardsOptions): Promise<RunStudy
   if (!current) throw usageError(`The shards were run on the study file \`${studyFile}\`, which cannot be read now; merge where the shards' study file and inputs are.`);
   if (current.sha256 !== first.studyFile.sha256) throw usageError(`The study file \`${studyFile}\` changed after the shards were run; run every shard again with the study file as it is now.`);
   const study = await readStudy(studyFile);
-  const p = await prepareStudy(study, studyPath, options.env, studyFile);
+  const p = await prepareStudy(study, studyPath, options.env, options.now, studyFile);
   const seed = (first.manifest.parameters.seed as number | undefined) ?? DEFAULT_SEED;
   const finalDir = options.out !== undefined ? resolve(options.out) : resolve(dirname(studyFile), study.out);
   if (shards.some((s) => resolve(s.dir) === finalDir)) throw usageError(`The merge output folder \`${options.out ?? study.out}\` is one of the shard folders; write the merged outputs to a folder of their own.`);

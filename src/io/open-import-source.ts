@@ -1,6 +1,7 @@
 import { basename } from 'node:path';
 import { inputError, usageError } from '../errors.js';
 import { DEFAULT_TIME_OPTIONS, type TimeOptions } from '../ingest/parse-instant.js';
+import type { TimeWindow } from '../ingest/time-window.js';
 import { readRecords } from '../ingest/read-records.js';
 import { isValidZone, type WallClockPolicy } from '../ingest/zone-offset.js';
 import type { ImportItem } from '../ingest/import/import-item.js';
@@ -44,6 +45,8 @@ export interface ImportSourceSpec {
   /** Daylight-saving policies for wall-clock times (default: reject both). */
   dstGap?: WallClockPolicy;
   dstOverlap?: WallClockPolicy;
+  /** chat-table: plausible times (TimeOptions.window); the other formats are checked by importEntries. */
+  window?: TimeWindow;
 }
 
 /** An opened source: its items, streamed, and what was settled on the way. */
@@ -59,7 +62,7 @@ async function settleChatDateOrder(path: string): Promise<{ order: DateOrder; ev
   const seen = new Set<string>();
   for await (const { text } of readDecodedLines(path)) {
     const parsed = parseChatLine(text);
-    if (parsed.kind === 'continuation') continue;
+    if (parsed.kind === 'continuation' || parsed.kind === 'damaged') continue;
     const key = `${parsed.stamp.firstDigits}:${parsed.stamp.parts[0]}/${parsed.stamp.parts[1]}`;
     if (seen.has(key)) continue; // the first two numbers decide; keep memory small on long logs
     seen.add(key);
@@ -94,7 +97,7 @@ export async function openImportSource(spec: ImportSourceSpec): Promise<OpenedIm
     }
     case 'chat-table': {
       const senders = requireSenders(spec);
-      const time: TimeOptions = { ...DEFAULT_TIME_OPTIONS, gap: dst.gap, overlap: dst.overlap, ...(spec.timeFormat ? { format: spec.timeFormat } : {}) };
+      const time: TimeOptions = { ...DEFAULT_TIME_OPTIONS, gap: dst.gap, overlap: dst.overlap, ...(spec.timeFormat ? { format: spec.timeFormat } : {}), ...(spec.window ? { window: spec.window } : {}) };
       const options = { file, person: spec.person, zone: spec.zone, senders, time, senderField: spec.senderField, timeField: spec.timeField, textField: spec.textField };
       return { items: readChatTable(readRecords(spec.path), options) };
     }

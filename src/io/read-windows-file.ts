@@ -1,9 +1,8 @@
+import { isCalendarDate } from '../ingest/is-calendar-date.js';
 import { basename } from 'node:path';
 import { usageError } from '../errors.js';
 import { readRecords } from '../ingest/read-records.js';
 import { dayNumberOfDate } from '../series/local-day.js';
-
-const DATE = /^\d{4}-\d{2}-\d{2}$/;
 
 /**
  * Reads per-person study windows: a CSV/TSV/JSONL file with columns `person`, `from`, `to`
@@ -24,7 +23,7 @@ export async function readWindowsFile(path: string): Promise<Map<string, { from:
     const where = `Cannot read \`${file}\` on line ${item.source.line}`;
     if (person.trim() === '') throw usageError(`${where}: the person is empty.`);
     for (const [name, value] of [['from', from], ['to', to]] as const) {
-      if (!DATE.test(value.trim()) || Number.isNaN(Date.parse(`${value.trim()}T00:00:00Z`))) throw usageError(`${where}: \`${name}\` must be a local date YYYY-MM-DD, not \`${value}\`.`);
+      if (!isCalendarDate(value.trim())) throw usageError(`${where}: \`${name}\` must be a local date YYYY-MM-DD that exists; fix the date on that line.`);
     }
     const window = { from: dayNumberOfDate(from.trim()), to: dayNumberOfDate(to.trim()) };
     if (window.from > window.to) throw usageError(`${where}: the window of \`${person}\` ends before it starts.`);

@@ -2,10 +2,12 @@ import { importEntries, tallyImportItem, type ImportStepOptions } from '../inges
 import { emptyImportReconciliation, type ImportReconciliation } from '../ingest/import/import-item.js';
 import { entryLine } from '../ingest/import/entry-line.js';
 import type { Pseudonymizer } from '../privacy/create-pseudonymizer.js';
+import { inputError } from '../errors.js';
 import { csvRow } from '../report/csv.js';
 import { TOOL_VERSION } from '../version.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
 import { openImportSource, type ImportSourceSpec } from './open-import-source.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** Everything `lexichron import` needs. */
 export interface RunImportOptions {
@@ -49,22 +51,27 @@ export async function runImport(options: RunImportOptions): Promise<RunImportRes
   const reconciliation = emptyImportReconciliation();
   const entries = await openAtomicLineWriter(entriesPath);
   const rejects = await openAtomicLineWriter(rejectsPath);
+  let firstNotKept: { line: number | undefined; reason: string } | undefined;
   try {
     await rejects.write(csvRow(['file', 'line', 'code', 'message']));
     for await (const item of importEntries(opened.items, options.steps)) {
       tallyImportItem(reconciliation, item);
+      if (item.kind !== 'entry' && firstNotKept === undefined) {
+        firstNotKept = item.kind === 'reject' ? { line: item.diagnostic.source?.line, reason: item.diagnostic.code } : { line: item.source.line, reason: item.reason };
+      }
       if (item.kind === 'entry') {
         const entry = options.pseudonyms ? { ...item.entry, id: options.pseudonyms.entryId(item.entry.id), pseudonymKey: options.pseudonyms.keyCheck } : item.entry;
         await entries.write(entryLine(entry));
       } else if (item.kind === 'reject') {
         const d = item.diagnostic;
-        const message = options.aggregatesOnly ? d.code : options.redactMessages(d.message);
+        const message = options.aggregatesOnly ? d.code : diagnosticText(options.redactMessages(d.message));
         const file = d.source ? (options.pseudonyms ? 'input' : d.source.file) : '';
         await rejects.write(csvRow([file, d.source ? String(d.source.line) : '', d.code, message]));
       }
       if (options.onProgress && reconciliation.read % 1000 === 0) options.onProgress(reconciliation.read);
     }
-    await entries.commit();
+    if (reconciliation.kept === 0) await entries.abort();
+    else await entries.commit();
     await rejects.commit();
   } catch (error) {
     await entries.abort();
@@ -82,5 +89,32 @@ export async function runImport(options: RunImportOptions): Promise<RunImportRes
     reconciliation,
   };
   await writeFileAtomic(metaPath, `${JSON.stringify(meta, null, 2)}\n`);
+  if (reconciliation.kept === 0) throw inputError(nothingKeptMessage(options.source, reconciliation.read, firstNotKept, rejectsPath));
   return { reconciliation, entriesPath, rejectsPath, metaPath, ...(opened.dateOrder ? { dateOrder: opened.dateOrder } : {}) };
+}
+
+/** What to try when an import of `format` keeps nothing, by the reason of the first row not kept. */
+function suggestion(format: string, reason: string | undefined): string {
+  if (reason === 'third_party') {
+    return format === 'mbox' ? 'check --address (every address the participant sends from)' : 'check --sender (the participant\'s name exactly as the export writes it)';
+  }
+  if (reason === 'time_outside_window') return 'check the dates, or widen the plausible window with --time-window FROM/TO';
+  switch (format) {
+    case 'diary':
+      return reason === 'diary_before_first_heading' || reason === undefined
+        ? 'no line matched the heading pattern: give the pattern of your date headings with --heading (its first group holding the date) and their format with --date-format'
+        : 'check --date-format (and --entry-time-format) against the headings';
+    case 'chat-lines':
+      return 'check --sender and --date-order, and that each message starts with a date and time';
+    case 'chat-table':
+      return 'check --sender, --sender-field, --time-field, --text-field and --time-format';
+    default:
+      return 'check --address and that the file is an mbox archive (messages starting with "From " lines)';
+  }
+}
+
+/** The error of an import that kept no entry: counts and the first row not kept by its position and code, never its text. */
+function nothingKeptMessage(source: ImportSourceSpec, read: number, first: { line: number | undefined; reason: string } | undefined, rejectsPath: string): string {
+  const where = first ? ` The first row not kept is on line ${first.line ?? '?'} (${first.reason}).` : ' The file held nothing to read.';
+  return `Cannot import \`${source.path}\`: no entry was kept (${read} read).${where} To fix: ${suggestion(source.format, first?.reason)}. Reasons per row are in \`${rejectsPath}\`; no entries file was written.`;
 }

@@ -18,6 +18,7 @@ import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, Scored
 import { TOOL_VERSION } from '../version.js';
 import { shardFilter, type ShardSpec } from '../shard/shard-of-person.js';
 import { openAtomicLineWriter, writeFileAtomic, type AtomicLineWriter } from './atomic-write.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** One input file with how to read it. */
 export interface ScoreInput {
@@ -170,7 +171,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     const addReject = async (d: Diagnostic): Promise<void> => {
       reconciliation.rejected[d.code] = (reconciliation.rejected[d.code] ?? 0) + 1;
       const file = pseudonyms && d.source ? inputName : (d.source?.file ?? '');
-      await rejects.write(csvRow([file, String(d.source?.line ?? ''), d.stage, d.code, d.message]));
+      await rejects.write(csvRow([file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
     };
     if (pool) pool.setLexicons(options.lexicons);
     else pool = createScorePool(options.lexicons, await scoreWorkerCount(options.inputs.map((input) => input.path), options.workers));

@@ -1,10 +1,11 @@
+import { inTimeWindow } from '../ingest/time-window.js';
 import { readFile } from 'node:fs/promises';
 import { basename, dirname } from 'node:path';
 import { inputError, usageError } from '../errors.js';
 import { readRecords } from '../ingest/read-records.js';
 import { formatLocal } from '../ingest/parse-instant.js';
 import { isValidZone, zoneOffset } from '../ingest/zone-offset.js';
-import { csvRow } from '../report/csv.js';
+import { csvRow, restoreCell } from '../report/csv.js';
 import { tableResource, type TableResource } from '../report/data-dictionary.js';
 import { formatNumber } from '../report/format-number.js';
 import { seriesHeader, seriesRow, type SeriesLayout } from '../report/series-rows.js';
@@ -13,10 +14,13 @@ import type { BinReducer } from '../series/bin-accumulator.js';
 import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesOptions } from '../series/build-series.js';
 import { dateOfDayNumber } from '../series/local-day.js';
 import type { Diagnostic } from '../types.js';
-import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
+import { openAtomicLineWriter } from './atomic-write.js';
+import { mergedDataPackage } from './merge-data-package.js';
 import { fileDigest } from './run-score.js';
 import { TOOL_VERSION } from '../version.js';
 import { shardFilter, type ShardSpec } from '../shard/shard-of-person.js';
+import { describeValue } from '../privacy/describe-value.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** Score column metadata from a scores sidecar (`scores.csv.meta.json`). */
 export interface ScoreColumnMeta {
@@ -36,7 +40,18 @@ export interface RunSeriesOptions extends Omit<SeriesOptions, 'reducers'> {
   columns?: string[];
   /** Bin only this shard's persons (see shardOfPerson); other persons' rows are counted as `otherShard`. */
   shard?: ShardSpec;
+  /** Most bins one person's series may have (default 100,000); more stops the run, naming the person and the entries at the ends. */
+  maxBins?: number;
+  /** A person whose entries span more days than this gets a warning (default 730). */
+  warnSpanDays?: number;
+  /** A datapackage.json to add the series tables to (mergeDataPackage), written with the other outputs. */
+  dataPackage?: { path: string; name: string; title: string };
 }
+
+/** Default of RunSeriesOptions.maxBins: 100,000 bins is over 11 years of hourly bins (common practice, no source). */
+export const DEFAULT_MAX_BINS = 100_000;
+/** Default of RunSeriesOptions.warnSpanDays: two years. */
+export const DEFAULT_WARN_SPAN_DAYS = 730;
 
 export interface RunSeriesResult {
   longPath: string;
@@ -54,6 +69,31 @@ export interface RunSeriesResult {
   resources: TableResource[];
   /** Only with a shard: scores rows of persons of other shards. */
   otherShard?: number;
+  /** Warnings for the user: persons whose entries span more than warnSpanDays (positions and counts only). */
+  warnings: string[];
+}
+
+/** An entry at one end of a person's series: its id and the line of the scores file. */
+interface EntryEnd {
+  instant: number;
+  id: string;
+  line: number;
+}
+
+/** How an entry at an end is named in a message: its entry id and scores line (never text). */
+function endName(end: EntryEnd, file: string): string {
+  return `\`${end.id}\` (${formatUtcDate(end.instant)}, line ${end.line} of ${file})`;
+}
+
+function formatUtcDate(instant: number): string {
+  return new Date(instant).toISOString().slice(0, 10);
+}
+
+/** Bins of a grid of `days` local days (an upper bound: a 25-hour day has one more sub-daily bin). */
+function binsOfDays(days: number, bin: RunSeriesOptions['bin']): number {
+  if (bin.minutes > 0) return days * Math.ceil(1500 / bin.minutes);
+  if (bin.week) return Math.ceil((days + 6) / 7);
+  return Math.ceil(days / Math.max(1, bin.days));
 }
 
 /** Default reducer: word-weighted mean for `count` and `rating` categories, entry mean for `sum` and VADER. */
@@ -99,9 +139,10 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
   let state: ReturnType<typeof createSeriesState> | undefined;
   const inShard = options.shard ? shardFilter(options.shard) : undefined;
   let otherShard = 0;
+  const ends = new Map<string, { first: EntryEnd; last: EntryEnd }>();
   const reject = async (d: Diagnostic): Promise<void> => {
     rejected[d.code] = (rejected[d.code] ?? 0) + 1;
-    await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, d.message]));
+    await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
   };
   try {
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
@@ -138,15 +179,15 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       const zone = r.zone ?? '';
       const words = Number(r.words);
       if (!isValidZone(zone)) {
-        await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone \`${zone}\`; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
+        await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone ${describeValue(zone, /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/)}; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
         continue;
       }
-      if (!(r.person ?? '').trim() || !Number.isFinite(instant) || !Number.isInteger(words) || words < 0) {
-        const what = !(r.person ?? '').trim() ? 'no person' : !Number.isFinite(instant) ? `time_utc \`${r.time_utc ?? ''}\` is not an RFC 3339 instant` : `words \`${r.words ?? ''}\` is not a whole number ≥ 0`;
+      if (!(r.person ?? '').trim() || !inTimeWindow(instant, undefined) || !Number.isInteger(words) || words < 0) {
+        const what = !(r.person ?? '').trim() ? 'no person' : !inTimeWindow(instant, undefined) ? `time_utc (${describeValue(r.time_utc ?? '')}) is not an RFC 3339 instant with a year 0000–9999` : `words (${describeValue(r.words ?? '')}) is not a whole number ≥ 0`;
         await reject({ code: 'bad_score_row', message: `${what}; the series stage reads rows written by lexichron score`, source: item.source, stage: 'series' });
         continue;
       }
-      if (inShard && !inShard((r.person as string).trim())) {
+      if (inShard && !inShard(restoreCell((r.person as string).trim()))) {
         otherShard++;
         continue;
       }
@@ -156,11 +197,17 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       });
       const matched = nIdx.map((i) => (i >= 0 ? Number(r[(header as string[])[i] as string] ?? 0) || 0 : 0));
       entries++;
-      const placed = addSeriesEntry(state as NonNullable<typeof state>, { person: (r.person as string).trim(), instant, zone, words, values, matched });
+      const person = restoreCell((r.person as string).trim());
+      const here: EntryEnd = { instant, id: restoreCell(r.entry_id ?? ''), line: item.source.line };
+      const end = ends.get(person);
+      if (!end) ends.set(person, { first: here, last: here });
+      else if (instant < end.first.instant) end.first = here;
+      else if (instant > end.last.instant) end.last = here;
+      const placed = addSeriesEntry(state as NonNullable<typeof state>, { person, instant, zone, words, values, matched });
       await events.write(
         csvRow([
-          r.entry_id ?? '',
-          r.person as string,
+          restoreCell(r.entry_id ?? ''),
+          person,
           r.time_utc as string,
           formatLocal(instant, zoneOffset(zone, instant)),
           zone,
@@ -174,9 +221,11 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
     }
     if (!state) throw inputError(`\`${file}\` holds no rows, so there is nothing to bin; check that it is the scores file written by \`lexichron score\` and that scoring kept some entries (see its rejects file).`);
     if (entries === 0) throw inputError(`\`${file}\` holds no scored entries; check the rejects of the score stage.`);
+    const warnings = checkSeriesBounds(state, ends, options, file);
     const layout: SeriesLayout = { scores: metas.map((m) => m.name), matched: nIdx.map((i) => i >= 0), fill: options.fill !== 'none', detrend: options.detrend };
     const long = await openAtomicLineWriter(options.out);
     const wide = await openAtomicLineWriter(sidecars.wide);
+    const staged: Array<Awaited<ReturnType<typeof openAtomicLineWriter>>> = [];
     const missing: Record<string, number> = {};
     let bins = 0;
     let observed = 0;
@@ -219,16 +268,11 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
         }
         await wide.write(csvRow(fields));
       }
-      await long.commit();
-      await wide.commit();
-      await events.commit();
-      await rejects.commit();
       // A sidecar naming what made the series: the scores file (with its hash) and the lexicons
       // (name, version, content hash) recorded by the score stage.
       const scoresDigest = await fileDigest(options.scores);
       const lexicons = await readFile(`${options.scores}.meta.json`, 'utf8').then((t) => (JSON.parse(t) as { lexicons?: unknown }).lexicons, () => undefined);
-      await writeFileAtomic(
-        `${options.out}.meta.json`,
+      const metaText =
         JSON.stringify({
           tool: { name: 'lexichron', version: TOOL_VERSION },
           scores: { path: basename(options.scores), sha256: scoresDigest.sha256, bytes: scoresDigest.bytes },
@@ -237,8 +281,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
           columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
           counts: { persons: persons.length, bins, observed, missing, entries, excludedEntries: state.excludedEntries, rejected, ...(options.shard ? { otherShard } : {}) },
           ...(options.shard ? { shard: options.shard } : {}),
-        }, null, 2) + '\n',
-      );
+        }, null, 2) + '\n';
       const describe = (name: string): string | undefined => {
         const base = name.replace(/@\d+$/, '');
         const m = metas.find((x) => x.name === base);
@@ -251,6 +294,24 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
         tableResource('series-wide', rel(sidecars.wide), wideHeader, describe, 'One row per person; one column per score and within-person time index t.'),
         tableResource('series-events', rel(sidecars.events), ['entry_id', 'person', 'time_utc', 'time_local', 'zone', 'bin_start', 'local_date', 'excluded', 'words', ...layout.scores], describe, 'One row per entry with its exact time and the bin it fell in (for continuous-time models).'),
       ];
+      // Every output is complete in a temporary file before the first is renamed into place: a
+      // failure up to here leaves the previous outputs (if any) as they were.
+      const packageText = options.dataPackage ? await mergedDataPackage(options.dataPackage.path, options.dataPackage.name, options.dataPackage.title, resources) : undefined;
+      const meta = await openAtomicLineWriter(`${options.out}.meta.json`);
+      staged.push(meta);
+      await meta.write(metaText);
+      let pkg: Awaited<ReturnType<typeof openAtomicLineWriter>> | undefined;
+      if (options.dataPackage && packageText !== undefined) {
+        pkg = await openAtomicLineWriter(options.dataPackage.path);
+        staged.push(pkg);
+        await pkg.write(packageText);
+      }
+      await long.commit();
+      await wide.commit();
+      await events.commit();
+      await rejects.commit();
+      await meta.commit();
+      await pkg?.commit();
       return {
         longPath: options.out,
         widePath: sidecars.wide,
@@ -266,10 +327,12 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
         columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
         resources,
         ...(options.shard ? { otherShard } : {}),
+        warnings,
       };
     } catch (error) {
       await long.abort();
       await wide.abort();
+      for (const writer of staged) await writer.abort();
       throw error;
     }
   } catch (error) {
@@ -277,4 +340,31 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
     await rejects.abort();
     throw error;
   }
+}
+
+/**
+ * Checks each person's grid before any row is built: throws when a series would have more than
+ * `maxBins` bins (a stray timestamp decades away makes hundreds of thousands), naming the person
+ * and the entries at the ends of their series; returns a warning for each person whose entries
+ * span more than `warnSpanDays` days.
+ */
+function checkSeriesBounds(state: ReturnType<typeof createSeriesState>, ends: ReadonlyMap<string, { first: EntryEnd; last: EntryEnd }>, options: RunSeriesOptions, file: string): string[] {
+  const maxBins = options.maxBins ?? DEFAULT_MAX_BINS;
+  const warnSpan = options.warnSpanDays ?? DEFAULT_WARN_SPAN_DAYS;
+  const warnings: string[] = [];
+  for (const [person, bins] of [...state.persons.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) {
+    const own = options.windows?.get(person);
+    const from = Math.min(options.span?.from ?? own?.from ?? bins.firstDay, bins.firstDay);
+    const to = Math.max(options.span?.to ?? own?.to ?? bins.lastDay, bins.lastDay);
+    const days = to - from + 1;
+    const end = ends.get(person);
+    const at = end ? ` The entries at its ends are ${endName(end.first, file)} and ${endName(end.last, file)}.` : '';
+    const needed = binsOfDays(days, options.bin);
+    if (needed > maxBins) {
+      throw inputError(`Cannot build the series of person \`${person}\`: its grid spans ${days} days, up to ${needed} bins of ${options.bin.text}, more than --max-bins ${maxBins}.${at} Check those times for a stray timestamp (or a wrong --epoch), leave the entry out, or raise --max-bins. No series file was written.`);
+    }
+    const span = bins.lastDay - bins.firstDay + 1;
+    if (span > warnSpan) warnings.push(`person \`${person}\`: the entries span ${span} days, more than --warn-span-days ${warnSpan}.${at} Check them for a stray timestamp.`);
+  }
+  return warnings;
 }

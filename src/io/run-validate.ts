@@ -1,4 +1,6 @@
+import { readFile } from 'node:fs/promises';
 import { basename, join } from 'node:path';
+import type { BinReducer } from '../series/bin-accumulator.js';
 import { inputError, usageError } from '../errors.js';
 import { parseColumnMapping, resolveColumns, type ColumnMapping } from '../ingest/column-mapping.js';
 import { DEFAULT_TIME_OPTIONS, formatLocal, type TimeOptions } from '../ingest/parse-instant.js';
@@ -36,6 +38,9 @@ const VALIDATION_COLUMNS: Record<string, string> = {
   note: 'Why a value is empty, or a caution', person: 'Person id', pairs: 'Pairs of the person', r: 'Pearson correlation',
   time: 'Local start of the bin, or local time of the self-report', time_utc: 'The same instant in UTC', entries: 'Entries behind the text scores',
   words: 'Words behind the text scores', text_missing: 'Why the text side is missing (empty when observed)', reports: 'Self-reports averaged into the row',
+  half_r: 'Correlation of the two half scores across bins, averaged over the random splits', reliability: 'Split-half reliability of a bin score (Spearman-Brown corrected); empty when not estimable',
+  reliability_low: 'Lower end of the approximate 95% interval of the reliability', reliability_high: 'Upper end of the approximate 95% interval of the reliability',
+  halves_scored_by: 'The series reducer used to score each half (weighted, mean or sum)', splits: 'Random splits averaged',
 };
 
 /** Options of {@link runValidate}. */
@@ -54,6 +59,8 @@ export interface RunValidateOptions {
   time?: TimeOptions;
   /** Rating columns (default: every column but person, time, zone and id). */
   ratingColumns?: string[];
+  /** Missing-value codes of the rating columns (`--missing NA,-99`): read as missing, not as errors. */
+  missing?: readonly string[];
   /** Declared scales, as a map or the `--scale` text. */
   scales: ReadonlyMap<string, RatingScale> | string;
   /** Score columns to validate (default: every score column of the series / event file). */
@@ -81,11 +88,12 @@ export interface RunValidateResult {
 }
 
 /** Reads the self-report file into ratings and diagnostics (row rejects and value rejects). */
-export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales' | 'person' | 'ratingsName'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number }> {
+export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales' | 'person' | 'ratingsName' | 'missing'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number }> {
   const scales = typeof options.scales === 'string' ? parseRatingScales(options.scales) : options.scales;
   const mapping = typeof options.columns === 'string' || options.columns === undefined ? parseColumnMapping(options.columns) : options.columns;
   const time = options.time ?? DEFAULT_TIME_OPTIONS;
   const file = basename(options.ratings);
+  const missing = new Set((options.missing ?? []).map((m) => m.trim()).filter((m) => m !== ''));
   const ratings: Rating[] = [];
   const diagnostics: Diagnostic[] = [];
   let columns: ColumnMapping | undefined;
@@ -116,7 +124,7 @@ export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 
       diagnostics.push({ ...parsed.diagnostic, stage: 'validate' });
       continue;
     }
-    const { values, diagnostics: valueProblems } = ratingValues(item.record, ratingCols, scales, item.source);
+    const { values, diagnostics: valueProblems } = ratingValues(item.record, ratingCols, scales, item.source, missing);
     diagnostics.push(...valueProblems);
     const e = parsed.entry;
     ratings.push({ person: options.person ? options.person(e.person) : e.person, instant: e.instant, zone: e.zone, offsetMinutes: e.offsetMinutes, values, source: item.source });
@@ -173,6 +181,26 @@ async function readEntryScores(path: string): Promise<{ entries: EntryScore[]; c
 }
 
 /**
+ * The series' reducer per score column and its --min-words, from the `.meta.json` the series
+ * stage writes beside the long series; empty when the file is absent or unreadable (the
+ * word-count reliability then scores halves by the word-weighted mean and gives no warning).
+ */
+async function readSeriesMeta(path: string | undefined): Promise<{ reducers?: Record<string, BinReducer>; minWords?: number }> {
+  if (!path) return {};
+  try {
+    const meta = JSON.parse(await readFile(path, 'utf8')) as { options?: { minWords?: unknown }; columns?: { name?: unknown; reducer?: unknown }[] };
+    const reducers: Record<string, BinReducer> = {};
+    for (const c of Array.isArray(meta.columns) ? meta.columns : []) {
+      if (typeof c.name === 'string' && (c.reducer === 'weighted' || c.reducer === 'mean' || c.reducer === 'sum')) reducers[c.name] = c.reducer;
+    }
+    const minWords = meta.options?.minWords;
+    return { reducers, ...(typeof minWords === 'number' && Number.isFinite(minWords) ? { minWords } : {}) };
+  } catch {
+    return {};
+  }
+}
+
+/**
  * Reads the text series (and/or the entry-level file) and the self-reports, runs
  * `validateSeries`, and writes, atomically, into `out`: `validation-statistics.csv` (tidy, every
  * statistic), `validation.json` (the same with verdicts), `validation-pairs.csv` (aligned pairs),
@@ -199,6 +227,7 @@ export async function runValidate(options: RunValidateOptions): Promise<RunValid
     throw inputError(`\`${basename(options.ratings)}\` holds no usable self-reports.${why}`);
   }
   const entries = events?.entries;
+  const meta = await readSeriesMeta(options.series ? `${options.series}.meta.json` : options.events ? `${options.events.replace(/\.events\.csv$/i, '.csv')}.meta.json` : undefined);
   const result = validateSeries(
     {
       bins: series?.bins,
@@ -206,6 +235,8 @@ export async function runValidate(options: RunValidateOptions): Promise<RunValid
       ratings: ratings.ratings,
       scoreColumns,
       ratingColumns: ratings.columns,
+      reducers: meta.reducers,
+      seriesMinWords: meta.minWords,
       label: (r) => formatLocal(r.instant, r.offsetMinutes),
     },
     options.validate,

@@ -49,8 +49,9 @@ export function studyInput(input: StudyInput, path: string, zones: ZoneTable, ti
         timeFormat: input.timeFormat,
         dstGap: time.gap,
         dstOverlap: time.overlap,
+        ...(time.window ? { window: time.window } : {}),
       });
-      return importEntries(opened.items, { ...(input.dedupe ? { dedupe: {} } : {}), ...(input.mergeBurstMinutes !== undefined ? { mergeBurstMinutes: input.mergeBurstMinutes } : {}) });
+      return importEntries(opened.items, { ...(time.window ? { window: time.window } : {}), ...(input.dedupe ? { dedupe: {} } : {}), ...(input.mergeBurstMinutes !== undefined ? { mergeBurstMinutes: input.mergeBurstMinutes } : {}) });
     },
   };
 }

@@ -1,8 +1,9 @@
 import { termNorms } from '../text/tokenize.js';
 import type { LexiconRef } from '../types.js';
 import { lexiconHash } from './lexicon-hash.js';
-import type { Aggregation, Lexicon, NegationRule } from './lexicon-types.js';
+import type { Aggregation, Lexicon, LexiconScoring, NegationRule } from './lexicon-types.js';
 import { isWildcard, MIN_WILDCARD_STEM } from './parse-lexicon.js';
+import { plainWords } from '../text/plain-words.js';
 
 /** What one pattern contributes: a weight to each of its categories (by index). */
 export interface Hit {
@@ -22,7 +23,7 @@ export interface CompiledLexicon {
   ref: LexiconRef;
   lexicon: Lexicon;
   language: string;
-  scoring: 'rules' | 'vader';
+  scoring: LexiconScoring;
   categories: ReadonlyArray<{ name: string; aggregation: Aggregation }>;
   /** Single-token patterns by normalised token. */
   single: ReadonlyMap<string, Hit>;
@@ -43,6 +44,10 @@ export interface CompiledLexicon {
   reflect: number;
   /** For VADER scoring: lower-cased term → valence. */
   valence: ReadonlyMap<string, number>;
+  /** For `plain-words` scoring: lower-cased term (words joined by one space) → its hit. */
+  plain: ReadonlyMap<string, Hit>;
+  /** For `plain-words` scoring: the most words in a term. */
+  plainMaxWords: number;
 }
 
 function addHit(map: Map<string, Hit>, key: string, pattern: string, category: number, weight: number): void {
@@ -55,8 +60,8 @@ function addHit(map: Map<string, Hit>, key: string, pattern: string, category: n
 }
 
 /** The matching tables of a compiled lexicon, built from its terms on first use. */
-type Tables = Pick<CompiledLexicon, 'single' | 'phrases' | 'wildcards' | 'stemLengths' | 'stemPrefixes' | 'starts' | 'valence'>;
-const TABLE_KEYS = ['single', 'phrases', 'wildcards', 'stemLengths', 'stemPrefixes', 'starts', 'valence'] as const;
+type Tables = Pick<CompiledLexicon, 'single' | 'phrases' | 'wildcards' | 'stemLengths' | 'stemPrefixes' | 'starts' | 'valence' | 'plain' | 'plainMaxWords'>;
+const TABLE_KEYS = ['single', 'phrases', 'wildcards', 'stemLengths', 'stemPrefixes', 'starts', 'valence', 'plain', 'plainMaxWords'] as const;
 
 function buildTables(lexicon: Lexicon): Tables {
   const categoryIndex = new Map(lexicon.categories.map((c, i) => [c.name, i]));
@@ -64,9 +69,18 @@ function buildTables(lexicon: Lexicon): Tables {
   const wildcards = new Map<string, Hit>();
   const phraseMap = new Map<string, Map<string, Phrase>>();
   const valence = new Map<string, number>();
+  const plain = new Map<string, Hit>();
+  let plainMaxWords = 0;
   for (const row of lexicon.terms) {
     if (row.status !== 'accepted') continue;
     const c = categoryIndex.get(row.category) as number;
+    if (lexicon.scoring === 'plain-words') {
+      const words = plainWords(row.term.toLocaleLowerCase(lexicon.language));
+      if (words.length === 0) continue;
+      addHit(plain, words.join(' '), row.term, c, row.weight);
+      plainMaxWords = Math.max(plainMaxWords, words.length);
+      continue;
+    }
     if (lexicon.scoring === 'vader') {
       if (!valence.has(row.term)) valence.set(row.term, row.weight);
       continue;
@@ -99,7 +113,7 @@ function buildTables(lexicon: Lexicon): Tables {
   const starts = new Map<string, { exact?: Hit; phrases?: Phrase[] }>();
   for (const [token, hit] of single) starts.set(token, { exact: hit });
   for (const [token, list] of phrases) starts.set(token, { ...starts.get(token), phrases: list });
-  return { single, phrases, wildcards, stemLengths, stemPrefixes, starts, valence };
+  return { single, phrases, wildcards, stemLengths, stemPrefixes, starts, valence, plain, plainMaxWords };
 }
 
 /**

@@ -4,6 +4,9 @@ export type Aggregation = 'count' | 'rating' | 'sum';
 /** What happens to a hit preceded by a negator within the window. */
 export type NegationRule = 'flip' | 'drop' | 'ignore';
 
+/** How a lexicon's terms are matched (`## scoring`). */
+export type LexiconScoring = 'rules' | 'vader' | 'plain-words';
+
 /** Review status of a term; only `accepted` terms are scored. */
 export type TermStatus = 'accepted' | 'pending' | 'rejected';
 
@@ -31,8 +34,12 @@ export interface Lexicon {
   language: string;
   /** Lowest and highest weight allowed. */
   scale: [number, number];
-  /** `rules` for the ordinary matcher, `vader` for the published VADER rules. */
-  scoring: 'rules' | 'vader';
+  /**
+   * `rules` for the ordinary matcher, `vader` for the published VADER rules, `plain-words` for
+   * terms looked up in the words as written (no negation, no contraction expansion; see
+   * matchPlainWords).
+   */
+  scoring: LexiconScoring;
   negation: NegationRule;
   negators: string[];
   /** Tokens before a hit that are searched for a negator (stops at punctuation). */

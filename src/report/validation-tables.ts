@@ -2,6 +2,7 @@ import type { FixedEffect } from '../stats/linear-mixed-model.js';
 import type { StatResult } from '../stats/stat-result.js';
 import type { ValidationResult } from '../validate/validate-series.js';
 import { formatNumber } from './format-number.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** A table ready for `csvDocument`: header and rows of already-formatted fields. */
 export interface Table {
@@ -25,10 +26,11 @@ export function validationStatisticsTable(result: ValidationResult): Table {
     const row = (level: string, statistic: string, f: { estimate?: number; se?: number; ciLow?: number; ciHigh?: number; df?: number; n?: number; p?: number; note?: string }) =>
       rows.push([score, rating, level, statistic, num(f.estimate), num(f.se), num(f.ciLow), num(f.ciHigh), num(f.df), num(f.n), num(f.p), f.note ?? '']);
     row('all', 'pairs', { estimate: a.pairs, n: a.persons, note: 'complete pairs; n = persons' });
-    const corr = (level: string, statistic: string, r: typeof a.pooled) =>
-      r.ok ? row(level, statistic, { estimate: r.r, ciLow: r.ciLow, ciHigh: r.ciHigh, df: r.df, n: r.n, p: r.p, note: r.ciLow === undefined ? 'interval needs n > 3' : '' }) : row(level, statistic, { note: note(r) });
-    corr('pooled', 'r', a.pooled);
-    corr('between', 'r_person_means', a.between);
+    if (a.pooled.ok) row('pooled', 'r', { estimate: a.pooled.r, n: a.pooled.n, note: a.pooled.note });
+    else row('pooled', 'r', { note: note(a.pooled) });
+    const b = a.between;
+    if (b.ok) row('between', 'r_person_means', { estimate: b.r, ciLow: b.ciLow, ciHigh: b.ciHigh, df: b.df, n: b.n, p: b.p, note: b.ciLow === undefined ? 'interval needs n > 3' : '' });
+    else row('between', 'r_person_means', { note: note(b) });
     if (a.bootstrapBetween.ok) row('between', 'r_person_means_bootstrap', { estimate: a.between.ok ? a.between.r : undefined, se: a.bootstrapBetween.se, ciLow: a.bootstrapBetween.ciLow, ciHigh: a.bootstrapBetween.ciHigh, n: a.bootstrapBetween.succeeded, note: `percentile interval, ${a.bootstrapBetween.replicates} resamples of persons` });
     else row('between', 'r_person_means_bootstrap', { note: note(a.bootstrapBetween) });
     const w = a.within;
@@ -51,8 +53,20 @@ export function validationStatisticsTable(result: ValidationResult): Table {
       row('model', 'variance_person', { estimate: m.varianceIntercept, n: m.groups, note: m.boundary ? 'estimated at its bound 0 (singular fit)' : '' });
       row('model', 'variance_residual', { estimate: m.varianceResidual, n: m.n });
       row('model', 'icc_conditional', { estimate: m.icc, n: m.groups, note: 'person variance share of the rating after the score' });
-      row('model', 'reml_criterion', { estimate: m.remlCriterion, n: m.n });
+      row('model', 'reml_criterion', { estimate: m.remlCriterion, n: m.n, note: a.reportedModel === 'random_intercept' ? 'reported model' : 'not reported: the random-slope model is' });
     } else row('model', 'fit', { note: note(m) });
+    const s = a.randomSlopeModel;
+    if (s.ok) {
+      const inf = s.inference === 'wald-z' ? 'Wald z' : 't with between/within df (the random-slope predictor on persons − between terms)';
+      const lead = a.reportedModel === 'random_slopes' ? 'reported model' : 'not reported';
+      for (const f of s.fixed) row('model_slopes', f.name === '(Intercept)' ? 'intercept' : f.name, { estimate: f.estimate, se: f.se, ciLow: f.ciLow, ciHigh: f.ciHigh, df: f.df, n: s.n, p: f.p, note: `REML model with random intercepts and ${s.slope} slopes (${lead}); ${inf}` });
+      row('model_slopes', 'variance_person_intercept', { estimate: s.varianceIntercept, n: s.groups, note: s.boundary ? 'singular fit: a variance is at its bound 0' : '' });
+      row('model_slopes', `variance_person_slope`, { estimate: s.varianceSlope, n: s.groups });
+      row('model_slopes', 'correlation_intercept_slope', { estimate: s.correlation, n: s.groups, note: s.correlation === undefined ? 'a variance is 0' : '' });
+      row('model_slopes', 'variance_residual', { estimate: s.varianceResidual, n: s.n });
+      row('model_slopes', 'reml_criterion', { estimate: s.criterion, n: s.n, note: lead });
+      if (a.slopeTest) row('model_slopes', 'slope_lrt', { estimate: a.slopeTest.statistic, n: s.groups, p: a.slopeTest.p, note: 'REML likelihood ratio, random slopes against random intercepts; p from the 50:50 χ²(1)/χ²(2) mixture (Self & Liang 1987)' });
+    } else row('model_slopes', 'fit', { note: note(s) });
     for (const [which, icc] of [['score', a.iccScore], ['rating', a.iccRating]] as const) {
       if (icc.ok) {
         row('icc', `icc1_${which}`, { estimate: icc.icc1, df: icc.df1, n: icc.groups, p: icc.p, note: `one-way ANOVA, n0 = ${num(icc.n0)}` });
@@ -87,9 +101,9 @@ export function personCorrelationsTable(result: ValidationResult): Table {
 export function wordReliabilityTable(result: ValidationResult): Table {
   const rows: string[][] = [];
   for (const rel of result.reliability) {
-    for (const b of rel.bands) rows.push([rel.column, num(b.low), num(b.high), num(b.bins), num(b.medianWords), num(b.halfR), num(b.reliability), num(b.withinReliability), num(b.wordsForTarget), b.note]);
+    for (const b of rel.bands) rows.push([rel.column, num(b.low), num(b.high), num(b.bins), num(b.medianWords), num(b.halfR), num(b.reliability), num(b.reliabilityLow), num(b.reliabilityHigh), num(b.withinReliability), num(b.wordsForTarget), rel.reducer, num(rel.splits), b.note]);
   }
-  return { header: ['score', 'words_from', 'words_below', 'bins', 'median_words', 'half_r', 'reliability', 'within_reliability', 'words_for_target', 'note'], rows };
+  return { header: ['score', 'words_from', 'words_below', 'bins', 'median_words', 'half_r', 'reliability', 'reliability_low', 'reliability_high', 'within_reliability', 'words_for_target', 'halves_scored_by', 'splits', 'note'], rows };
 }
 
 /** Observed bins behind each person mean and the mean's reliability. */
@@ -101,7 +115,7 @@ export function binsPerPersonTable(result: ValidationResult): Table {
 
 /** Diagnostics of the validation stage. */
 export function validationDiagnosticsTable(result: ValidationResult): Table {
-  return { header: ['code', 'message', 'file', 'line', 'stage'], rows: result.diagnostics.map((d) => [d.code, d.message, d.source?.file ?? '', num(d.source?.line), d.stage]) };
+  return { header: ['code', 'message', 'file', 'line', 'stage'], rows: result.diagnostics.map((d) => [d.code, diagnosticText(d.message), d.source?.file ?? '', num(d.source?.line), d.stage]) };
 }
 
 /**

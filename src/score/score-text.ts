@@ -2,6 +2,7 @@ import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { SerialCache } from '../text/serial-cache.js';
 import { isEnglish, pieceSerialEpoch, tokenize, tokenizeEnglishShared, type Piece, type Tokens } from '../text/tokenize.js';
 import { matchLexicon, type LexiconMatch } from './match-lexicon.js';
+import { matchPlainWords } from './match-plain-words.js';
 import { VADER_COLUMNS } from './score-columns.js';
 import { scoreVader, scoreVaderPieces, scoreVaderSerials, type PieceWords, type VaderLexicon, type VaderScores } from './vader.js';
 
@@ -81,6 +82,13 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       c += VADER_COLUMNS.length;
       continue;
     }
+    if (lex.scoring === 'plain-words') {
+      const m = scratchFor(lex);
+      const words = matchPlainWords(text, lex, m);
+      out.negated[i * lexicons.length + l] = 0;
+      for (let k = 0; k < lex.categories.length; k++, c++) writeCategory(out, c, (lex.categories[k] as { aggregation: string }).aggregation, m.sums[k] as number, m.counts[k] as number, words);
+      continue;
+    }
     let tokens: Tokens;
     if (isEnglish(lex.language)) {
       tokens = english ??= tokenizeEnglishShared(text, pieces, pieceStarts);
@@ -92,20 +100,20 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
     }
     const m = matchLexicon(tokens, lex, undefined, scratchFor(lex));
     out.negated[i * lexicons.length + l] = m.negated;
-    for (let k = 0; k < lex.categories.length; k++, c++) {
-      const aggregation = (lex.categories[k] as { aggregation: string }).aggregation;
-      const sum = m.sums[k] as number;
-      const count = m.counts[k] as number;
-      out.matched[c] = count;
-      if (aggregation === 'count') out.values[c] = tokens.nWords > 0 ? (100 * sum) / tokens.nWords : NaN;
-      else if (aggregation === 'rating') out.values[c] = count > 0 ? sum / count : NaN;
-      else out.values[c] = sum;
-    }
+    for (let k = 0; k < lex.categories.length; k++, c++) writeCategory(out, c, (lex.categories[k] as { aggregation: string }).aggregation, m.sums[k] as number, m.counts[k] as number, tokens.nWords);
   }
   if (english === undefined && byLanguage === undefined) english = tokenizeEnglishShared(text, pieces, pieceStarts);
   const counted = english ?? (byLanguage?.values().next().value as Tokens);
   out.words[i] = counted.nWords;
   return english === undefined ? -1 : (english.pieceCount as number);
+}
+
+/** One category's value: `count` per 100 words, `rating` mean weight, `sum` the sum (see scoreTextInto). */
+function writeCategory(out: BatchScores, c: number, aggregation: string, sum: number, count: number, words: number): void {
+  out.matched[c] = count;
+  if (aggregation === 'count') out.values[c] = words > 0 ? (100 * sum) / words : NaN;
+  else if (aggregation === 'rating') out.values[c] = count > 0 ? sum / count : NaN;
+  else out.values[c] = sum;
 }
 
 /** Per lexicon, the match result scoreTextInto reuses from text to text (its values are copied out at once). */

@@ -3,11 +3,11 @@
  * `factor` times as long from parallel parts, ρ* = f·ρ / (1 + (f − 1)·ρ).
  * With `factor` = 2 it corrects a split-half correlation to full length.
  *
- * Returns `undefined` when the inputs are outside their domain (ρ not in [−1, 1], f ≤ 0) or the
- * denominator vanishes.
+ * Returns `undefined` when the inputs are outside their domain (ρ not in [0, 1], f ≤ 0): a
+ * negative correlation of parts is not a reliability and is never stepped up.
  */
 export function spearmanBrown(reliability: number, factor: number): number | undefined {
-  if (!Number.isFinite(reliability) || !Number.isFinite(factor) || factor <= 0 || reliability > 1 || reliability < -1) return undefined;
+  if (!Number.isFinite(reliability) || !Number.isFinite(factor) || factor <= 0 || reliability > 1 || reliability < 0) return undefined;
   const denominator = 1 + (factor - 1) * reliability;
   if (denominator <= 0) return undefined;
   return (factor * reliability) / denominator;

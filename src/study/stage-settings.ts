@@ -10,6 +10,8 @@ export interface RatingsSettings {
   scales: Record<string, [number, number]>;
   /** Rating columns (default: every column but person, time, zone, id). */
   ratings?: string[];
+  /** Missing-value codes of the rating columns, e.g. ["NA", "-99"]. */
+  missing?: string[];
   /** Score columns to validate (default: all). */
   scores?: string[];
   align: 'bins' | 'window';
@@ -19,6 +21,8 @@ export interface RatingsSettings {
   replicates: number;
   minPairs: number;
   reliability: number;
+  /** Random slopes for the within-person score in the mixed model. */
+  randomSlopes: 'auto' | 'always' | 'never';
 }
 
 /** Dynamics settings of a study file (`dynamics`). */
@@ -29,10 +33,15 @@ export interface DynamicsSettings {
   embedding?: number;
   maxEmbedding: number;
   tau: number;
-  exclusionRadius: number;
+  /** Default: max(E·tau, decorrelation time) per series. */
+  exclusionRadius?: number;
   librarySizes: number;
   libraries: number;
   surrogates: number;
+  /** Largest lag of the cross-map lag scan (0: none). */
+  lagScan: number;
+  /** Calendar cycle kept by seasonal surrogates. */
+  season: 'auto' | 'day' | 'week' | 'none';
   stack: boolean;
   crossMapping: boolean;
   /** Also analyse the self-reports aggregated into the bins (when `ratings` is given). */
@@ -87,6 +96,7 @@ const RATINGS_RULES: Record<string, Rule> = {
     expected: 'the declared scale of each rating, e.g. {"mood": [0, 100], "calm": [1, 7]}',
   },
   ratings: { check: isStrings, expected: 'an array of rating column names' },
+  missing: { check: isStrings, expected: 'an array of missing-value codes such as ["NA", "-99"]' },
   scores: { check: isStrings, expected: 'an array of score column names' },
   align: { check: (v) => v === 'bins' || v === 'window', expected: 'bins or window' },
   window: { check: (v) => typeof v === 'string' && /^\s*\d+\s*(m|min|h|d)\s*$/i.test(v), expected: 'a duration such as "3h" or "90m"' },
@@ -94,6 +104,7 @@ const RATINGS_RULES: Record<string, Rule> = {
   replicates: { check: wholeAtLeast(0), expected: 'a whole number ≥ 0 (bootstrap resamples; 0 skips)' },
   minPairs: { check: wholeAtLeast(2), expected: 'a whole number ≥ 2' },
   reliability: { check: between01, expected: 'a number between 0 and 1, e.g. 0.7' },
+  randomSlopes: { check: (v) => v === 'auto' || v === 'always' || v === 'never', expected: 'auto, always or never' },
 };
 
 const DYNAMICS_RULES: Record<string, Rule> = {
@@ -107,6 +118,8 @@ const DYNAMICS_RULES: Record<string, Rule> = {
   librarySizes: { check: wholeAtLeast(2), expected: 'a whole number ≥ 2' },
   libraries: { check: wholeAtLeast(1), expected: 'a whole number ≥ 1' },
   surrogates: { check: wholeAtLeast(0), expected: 'a whole number ≥ 0' },
+  lagScan: { check: wholeAtLeast(0), expected: 'a whole number ≥ 0' },
+  season: { check: (v) => v === 'auto' || v === 'day' || v === 'week' || v === 'none', expected: 'one of "auto", "day", "week", "none"' },
   stack: { check: isBoolean, expected: 'true or false' },
   crossMapping: { check: isBoolean, expected: 'true or false' },
   includeRatings: { check: isBoolean, expected: 'true or false' },
@@ -137,6 +150,7 @@ export function ratingsSettings(value: Record<string, unknown>, problems: StudyP
     delimiter: value.delimiter as string | undefined,
     scales: (value.scales ?? {}) as Record<string, [number, number]>,
     ratings: value.ratings as string[] | undefined,
+    missing: value.missing as string[] | undefined,
     scores: value.scores as string[] | undefined,
     align: (value.align as 'bins' | 'window' | undefined) ?? 'bins',
     window: (value.window as string | undefined) ?? '3h',
@@ -144,6 +158,7 @@ export function ratingsSettings(value: Record<string, unknown>, problems: StudyP
     replicates: (value.replicates as number | undefined) ?? 2000,
     minPairs: (value.minPairs as number | undefined) ?? 10,
     reliability: (value.reliability as number | undefined) ?? 0.7,
+    randomSlopes: (value.randomSlopes as RatingsSettings['randomSlopes'] | undefined) ?? 'auto',
   };
 }
 
@@ -157,10 +172,12 @@ export function dynamicsSettings(value: Record<string, unknown>, problems: Study
     embedding: value.embedding as number | undefined,
     maxEmbedding: (value.maxEmbedding as number | undefined) ?? 8,
     tau: (value.tau as number | undefined) ?? 1,
-    exclusionRadius: (value.exclusionRadius as number | undefined) ?? 0,
+    exclusionRadius: value.exclusionRadius as number | undefined,
     librarySizes: (value.librarySizes as number | undefined) ?? 10,
     libraries: (value.libraries as number | undefined) ?? 100,
-    surrogates: (value.surrogates as number | undefined) ?? 100,
+    surrogates: (value.surrogates as number | undefined) ?? 99,
+    lagScan: (value.lagScan as number | undefined) ?? 0,
+    season: (value.season as DynamicsSettings['season'] | undefined) ?? 'auto',
     stack: value.stack === true,
     crossMapping: value.crossMapping !== false,
     includeRatings: value.includeRatings !== false,

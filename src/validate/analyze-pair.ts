@@ -3,6 +3,8 @@ import { clusterBootstrap, type BootstrapInterval } from '../stats/cluster-boots
 import { groupBy } from '../stats/group-by.js';
 import { isNumber } from '../stats/is-number.js';
 import { linearMixedModel, type FixedEffectInference, type LinearMixedModelFit } from '../stats/linear-mixed-model.js';
+import { randomSlopeMixedModel, type RandomSlopeFit } from '../stats/random-slope-mixed-model.js';
+import { randomSlopeTest, type RandomSlopeTest } from '../stats/random-slope-test.js';
 import { oneWayIntraclassCorrelation, type OneWayIntraclassCorrelation } from '../stats/one-way-intraclass-correlation.js';
 import { pearsonCorrelation, type Correlation } from '../stats/pearson-correlation.js';
 import type { RandomSource } from '../stats/random.js';
@@ -11,7 +13,9 @@ import type { StatResult } from '../stats/stat-result.js';
 import type { AlignedPair } from './aligned-pair.js';
 import { betweenPersonCorrelation, personMeans } from './between-person-correlation.js';
 import { perPersonCorrelations, type PerPersonSummary } from './per-person-correlations.js';
+import { modelReading } from './model-reading.js';
 import { pairVerdict, type Verdict } from './pair-verdict.js';
+import { pooledCorrelation, type PooledCorrelation } from './pooled-correlation.js';
 
 /** Options of {@link analyzePair}. */
 export interface PairAnalysisOptions {
@@ -25,15 +29,26 @@ export interface PairAnalysisOptions {
   level?: number;
   /** Inference for the mixed model's fixed effects (default `between-within-t`). */
   inference?: FixedEffectInference;
+  /**
+   * Random slopes for the within-person score: `auto` (default) fits both models and reports the
+   * random-slope model when the likelihood-ratio test favours it at `slopeAlpha`; `always`
+   * reports it whenever it can be fitted; `never` fits only random intercepts.
+   */
+  randomSlopes?: RandomSlopeChoice;
+  /** Level of the random-slope likelihood-ratio test (default 0.05). */
+  slopeAlpha?: number;
 }
+
+/** When the mixed model gets random slopes for the within-person score. */
+export type RandomSlopeChoice = 'auto' | 'always' | 'never';
 
 /** Every statistic of one text score × rating pair. */
 export interface PairAnalysis {
   /** Complete pairs and persons contributing at least one. */
   pairs: number;
   persons: number;
-  /** Pearson r over all pairs, ignoring persons (mixes both levels; shown for contrast). */
-  pooled: StatResult<Correlation>;
+  /** Pearson r over all pairs, ignoring persons (mixes both levels; descriptive only, no interval or p). */
+  pooled: StatResult<PooledCorrelation>;
   /** Pearson r of person means (n = persons). */
   between: StatResult<Correlation>;
   /** Repeated-measures correlation (Bakdash & Marusich 2017). */
@@ -41,6 +56,12 @@ export interface PairAnalysis {
   perPerson: PerPersonSummary;
   /** rating ~ 1 + score_within + score_between + (1 | person), REML. */
   mixedModel: StatResult<LinearMixedModelFit>;
+  /** rating ~ 1 + score_within + score_between + (1 + score_within | person), REML (not fitted with `randomSlopes: 'never'`). */
+  randomSlopeModel: StatResult<RandomSlopeFit>;
+  /** Likelihood-ratio test of the random slope (REML fits, same fixed effects), when both fits exist. */
+  slopeTest: RandomSlopeTest | undefined;
+  /** The model the verdict and the tables lead with. */
+  reportedModel: 'random_intercept' | 'random_slopes';
   iccScore: StatResult<OneWayIntraclassCorrelation>;
   iccRating: StatResult<OneWayIntraclassCorrelation>;
   /** Cluster-bootstrap (persons resampled) percentile intervals. */
@@ -60,7 +81,10 @@ function personMoments(list: readonly AlignedPair[]): CoMoments {
  * Analyses one text score (x) against one rating (y) at three levels: pooled, between persons
  * (person means) and within persons (repeated-measures correlation, per-person correlations),
  * plus a random-intercept mixed model of the rating on the within-person part (x − person mean)
- * and the between-person part (person mean − mean of person means) of the score, the ICC(1) of
+ * and the between-person part (person mean − mean of person means) of the score, the same model
+ * with a random slope for the within-person part (lme4's `(1 + score_within | person)`), a
+ * likelihood-ratio test between the two (REML, 50:50 χ²₁/χ²₂ mixture; see `randomSlopeTest`) that
+ * decides which model is reported (`randomSlopes`), the ICC(1) of
  * each variable over the same pairs, and cluster-bootstrap intervals for the within and between
  * correlations. Ends with a plain-words verdict and warnings (see `pairVerdict`).
  *
@@ -74,7 +98,7 @@ export function analyzePair(pairs: readonly AlignedPair[], options: PairAnalysis
   const means = personMeans(complete);
   const meanByPerson = new Map(means.map((m) => [m.person, m.x]));
   const grandOfMeans = means.length ? means.reduce((s, m) => s + m.x, 0) / means.length : 0;
-  const pooled = pearsonCorrelation(complete, (d) => d.x, (d) => d.y, { level });
+  const pooled = pooledCorrelation(complete);
   const between = betweenPersonCorrelation(complete, level);
   const within = repeatedMeasuresCorrelation(complete, (d) => d.person, (d) => d.x, (d) => d.y, { level });
   const perPerson = perPersonCorrelations(pairs, options.minPairs ?? 10);
@@ -88,6 +112,23 @@ export function analyzePair(pairs: readonly AlignedPair[], options: PairAnalysis
     },
     { names: ['score_within', 'score_between'], level, inference: options.inference ?? 'between-within-t' },
   );
+  const choice = options.randomSlopes ?? 'auto';
+  const randomSlopeModel: StatResult<RandomSlopeFit> =
+    choice === 'never'
+      ? { ok: false, code: 'not_requested', reason: 'random slopes were not requested' }
+      : randomSlopeMixedModel(
+          complete,
+          (d) => d.person,
+          (d) => d.y,
+          (d) => {
+            const m = meanByPerson.get(d.person) as number;
+            return [(d.x as number) - m, m - grandOfMeans];
+          },
+          { names: ['score_within', 'score_between'], slope: 0, level, inference: options.inference ?? 'between-within-t' },
+        );
+  const slopeTest = mixedModel.ok && randomSlopeModel.ok ? randomSlopeTest(mixedModel.remlCriterion, randomSlopeModel.criterion) : undefined;
+  const reportedModel: PairAnalysis['reportedModel'] =
+    randomSlopeModel.ok && (choice === 'always' || (slopeTest !== undefined && slopeTest.p < (options.slopeAlpha ?? 0.05))) ? 'random_slopes' : 'random_intercept';
   const iccScore = oneWayIntraclassCorrelation(complete, (d) => d.person, (d) => d.x);
   const iccRating = oneWayIntraclassCorrelation(complete, (d) => d.person, (d) => d.y);
   const replicates = options.replicates ?? 2000;
@@ -133,10 +174,13 @@ export function analyzePair(pairs: readonly AlignedPair[], options: PairAnalysis
     within,
     perPerson,
     mixedModel,
+    randomSlopeModel,
+    slopeTest,
+    reportedModel,
     iccScore,
     iccRating,
     bootstrapWithin,
     bootstrapBetween,
   };
-  return { ...result, verdict: pairVerdict(result) };
+  return { ...result, verdict: pairVerdict({ ...result, model: modelReading(result, options.slopeAlpha ?? 0.05) }) };
 }

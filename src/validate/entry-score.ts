@@ -1,4 +1,6 @@
+import { inTimeWindow } from '../ingest/time-window.js';
 import type { Diagnostic, SourceRef } from '../types.js';
+import { restoreCell } from '../report/csv.js';
 
 /** One scored entry as validation needs it (from the series stage's event file or the scores file). */
 export interface EntryScore {
@@ -26,10 +28,10 @@ export function entryScoreColumns(header: readonly string[]): string[] {
  * is unusable.
  */
 export function entryScoreFromRecord(record: Readonly<Record<string, string>>, source: SourceRef, scoreColumns: readonly string[]): EntryScore | Diagnostic {
-  const person = (record.person ?? '').trim();
+  const person = restoreCell((record.person ?? '').trim());
   const instant = Date.parse(record.time_utc ?? '');
   const words = Number(record.words);
-  if (person === '' || !Number.isFinite(instant) || !Number.isInteger(words) || words < 0) {
+  if (person === '' || !inTimeWindow(instant, undefined) || !Number.isInteger(words) || words < 0) {
     return { code: 'bad_entry_row', message: 'the row lacks a person, a readable time_utc or a whole word count; was it written by lexichron score or series?', source, stage: 'validate' };
   }
   const binStart = record.bin_start ? Date.parse(record.bin_start) : undefined;

@@ -1,10 +1,12 @@
 import type { Diagnostic, SourceRef } from '../types.js';
 import { scaleOf, type RatingScale } from './rating-scale.js';
+import { describeValue } from '../privacy/describe-value.js';
 
 /**
  * Reads the rating columns of one self-report row against their declared scales.
  *
- * An empty field is a missing rating (no diagnostic). A value that is not a number becomes
+ * An empty field, or one equal to a declared missing-value code (`missing`, e.g. `NA` or `-99`,
+ * compared after trimming), is a missing rating (no diagnostic). A value that is not a number becomes
  * `rating_not_numeric`, one outside its declared scale `rating_out_of_scale`; either way the value
  * is left out (`undefined`) and a Diagnostic with the row's source explains why, while the row's
  * other ratings are kept.
@@ -14,16 +16,17 @@ export function ratingValues(
   columns: readonly string[],
   scales: ReadonlyMap<string, RatingScale>,
   source: SourceRef,
+  missing: ReadonlySet<string> = new Set(),
 ): { values: Record<string, number | undefined>; diagnostics: Diagnostic[] } {
   const values: Record<string, number | undefined> = {};
   const diagnostics: Diagnostic[] = [];
   for (const column of columns) {
     const text = (record[column] ?? '').trim();
     values[column] = undefined;
-    if (text === '') continue;
+    if (text === '' || missing.has(text)) continue;
     const value = /^[-+]?(\d+(\.\d*)?|\.\d+)([eE][-+]?\d+)?$/.test(text) ? Number(text) : NaN;
     if (!Number.isFinite(value)) {
-      diagnostics.push({ code: 'rating_not_numeric', message: `rating \`${column}\` is \`${text.slice(0, 40)}\`, not a number; the value is left out`, source, stage: 'validate' });
+      diagnostics.push({ code: 'rating_not_numeric', message: `rating \`${column}\` is ${describeValue(text)}, not a number; the value is left out`, source, stage: 'validate' });
       continue;
     }
     const scale = scaleOf(scales, column);

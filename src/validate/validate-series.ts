@@ -1,11 +1,12 @@
 import { usageError } from '../errors.js';
+import type { BinReducer } from '../series/bin-accumulator.js';
 import type { FixedEffectInference } from '../stats/linear-mixed-model.js';
 import { random } from '../stats/random.js';
 import type { Diagnostic } from '../types.js';
 import { alignRatingsToBins } from './align-ratings-to-bins.js';
 import { alignRatingsToWindows } from './align-ratings-to-windows.js';
 import type { AlignedRow } from './aligned-row.js';
-import { analyzePair, type PairAnalysis } from './analyze-pair.js';
+import { analyzePair, type PairAnalysis, type RandomSlopeChoice } from './analyze-pair.js';
 import { binsPerPerson, type BinsPerPerson } from './bins-per-person.js';
 import type { EntryScore } from './entry-score.js';
 import type { Rating } from './rating.js';
@@ -32,6 +33,8 @@ export interface ValidateOptions {
   level: number;
   /** Fixed-effect inference of the mixed model (default `between-within-t`). */
   inference: FixedEffectInference;
+  /** Random slopes for the within-person score (default `auto`: when the likelihood-ratio test favours them). */
+  randomSlopes: RandomSlopeChoice;
 }
 
 export const DEFAULT_VALIDATE_OPTIONS: ValidateOptions = {
@@ -44,6 +47,7 @@ export const DEFAULT_VALIDATE_OPTIONS: ValidateOptions = {
   reliability: 0.7,
   level: 0.95,
   inference: 'between-within-t',
+  randomSlopes: 'auto',
 };
 
 /** What {@link validateSeries} needs: parsed inputs (see `runValidate` for reading them from files). */
@@ -55,6 +59,10 @@ export interface ValidateInput {
   ratings: readonly Rating[];
   scoreColumns: readonly string[];
   ratingColumns: readonly string[];
+  /** The series' reducer per score column (from the series' .meta.json); default `weighted`. */
+  reducers?: Readonly<Record<string, BinReducer>>;
+  /** The series stage's --min-words (from its .meta.json), for the reliability warning under bin alignment. */
+  seriesMinWords?: number;
   /** Formats a self-report's local time (window labels); default: ISO UTC. */
   label?: (rating: Rating) => string;
 }
@@ -107,13 +115,20 @@ export function validateSeries(input: ValidateInput, options: Partial<ValidateOp
     for (const rating of input.ratingColumns) {
       const analysis = analyzePair(
         rows.map((r) => ({ person: r.person, x: r.scores[score], y: r.ratings[rating] })),
-        { random: random(`${o.seed}\u0000${score}\u0000${rating}`), replicates: o.replicates, minPairs: o.minPairs, level: o.level, inference: o.inference },
+        { random: random(`${o.seed}\u0000${score}\u0000${rating}`), replicates: o.replicates, minPairs: o.minPairs, level: o.level, inference: o.inference, randomSlopes: o.randomSlopes },
       );
       pairs.push({ score, rating, analysis });
     }
   }
   const reliability = input.entries
-    ? input.scoreColumns.map((c) => wordCountReliability(input.entries as EntryScore[], c, { random: random(`${o.seed}\u0000reliability\u0000${c}`), target: o.reliability }))
+    ? input.scoreColumns.map((c) =>
+        wordCountReliability(input.entries as EntryScore[], c, {
+          random: random(`${o.seed}\u0000reliability\u0000${c}`),
+          target: o.reliability,
+          reducer: input.reducers?.[c] ?? 'weighted',
+          minWordsInUse: o.align === 'bins' ? input.seriesMinWords : o.minWords,
+        }),
+      )
     : [];
   const perPerson = input.bins ? input.scoreColumns.map((c) => binsPerPerson(input.bins as SeriesBin[], c)) : [];
   return {

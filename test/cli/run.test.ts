@@ -1,8 +1,8 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { cpSync, existsSync, readdirSync, readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import Papa from 'papaparse';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { parseCsvRows, readCsv } from '../support/csv.js';
 import { tempFolder } from '../support/temp-files.js';
 
 // End to end: `lexichron run demo-data/study.json` on a temporary copy of demo-data (the study
@@ -30,7 +30,7 @@ function snapshot(dir: string): Map<string, string> {
 }
 
 /** Splits a CSV header line (RFC 4180; lexichron headers hold no quotes or commas in names). */
-const headerOf = (csv: string): string[] => csv.slice(0, csv.indexOf('\n')).split(',');
+const headerOf = (csv: string): string[] => parseCsvRows(csv)[0] ?? [];
 
 let first: Map<string, string>;
 let second: Map<string, string>;
@@ -83,7 +83,7 @@ describe('lexichron run demo-data/study.json (end to end)', () => {
     }
     const messages = m.inputs.find((i) => i.path === 'messages.csv');
     // Records counted independently with papaparse (texts hold quoted line breaks, so lines ≠ rows).
-    expect(messages?.rows).toBe(Papa.parse(readFileSync(tmp.path('demo-data/messages.csv'), 'utf8'), { header: true, skipEmptyLines: true }).data.length);
+    expect(messages?.rows).toBe(readCsv(tmp.path('demo-data/messages.csv')).length);
     expect(m.lexicons.map((l) => l.name)).toEqual(['afinn-165', 'vader', 'daily-constructs']);
     for (const l of m.lexicons) expect(l.sha256, l.name).toMatch(/^[0-9a-f]{64}$/);
     const r = m.reconciliation;

@@ -39,6 +39,14 @@ describe('lexichron validate', () => {
     expect(code).toBe(3);
     expect(written).toMatch(/holds no usable self-reports. The first problem, on line 2: person `p1` has no time zone; list them in --zones or pass --time-zone/);
   });
+  it('rejects an unknown --random-slopes choice and names the accepted ones', async () => {
+    const stderr = vi.spyOn(process.stderr, 'write').mockImplementation(() => true);
+    const code = await main(['node', 'lexichron', 'validate', path.join(dir, 'series.csv'), '--ratings', path.join(dir, 'reports.csv'), '--scale', 'mood=0:100', '--time-zone', 'UTC', '--random-slopes', 'maybe', '--out', path.join(dir, 'out')]);
+    const written = stderr.mock.calls.map((c) => String(c[0])).join('');
+    stderr.mockRestore();
+    expect(code).toBe(2);
+    expect(written).toMatch(/auto, always, never/);
+  });
   it('rejects a malformed --window with the accepted forms', async () => {
     const stderr = vi.spyOn(process.stderr, 'write').mockImplementation(() => true);
     const code = await main(['node', 'lexichron', 'validate', '--align', 'window', '--window', 'soon', '--ratings', path.join(dir, 'reports.csv'), '--scale', 'mood=0:100', '--out', path.join(dir, 'out')]);

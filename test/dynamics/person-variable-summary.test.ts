@@ -40,6 +40,18 @@ describe('per-person dynamics on lme4 sleepstudy (test/reference/dynamics-psych,
       expect(acf.r).toBeCloseTo(Number(row['acf1']), 12);
     }
   });
+
+  it('gives the same four values through personVariableSummary with its default options, as analyseDynamics reports them', () => {
+    for (const row of expected) {
+      const values = bySubject.get(row['Subject']!)!;
+      const s = personVariableSummary({ values, lagValid: values.map((_, t) => t > 0) });
+      expect(s.mssd).toBeCloseTo(Number(row['mssd']), 8);
+      expect(s.rmssd).toBeCloseTo(Number(row['rssd']), 10);
+      expect(s.autocorrelationPearson).toBeCloseTo(Number(row['autoR']), 12);
+      expect(s.autocorrelationAcf).toBeCloseTo(Number(row['acf1']), 12);
+      expect(s.lagPairs).toBe(9);
+    }
+  });
 });
 
 describe('personVariableSummary', () => {

@@ -1,33 +1,15 @@
-import { existsSync, readFileSync } from 'node:fs';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
-
-const here = path.dirname(fileURLToPath(import.meta.url));
+import { readSharedReferenceRecords, sharedReferenceDir } from '../reference/shared/read-shared-reference.js';
 
 /** Folder of the shared reference data (../shared/reference from the repository root). */
-export const referenceDir = path.resolve(here, '../../../shared/reference');
+export const referenceDir = sharedReferenceDir;
 
 /**
- * Reads a CSV of the shared reference data into rows of strings keyed by header. Returns
- * undefined when the file is missing outside CI, and throws (so the test fails loudly) in CI.
+ * Reads a CSV of the shared reference data into rows of strings keyed by header. Throws (so the
+ * test file fails, naming the path it tried) when the file is missing; returns undefined only
+ * when LEXICHRON_SKIP_SHARED_REFERENCE=1 skips the checks (see test/reference/shared/read-shared-reference.ts).
  */
 export function readReferenceCsv(name: string): Record<string, string>[] | undefined {
-  const file = path.join(referenceDir, name);
-  if (!existsSync(file)) {
-    if (process.env.CI === 'true') throw new Error(`Reference file ${file} is missing; CI needs ../shared/reference (see SOURCES.md).`);
-    return undefined;
-  }
-  return parseCsv(readFileSync(file, 'utf8'));
-}
-
-/** Minimal CSV reader for the plain numeric reference files (no quoting). */
-export function parseCsv(text: string): Record<string, string>[] {
-  const lines = text.split(/\r?\n/).filter((line) => line.length > 0);
-  const header = (lines[0] ?? '').split(',');
-  return lines.slice(1).map((line) => {
-    const cells = line.split(',');
-    return Object.fromEntries(header.map((h, i) => [h, cells[i] ?? '']));
-  });
+  return readSharedReferenceRecords(name);
 }
 
 /** A full lagValid array for a gap-free series of `n` bins. */

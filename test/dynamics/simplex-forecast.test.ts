@@ -4,7 +4,7 @@ import { chooseEmbeddingDimension } from '../../src/dynamics/choose-embedding-di
 import { allValid, readReferenceCsv } from './reference-data.js';
 
 describe('simplexForecast', () => {
-  // Missing reference data: the test is reported as skipped outside CI (readReferenceCsv throws in CI).
+  // Missing reference data fails this file (readReferenceCsv throws, naming the path); skipped only with LEXICHRON_SKIP_SHARED_REFERENCE=1.
   const referenceMissing = !readReferenceCsv('block_3sp.csv') || !readReferenceCsv('simplex_E3_block_3sp_expected.csv');
   it.skipIf(referenceMissing)('matches pyEDM 2.5.7 Simplex on the rEDM three-species block (block_3sp.csv, E = 3, Tp = 1, library rows 1–100, prediction rows 101–195) to 1e-5', () => {
     const block = readReferenceCsv('block_3sp.csv')!;

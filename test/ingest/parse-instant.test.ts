@@ -1,6 +1,7 @@
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_TIME_OPTIONS, formatLocal, formatUtc, parseInstant, type InstantResult, type TimeOptions } from '../../src/ingest/parse-instant.js';
+import { random, randomInteger } from '../../src/stats/random.js';
 
 // Expected instants are written as the UTC wall time worked out by hand (offset applied by us),
 // turned into epoch milliseconds by Date.UTC, which only does calendar arithmetic and never reads
@@ -195,7 +196,9 @@ describe('parseInstant reads epoch numbers and explicit formats', () => {
 
   it('follows an explicit epoch unit', () => {
     expect(instant(parseInstant('1774764900', 'UTC', options({ epoch: 'ms' })))).toBe(1774764900);
-    expect(instant(parseInstant('1774764900000', 'UTC', options({ epoch: 's' })))).toBe(1774764900000000);
+    expect(instant(parseInstant('177476490000', 'UTC', options({ epoch: 's' })))).toBe(177476490000000); // the year 7594
+    // 1774764900000 s is the year 58210, which RFC 3339 cannot write (four-digit years): rejected.
+    expect(parseInstant('1774764900000', 'UTC', options({ epoch: 's' }))).toMatchObject({ ok: false, code: 'bad_time' });
   });
 
   it('gives an epoch time the offset of the person\'s zone at that instant', () => {
@@ -245,5 +248,40 @@ describe('formatUtc and formatLocal', () => {
     // Years beyond 0000–9999 keep the expanded form of toISOString.
     expect(formatUtc(Date.UTC(10000, 0, 1))).toBe('+010000-01-01T00:00:00.000Z');
     expect(formatUtc(Date.UTC(-1, 0, 1))).toBe('-000001-01-01T00:00:00.000Z');
+  });
+});
+
+describe('parseInstant reads a UTC offset the same in every accepted layout (generated, seeded)', () => {
+  // Class: a date-time with an explicit offset, including offsets with minutes (+05:30, −09:30,
+  // +05:45) and the layouts that take the general reader rather than the fast one (no seconds,
+  // a space before the offset, ±HHMM, ±HH). Reference: Date.parse of the ECMA-262 Date Time String
+  // Format (ECMA-262, section "Date Time String Format") with the same offset, which needs no zone data.
+  const source = random('parse-instant-offsets');
+  const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
+  const cases = Array.from({ length: 400 }, () => {
+    const year = 1990 + randomInteger(source, 60);
+    const month = 1 + randomInteger(source, 12);
+    const day = 1 + randomInteger(source, 28);
+    const hour = randomInteger(source, 24);
+    const minute = randomInteger(source, 60);
+    const second = randomInteger(source, 60);
+    const offsetHours = randomInteger(source, 15);
+    const offsetMinutes = [0, 15, 30, 45, randomInteger(source, 60)][randomInteger(source, 5)] as number;
+    const sign = source() < 0.5 ? '-' : '+';
+    const date = `${year}-${pad(month)}-${pad(day)}`;
+    const offset = `${sign}${pad(offsetHours)}:${pad(offsetMinutes)}`;
+    const reference = Date.parse(`${date}T${pad(hour)}:${pad(minute)}:${pad(second)}.000${offset}`);
+    const referenceNoSeconds = Date.parse(`${date}T${pad(hour)}:${pad(minute)}:00.000${offset}`);
+    return { date, time: `${pad(hour)}:${pad(minute)}:${pad(second)}`, hm: `${pad(hour)}:${pad(minute)}`, offset, compact: offset.replace(':', ''), reference, referenceNoSeconds, offsetMinutes };
+  });
+  it('gives the instant of the ECMA-262 reading for ±HH:MM with and without seconds, after a space, and as ±HHMM', () => {
+    for (const c of cases) {
+      expect(instant(parseInstant(`${c.date}T${c.time}${c.offset}`, 'UTC')), `${c.date}T${c.time}${c.offset}`).toBe(c.reference);
+      expect(instant(parseInstant(`${c.date} ${c.time} ${c.offset}`, 'UTC')), `${c.date} ${c.time} ${c.offset}`).toBe(c.reference);
+      expect(instant(parseInstant(`${c.date}T${c.time}${c.compact}`, 'UTC')), `${c.date}T${c.time}${c.compact}`).toBe(c.reference);
+      expect(instant(parseInstant(`${c.date}T${c.hm}${c.offset}`, 'UTC')), `${c.date}T${c.hm}${c.offset}`).toBe(c.referenceNoSeconds);
+      expect(instant(parseInstant(`${c.date}T${c.hm}${c.compact}`, 'UTC')), `${c.date}T${c.hm}${c.compact}`).toBe(c.referenceNoSeconds);
+    }
+    expect(cases.filter((c) => c.offsetMinutes !== 0).length).toBeGreaterThan(200);
   });
 });

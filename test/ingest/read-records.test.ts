@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { guessLineBreak, readRecords, type RecordItem } from '../../src/ingest/read-records.js';
+import { readRecords, type RecordItem } from '../../src/ingest/read-records.js';
 import { collect, tempFolder } from '../support/temp-files.js';
 
 const tmp = tempFolder();
@@ -201,15 +201,5 @@ describe('readRecords hands the bytes it reads to onBytes', () => {
       expect(Buffer.concat(seen).equals(readFileSync(path)), name).toBe(true);
       expect(records(items)[0]?.text, name).toMatch(/^café/);
     }
-  });
-});
-
-describe('guessLineBreak', () => {
-  it('judges the line break outside quoted fields', () => {
-    expect(guessLineBreak('a,"x\ny"\r\nb')).toBe('\r\n');
-    expect(guessLineBreak('a,b\nc')).toBe('\n');
-    expect(guessLineBreak('a,b\rc')).toBe('\r');
-    expect(guessLineBreak('a,"b\nc')).toBeUndefined();
-    expect(guessLineBreak('a,b', true)).toBe('\n');
   });
 });

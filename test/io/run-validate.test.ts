@@ -104,6 +104,24 @@ describe('runValidate', () => {
     const row = result.result.rows.find((r) => r.person === 'p01' && r.label.startsWith('2026-03-01T12:00'));
     expect([row?.entries, row?.words, row?.missing]).toEqual([2, 40, '']);
   });
+  it('scores the split halves with the series\' reducer and warns about its --min-words, both read from the series .meta.json', async () => {
+    const meta = path.join(dir, 'series-long.csv.meta.json');
+    await writeFile(meta, JSON.stringify({ options: { minWords: 3 }, columns: [{ name: 's', aggregation: 'sum', reducer: 'mean' }] }));
+    try {
+      const result = await run('out8', { validate: { replicates: 0, seed: 7, minPairs: 5, reliability: 0.3 } });
+      const rel = result.result.reliability[0];
+      expect(rel?.reducer).toBe('mean');
+      const table = await readFile(result.files.reliability as string, 'utf8');
+      expect(table.split('\n')[1]).toMatch(/,mean,100,/);
+      // Every bin holds 40 words (band 25–50), reliable enough: the recommendation is 25 words.
+      expect([rel?.basis, rel?.minWords]).toEqual(['observed', 25]);
+      expect(rel?.warning).toMatch(/--min-words is 3, below the 25 words/);
+    } finally {
+      await rm(meta, { force: true });
+    }
+    const without = await run('out9', { validate: { replicates: 0, seed: 7, minPairs: 5 } });
+    expect(without.result.reliability[0]?.reducer).toBe('weighted');
+  });
   it('asks for a scale for every rating column', async () => {
     await expect(run('out7', { scales: 'mood=0:100' })).rejects.toThrow(/No scale declared for rating `calm`/);
   });

@@ -3,6 +3,9 @@ import { mean } from '../../src/stats/mean.js';
 import { pearsonCorrelation } from '../../src/stats/pearson-correlation.js';
 import { repeatedMeasuresCorrelation } from '../../src/stats/repeated-measures-correlation.js';
 import { groupBy } from '../../src/stats/group-by.js';
+import { random } from '../../src/stats/random.js';
+import { analyzePair } from '../../src/validate/analyze-pair.js';
+import { DEFAULT_VALIDATE_OPTIONS } from '../../src/validate/validate-series.js';
 import { readSharedReferenceCsv } from './shared/read-shared-reference.js';
 
 // Bland, J.M. & Altman, D.G. (1995). Calculating correlation coefficients with repeated
@@ -37,10 +40,29 @@ describe.skipIf(!data)('Bland & Altman (1995) pH and PaCO2 of 8 subjects (../sha
     const result = pearsonCorrelation(rows, (d) => d.paco2, (d) => d.pH);
     expect(result.ok && result.r).toBeCloseTo(-0.0652177, 7);
   });
+  it('reports the pooled r of the 47 clustered pairs as descriptive only, with no interval or p-value (Bland & Altman 1995)', () => {
+    const a = analyzePair(rows.map((d) => ({ person: d.subject, x: d.paco2, y: d.pH })), { random: random(1), replicates: 0 });
+    if (!a.pooled.ok) throw new Error(a.pooled.reason);
+    expect(a.pooled.r).toBeCloseTo(-0.0652177, 7);
+    expect(a.pooled).not.toHaveProperty('ciLow');
+    expect(a.pooled).not.toHaveProperty('p');
+    expect(a.pooled.note).toMatch(/descriptive only/);
+  });
   it('gives the correlation of the 8 subject means, r = 0.0817731 (SOURCES.md)', () => {
     const means = [...groupBy(rows, (d) => d.subject).values()].map((g) => [mean(g, (d) => d.paco2), mean(g, (d) => d.pH)] as const);
     const result = pearsonCorrelation(means);
     expect(result.ok && result.r).toBeCloseTo(0.0817731, 7);
     expect(result.ok && result.n).toBe(8);
+  });
+  it('gives the same three correlations through analyzePair, as the validate stage computes them with its default options (rmcorr 0.8.1 and SOURCES.md)', () => {
+    const o = DEFAULT_VALIDATE_OPTIONS;
+    const analysis = analyzePair(
+      rows.map((d) => ({ person: d.subject, x: d.paco2, y: d.pH })),
+      { random: random(`${o.seed}\u0000PaCO2\u0000pH`), replicates: o.replicates, minPairs: o.minPairs, level: o.level, inference: o.inference },
+    );
+    expect(analysis.within.ok && [analysis.within.r, analysis.within.df]).toEqual([expect.closeTo(-0.5067697, 7), 38]);
+    expect(analysis.within.ok && [analysis.within.ciLow, analysis.within.ciHigh]).toEqual([expect.closeTo(-0.7067146, 6), expect.closeTo(-0.2318631, 6)]);
+    expect(analysis.between.ok && [analysis.between.r, analysis.between.n]).toEqual([expect.closeTo(0.0817731, 7), 8]);
+    expect(analysis.pooled.ok && analysis.pooled.r).toBeCloseTo(-0.0652177, 7);
   });
 });

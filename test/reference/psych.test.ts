@@ -1,38 +1,56 @@
 import { describe, expect, it } from 'vitest';
 import { cronbachAlpha } from '../../src/stats/cronbach-alpha.js';
-import { oneWayIntraclassCorrelation } from '../../src/stats/one-way-intraclass-correlation.js';
-import { repeatedMeasuresCorrelation } from '../../src/stats/repeated-measures-correlation.js';
-import { betweenPersonCorrelation } from '../../src/validate/between-person-correlation.js';
+import { random } from '../../src/stats/random.js';
+import { analyzePair, type PairAnalysis } from '../../src/validate/analyze-pair.js';
+import { DEFAULT_VALIDATE_OPTIONS } from '../../src/validate/validate-series.js';
 import { readReferenceCsv } from './reference-csv.js';
 
-// Expected values from R psych 2.2.9 (statsBy, alpha) written by test/reference/psych/make-expected.R.
-const statsBy = readReferenceCsv('psych/expected-statsby.csv');
+// Expected values from R psych 2.2.9 (statsBy, alpha) and R stats (anova) written by
+// test/reference/psych/make-expected.R. The within/between checks go through analyzePair, the
+// function the validate stage calls for every score × rating pair, with the validate stage's
+// default options (DEFAULT_VALIDATE_OPTIONS, seeded per pair as validateSeries seeds it).
+const expected = readReferenceCsv('psych/expected-statsby.csv');
 const datasets: Record<string, { group: string; rows: Record<string, string>[] }> = {
   'within-between': { group: 'Group', rows: readReferenceCsv('psych/within-between.csv') },
   'sat-act': { group: 'education', rows: readReferenceCsv('psych/sat-act.csv') },
 };
 
-describe('within/between decomposition against R psych::statsBy 2.2.9 (psych data withinBetween and sat.act)', () => {
-  const correlations = statsBy.filter((e) => e.quantity === 'rwg' || e.quantity === 'rbg');
-  it.each(correlations.map((e) => [e.dataset, e.quantity, e.x, e.y, Number(e.value)] as const))('%s: %s of %s and %s is %f', (dataset, quantity, x, y, value) => {
-    const { group, rows } = datasets[dataset as string]!;
-    if (quantity === 'rwg') {
-      const r = repeatedMeasuresCorrelation(rows, (d) => d[group] as string, (d) => Number(d[x as string]), (d) => Number(d[y as string]));
-      if (!r.ok) throw new Error(r.reason);
-      expect(r.r).toBeCloseTo(value, 8);
-    } else {
-      const pairs = rows.map((d) => ({ person: d[group] as string, x: Number(d[x as string]), y: Number(d[y as string]) }));
-      const r = betweenPersonCorrelation(pairs, 0.95, 'observations'); // statsBy weights group means by group size
-      if (!r.ok) throw new Error(r.reason);
-      expect(r.r).toBeCloseTo(value, 8);
-    }
+const analyses = new Map<string, PairAnalysis>();
+/** analyzePair of variable x (as the score) against y (as the rating), as validateSeries calls it (memoised). */
+function pipelineAnalysis(dataset: string, x: string, y: string): PairAnalysis {
+  const key = `${dataset}\u0000${x}\u0000${y}`;
+  const known = analyses.get(key);
+  if (known) return known;
+  const { group, rows } = datasets[dataset]!;
+  const o = DEFAULT_VALIDATE_OPTIONS;
+  const analysis = analyzePair(
+    rows.map((d) => ({ person: d[group] as string, x: Number(d[x]), y: Number(d[y]) })),
+    { random: random(`${o.seed}\u0000${x}\u0000${y}`), replicates: o.replicates, minPairs: o.minPairs, level: o.level, inference: o.inference },
+  );
+  analyses.set(key, analysis);
+  return analysis;
+}
+
+describe('validate-stage within/between statistics (analyzePair, default options) against R psych::statsBy 2.2.9 and stats::anova (psych data withinBetween and sat.act)', () => {
+  const correlations = expected.filter((e) => e.quantity === 'rwg' || e.quantity === 'r_group_means');
+  it.each(correlations.map((e) => [e.dataset as string, e.quantity as string, e.x as string, e.y as string, Number(e.value)] as const))('%s: %s of %s and %s is %f', (dataset, quantity, x, y, value) => {
+    const analysis = pipelineAnalysis(dataset, x, y);
+    // rwg: statsBy's pooled within-group correlation = the repeated-measures correlation.
+    // r_group_means: Pearson r of statsBy's unweighted group means = the between-person correlation.
+    const r = quantity === 'rwg' ? analysis.within : analysis.between;
+    if (!r.ok) throw new Error(r.reason);
+    expect(r.r).toBeCloseTo(value, 8);
+    if (quantity === 'r_group_means') expect(r.n).toBe(new Set(datasets[dataset]!.rows.map((d) => d[datasets[dataset]!.group])).size);
   });
-  const iccs = statsBy.filter((e) => e.quantity === 'ICC1' || e.quantity === 'ICC2');
-  it.each(iccs.map((e) => [e.dataset, e.quantity, e.x, Number(e.value)] as const))('%s: %s (statsBy) of %s is %f', (dataset, quantity, x, value) => {
-    const { group, rows } = datasets[dataset as string]!;
-    const icc = oneWayIntraclassCorrelation(rows, (d) => d[group] as string, (d) => Number(d[x as string]), { groupSize: 'mean' }); // statsBy uses N/groups
-    if (!icc.ok) throw new Error(icc.reason);
-    expect(quantity === 'ICC1' ? icc.icc1 : icc.icc1k).toBeCloseTo(value, 8);
+  const iccs = expected.filter((e) => e.quantity === 'ICC1_n0' || e.quantity === 'ICC2');
+  it.each(iccs.map((e) => [e.dataset as string, e.quantity as string, e.x as string, Number(e.value)] as const))('%s: %s of %s is %f, as the score and as the rating', (dataset, quantity, x, value) => {
+    const { group, rows } = datasets[dataset]!;
+    const other = Object.keys(rows[0]!).find((k) => k !== group && k !== x) as string;
+    for (const icc of [pipelineAnalysis(dataset, x, other).iccScore, pipelineAnalysis(dataset, other, x).iccRating]) {
+      if (!icc.ok) throw new Error(icc.reason);
+      // ICC1_n0: one-way ANOVA with Snedecor & Cochran's n0 (stats::anova in R); ICC2: statsBy's (MSb − MSw)/MSb.
+      expect(quantity === 'ICC1_n0' ? icc.icc1 : icc.icc1k).toBeCloseTo(value, 8);
+    }
   });
 });
 

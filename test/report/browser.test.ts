@@ -35,6 +35,7 @@ if (inCi && !haveBrowser) {
     const consoleErrors: string[] = [];
     const requests: string[] = [];
     let marks: { chart: string; marks: number }[] = [];
+    let clipped: string[] = [];
     let screenshot = '';
 
     beforeAll(async () => {
@@ -69,6 +70,16 @@ if (inCi && !haveBrowser) {
           }).length,
         })),
       );
+      // Axis titles drawn outside their chart's box are clipped by the browser.
+      clipped = await page.evaluate(() =>
+        [...document.querySelectorAll('svg.chart .axis-title')].flatMap((t) => {
+          const svg = (t as SVGGraphicsElement).ownerSVGElement as SVGSVGElement;
+          const r = t.getBoundingClientRect();
+          const s = svg.getBoundingClientRect();
+          const inside = r.top >= s.top - 0.5 && r.bottom <= s.bottom + 0.5 && r.left >= s.left - 0.5 && r.right <= s.right + 0.5;
+          return inside ? [] : [`${svg.getAttribute('data-chart') ?? '?'}: ${t.textContent ?? ''}`];
+        }),
+      );
       screenshot = join(work, 'report.png');
       await page.screenshot({ path: screenshot, fullPage: true });
     }, 180_000);
@@ -83,6 +94,10 @@ if (inCi && !haveBrowser) {
       for (const expected of ['coverage-heatmap', 'series-selected', 'lag-pairs']) expect(names).toContain(expected);
       expect(names.filter((n) => n.startsWith('series-small-')).length).toBeGreaterThan(10);
       for (const m of marks) expect(m.marks, `chart ${m.chart} has no visible marks`).toBeGreaterThan(0);
+    });
+
+    it('draws every axis title inside its chart, unclipped (the reliability axis among them)', () => {
+      expect(clipped).toEqual([]);
     });
 
     it('logs no console error', () => {

@@ -1,15 +1,14 @@
-import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { loadLexicons } from '../../src/io/load-lexicon.js';
 import { scoreColumns } from '../../src/score/score-columns.js';
 import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../../src/score/score-text.js';
 import { SerialCache } from '../../src/text/serial-cache.js';
 import type { PieceWords } from '../../src/score/vader.js';
+import { readCsv } from '../support/csv.js';
 
 const lexiconsPromise = loadLexicons(['afinn-165', 'vader', 'daily-constructs']);
-const demo = Papa.parse<{ text: string }>(readFileSync(resolve(__dirname, '../../demo-data/messages.csv'), 'utf8'), { header: true, skipEmptyLines: true }).data.map((r) => r.text);
+const demo = readCsv(resolve(__dirname, '../../demo-data/messages.csv')).map((r) => r.text as string);
 // Edge cases of how wink's pieces and VADER's tokens line up: VADER splits on every JavaScript
 // whitespace character (some of which wink keeps inside a piece), drops one-character tokens,
 // strips punctuation; a piece over 256 characters is not memoised; runs of line breaks are pieces.

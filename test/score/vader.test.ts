@@ -336,3 +336,20 @@ describe('scoreVader with the bundled lexicon lexicons/vader.lex.tsv', () => {
     expect(rounded(scoreVader('VADER is smart, handsome, and funny.', bundled)).compound).toBe(0.8316);
   });
 });
+
+// The README's "Which VADER" list: each documented behaviour, checked against the npm package
+// vader-sentiment 1.1.3 (the release lexichron follows) where it applies.
+describe('VADER: the rules the README says lexichron follows', () => {
+  it.each(['Not bad', 'not bad', 'happy 😊', 'never so good', 'it is never so good', 'well it is so good', 'Good But bad', 'good but bad'])('scores %j as vader-sentiment 1.1.3 does', (text) => {
+    expect(rounded(scoreVader(text, lexicon))).toEqual(rounded({ ...npmScores(text), tokens: 0, matched: 0 } as VaderScores));
+  });
+  it('does not negate a capitalised "Not", counts an emoji as a token without sentiment, and strengthens "never so good" ×1.5', () => {
+    expect(scoreVader('Not bad', lexicon).compound).toBeLessThan(0);
+    expect(scoreVader('not bad', lexicon).compound).toBeGreaterThan(0);
+    expect(scoreVader('happy 😊', lexicon).compound).toBe(scoreVader('happy', lexicon).compound);
+    expect(scoreVader('happy 😊', lexicon).neu).toBeGreaterThan(0);
+    const good = lexicon.get('good') as number;
+    const x = (good + 0.293) * 1.5; // "so" boosts by 0.293 (one back), then ×1.5 for "never so"
+    expect(scoreVader('never so good', lexicon).compound).toBeCloseTo(x / Math.sqrt(x * x + 15), 12);
+  });
+});

@@ -18,6 +18,8 @@ describe('spearmanBrown', () => {
   });
   it('returns undefined outside its domain', () => {
     expect(spearmanBrown(1.2, 2)).toBeUndefined();
+    // A negative half correlation is never stepped up: 2(−0.36)/(1 − 0.36) = −1.125 is not a reliability.
+    expect(spearmanBrown(-0.36, 2)).toBeUndefined();
     expect(spearmanBrown(0.5, 0)).toBeUndefined();
     expect(spearmanBrownFactor(0, 0.7)).toBeUndefined();
     expect(spearmanBrownFactor(0.5, 1)).toBeUndefined();
@@ -37,6 +39,11 @@ describe('splitHalfReliability', () => {
     if (!result.ok) throw new Error(result.reason);
     expect(result.halfCorrelation.r).toBeCloseTo(0.8, 12);
     expect(result.reliability).toBeCloseTo(1.6 / 1.8, 12);
+  });
+  it('says the reliability is not estimable, never negative, when the halves correlate negatively', () => {
+    const result = splitHalfReliability([[1, 3], [2, 1], [3, 2], [4, 0.5], [5, 1]], (d) => d[0], (d) => d[1]);
+    expect(result.ok ? result.reliability : result.code).toBe('halves_disagree');
+    expect(result.ok ? '' : result.reason).toMatch(/r = -0\.\d{3}/);
   });
   it('says why when a half is constant', () => {
     const result = splitHalfReliability([[1, 2], [1, 3], [1, 4]], (d) => d[0], (d) => d[1]);

@@ -1,19 +1,12 @@
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { itemAlpha } from '../../src/terms/item-alpha.js';
 import { termReliability } from '../../src/terms/term-reliability.js';
+import { readReferenceCsv } from '../reference/reference-csv.js';
 
-const here = path.dirname(fileURLToPath(import.meta.url));
-const dir = path.join(here, '..', 'reference', 'terms');
-const lines = readFileSync(path.join(dir, 'term-counts.csv'), 'utf8').trim().split('\n').slice(1);
-const matrix = lines.map((l) => l.split(',').map(Number));
+const matrix = readReferenceCsv('terms/term-counts.csv').map((row) => Object.values(row).map(Number));
 const sparse = matrix.map((row) => row.map((x, j) => [j, x] as [number, number]).filter(([, x]) => x !== 0));
 const frequency = matrix[0]!.map((_, j) => matrix.reduce((s, r) => s + r[j]!, 0));
-const expected = Object.fromEntries(
-  readFileSync(path.join(dir, 'expected-term-reliability.csv'), 'utf8').trim().split('\n').slice(1).map((l) => l.split(',')).map(([k, v]) => [k, Number(v)]),
-);
+const expected = Object.fromEntries(readReferenceCsv('terms/expected-term-reliability.csv').map((r) => [r.quantity as string, Number(r.value)]));
 
 describe('termReliability', () => {
   it('equals R psych::alpha raw and standardized alpha on a committed term-count matrix (psych 2.2.9, test/reference/terms/make-expected.R)', () => {

@@ -63,6 +63,35 @@ describe('analyzePair', () => {
     expect(constant.pooled.ok ? '' : constant.pooled.code).toBe('zero_variance');
     expect(constant.bootstrapWithin.ok ? '' : constant.bootstrapWithin.code).toBe('not_requested');
   });
+  it('reports the random-intercept model, and says so, when the slope test does not favour random slopes (slopes built equal)', () => {
+    expect(result.reportedModel).toBe('random_intercept');
+    expect(result.slopeTest?.p).toBeGreaterThan(0.05);
+    expect(result.verdict.text).toMatch(/random-intercept mixed model gives a within-person slope of .*; a likelihood-ratio test does not favour letting persons' slopes vary \(χ² = /);
+    expect(result.verdict.warnings.map((w) => w.code)).not.toContain('slopes_vary');
+  });
+  it('reports random slopes by default when persons\' slopes vary, with a wider within-person interval, and says so in the verdict', () => {
+    const source = random('varying-slopes');
+    const normal = () => Math.sqrt(-2 * Math.log(1 - source())) * Math.cos(2 * Math.PI * source());
+    const varying = Array.from({ length: 30 }, (_, p) => {
+      const slope = 0.4 + 0.6 * normal();
+      const mx = normal();
+      return Array.from({ length: 15 }, () => {
+        const dx = normal();
+        return { person: `p${p}`, x: mx + dx, y: slope * dx + normal() * 0.7 };
+      });
+    }).flat();
+    const a = analyzePair(varying, { random: random(3), replicates: 0 });
+    expect(a.reportedModel).toBe('random_slopes');
+    expect(a.slopeTest?.p).toBeLessThan(0.001);
+    if (!a.mixedModel.ok || !a.randomSlopeModel.ok) throw new Error('fit failed');
+    expect(a.randomSlopeModel.fixed[1]?.se).toBeGreaterThan(1.5 * (a.mixedModel.fixed[1]?.se as number));
+    expect(a.randomSlopeModel.fixed[1]?.df).toBe(30 - 2);
+    expect(a.verdict.text).toMatch(/lets each person's slope vary \(1 \+ score_within \| person\), because a likelihood-ratio test favours it \(χ² = /);
+    expect(a.verdict.warnings.map((w) => w.code)).toContain('slopes_vary');
+    const never = analyzePair(varying, { random: random(3), replicates: 0, randomSlopes: 'never' });
+    expect(never.reportedModel).toBe('random_intercept');
+    expect(never.randomSlopeModel.ok ? '' : never.randomSlopeModel.code).toBe('not_requested');
+  });
   it('says why when every value is missing', () => {
     const empty = analyzePair([{ person: 'a', x: undefined, y: 1 }, { person: 'b', x: 2, y: undefined }], { random: random(5), replicates: 10 });
     expect(empty.pairs).toBe(0);

@@ -1,3 +1,4 @@
+import { inTimeWindow, type TimeWindow } from '../time-window.js';
 import type { RawEntry } from '../../types.js';
 import { createBurstMerger } from './create-burst-merger.js';
 import { createDeduplicator, type DedupeOptions } from './create-deduplicator.js';
@@ -11,6 +12,8 @@ export interface ImportStepOptions {
   mergeBurstMinutes?: number;
   /** Applied to the text of every entry that leaves (redaction), after duplicates are found. */
   redact?: (text: string) => string;
+  /** Plausible times (see timeWindow): an entry outside is rejected as `time_outside_window`; absent = years 0000–9999. */
+  window?: TimeWindow;
 }
 
 /**
@@ -35,6 +38,11 @@ export async function* importEntries(items: AsyncIterable<ImportItem>, options: 
       continue;
     }
     const { entry } = item;
+    if (!inTimeWindow(entry.instant, options.window)) {
+      const message = 'the time lies outside the plausible window (by default 1970-01-01 to ten years from today); check the date format, or widen the window with --time-window FROM/TO';
+      yield { kind: 'reject', diagnostic: { code: 'time_outside_window', message, source: entry.source, stage: 'ingest' } };
+      continue;
+    }
     if (isDuplicate) {
       const verdict = isDuplicate(entry.person, entry.text);
       if (verdict !== 'unique') {

@@ -1,3 +1,5 @@
+import { describeValue, omitValue } from '../../privacy/describe-value.js';
+import { daysInMonth, utcFromFields } from '../utc-from-fields.js';
 /** A Date header read as an instant with the offset written in it, or the reason it could not be read. */
 export type MailDateResult =
   | { ok: true; instant: number; offsetMinutes: number }
@@ -34,7 +36,7 @@ function stripComments(value: string): string {
 }
 
 function fail(value: string, why: string): MailDateResult {
-  return { ok: false, code: 'mail_bad_date', message: `the Date header \`${value.slice(0, 80)}\` cannot be read: ${why}` };
+  return { ok: false, code: 'mail_bad_date', message: `the Date header (${describeValue(value)}) cannot be read: ${omitValue(why, value)}` };
 }
 
 /**
@@ -71,9 +73,9 @@ export function parseMailDate(value: string): MailDateResult {
   } else {
     offset = NAMED_ZONES[zone.toLowerCase()] ?? 0;
   }
-  const daysInMonth = new Date(Date.UTC(year, month, 0)).getUTCDate();
-  if (day < 1 || day > daysInMonth) return fail(value, `day ${day} does not exist in ${MONTHS[month - 1]} ${year}`);
+  if (day < 1 || day > daysInMonth(year, month)) return fail(value, `day ${day} does not exist in ${MONTHS[month - 1]} ${year}`);
   if (hour > 23 || minute > 59 || second > 60) return fail(value, 'the time of day is out of range');
-  const wall = Date.UTC(year, month - 1, day, hour, minute, second);
+  const wall = utcFromFields(year, month, day, hour, minute, second);
+  if (wall === undefined) return fail(value, 'the year is outside 0000–9999');
   return { ok: true, instant: wall - offset * 60000, offsetMinutes: offset };
 }

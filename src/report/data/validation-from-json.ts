@@ -45,12 +45,15 @@ export function validationFromJson(json: unknown): { pairs: ValidationPair[]; re
     const points = (Array.isArray(c.bands) ? c.bands : []).filter(isObject).flatMap((b) => {
       const reliability = num(b.reliability);
       const words = num(b.medianWords) ?? num(b.low);
-      return reliability === undefined || words === undefined ? [] : [{ words, reliability, ...(num(b.bins) !== undefined ? { bins: num(b.bins) as number } : {}) }];
+      if (reliability === undefined || words === undefined || reliability < 0) return [];
+      const low = num(b.reliabilityLow);
+      const high = num(b.reliabilityHigh);
+      return [{ words, reliability, ...(low !== undefined && high !== undefined ? { low, high } : {}), ...(num(b.bins) !== undefined ? { bins: num(b.bins) as number } : {}) }];
     });
     const curve: ReliabilityCurve = { score: c.column, points };
     if (num(c.target) !== undefined) curve.target = num(c.target) as number;
     if (num(c.minWords) !== undefined) curve.recommendedMinWords = num(c.minWords) as number;
-    if (typeof c.text === 'string' && c.text) curve.note = c.text;
+    if (typeof c.text === 'string' && c.text) curve.note = typeof c.warning === 'string' && c.warning ? `${c.text} ${c.warning}` : c.text;
     if (points.length) reliability.push(curve);
   }
   return { pairs, reliability };

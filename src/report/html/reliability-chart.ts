@@ -9,6 +9,9 @@ import { niceTicks } from './nice-ticks.js';
 import { PALETTE } from './palette.js';
 import { px, svgText } from './svg-text.js';
 
+/** Title of the reliability axis (kept short so that, rotated, it fits the plot's height). */
+export const RELIABILITY_AXIS_TITLE = 'Split-half reliability (0–1)';
+
 /**
  * Reliability of a bin score against the words in the bin: the estimated curve (line and dots),
  * its interval as a band when given, the target reliability as a dashed line and the recommended
@@ -25,11 +28,12 @@ export function reliabilityChart(curve: ReliabilityCurve): string {
   const maxWords = Math.max(1, ...pts.map((p) => p.words), curve.recommendedMinWords ?? 0);
   const xt = niceTicks(0, maxWords, 6);
   const x = linearScale(xt.domain, [x0, x1]);
-  const minR = Math.min(0, ...pts.map((p) => p.low ?? p.reliability));
-  const yt = niceTicks(minR, 1, 5);
+  // Reliabilities are 0–1: a band whose halves do not agree is not estimable and is not drawn.
+  const yt = niceTicks(0, 1, 5);
   const y = linearScale(yt.domain, [yBottom, yTop]);
   const parts: string[] = [];
-  parts.push(axisVertical({ ticks: yt.ticks.map((v) => ({ value: v, label: formatValue(v, 1) })), scale: y, x: x0, y0: yTop, y1: yBottom, title: minR < 0 ? 'Reliability (Spearman–Brown; below 0: halves disagree)' : 'Reliability (Spearman–Brown, 0–1)', side: 'left', gridTo: x1 }));
+  // A short title: rotated, it must fit the plot's height (238 px; about 7 px a character at 12 px bold).
+  parts.push(axisVertical({ ticks: yt.ticks.map((v) => ({ value: v, label: formatValue(v, 1) })), scale: y, x: x0, y0: yTop, y1: yBottom, title: RELIABILITY_AXIS_TITLE, side: 'left', gridTo: x1 }));
   parts.push(axisBottom(xt.ticks.map((v) => ({ value: v, label: groupThousands(v) })), x, yBottom, x0, x1, 'Words in the bin', yTop));
   const banded = pts.filter((p) => p.low !== undefined && p.high !== undefined);
   if (banded.length > 1) {
@@ -52,7 +56,7 @@ export function reliabilityChart(curve: ReliabilityCurve): string {
   return chartFrame({
     name: `reliability-${curve.score.replace(/[^A-Za-z0-9-]/g, '-')}`,
     title: `How reliable a bin's ${curve.score} is, by the number of words in the bin`,
-    note: curve.note ?? 'Split-half reliability across entries within bins, Spearman–Brown corrected.',
+    note: curve.note ?? 'Split-half reliability across entries within bins, averaged over random splits, Spearman–Brown corrected; bands whose halves do not agree are not estimable and not drawn.',
     width,
     height,
     body: parts.join(''),

@@ -3,12 +3,18 @@ import type { Part, ValidationData, ValidationPair } from '../report-data.js';
 import { absentNote } from './absent-note.js';
 import { correlationText } from './correlation-text.js';
 import { escapeHtml } from './escape-html.js';
+import { formatValue, groupThousands } from './format-value.js';
 import { htmlTable } from './html-table.js';
 import { levelWarning } from './level-warning.js';
 import { PALETTE } from './palette.js';
 import { reliabilityChart } from './reliability-chart.js';
 import { scatterChart } from './scatter-chart.js';
 import { sectionFrame } from './section-frame.js';
+
+/** `r = 0.31, 1,204 pairs`: the pooled r without an interval, or why it is missing. */
+function pooledText(c: ValidationPair['pooled']): string {
+  return 'missing' in c ? `not estimable: ${c.missing}` : `r = ${formatValue(c.r)}, ${groupThousands(c.n)} pairs`;
+}
 
 function warningsOf(pair: ValidationPair): string[] {
   if (pair.warnings.length) return pair.warnings;
@@ -61,7 +67,7 @@ export function validationSection(validation: Part<ValidationData>): string {
   if (pair) {
     parts.push(`<h3>${escapeHtml(pair.score)} × ${escapeHtml(pair.rating)}</h3>`);
     parts.push(scatters(pair));
-    parts.push(`<p class="pooled">Pooled over all ${pair.pairs} pairs, ignoring who wrote them: ${escapeHtml(correlationText(pair.pooled, 'pairs'))}. The pooled r mixes the two levels above and answers neither question on its own.</p>`);
+    parts.push(`<p class="pooled">Pooled over all ${pair.pairs} pairs, ignoring who wrote them: ${escapeHtml(pooledText(pair.pooled))}. The pooled r mixes the two levels above and answers neither question on its own; it is a description only, with no interval or p-value, because a person's occasions are not independent (Bland &amp; Altman 1995).</p>`);
     if (pair.verdict) parts.push(`<p class="verdict">${escapeHtml(pair.verdict)}</p>`);
     const warnings = warningsOf(pair);
     if (warnings.length) parts.push(`<div class="warning" role="note"><strong>Read with care</strong><ul>${warnings.map((w) => `<li>${escapeHtml(w)}</li>`).join('')}</ul></div>`);
@@ -69,8 +75,8 @@ export function validationSection(validation: Part<ValidationData>): string {
   if (v.pairs.length > 0) {
     parts.push(
       htmlTable(
-        [{ label: 'Text score' }, { label: 'Self-report' }, { label: 'Pairs', numeric: true }, { label: 'Persons', numeric: true }, { label: 'Within persons (repeated-measures r, 95% CI)' }, { label: 'Between persons (r of means, 95% CI)' }, { label: 'Pooled r (95% CI)' }, { label: 'Warnings', numeric: true }],
-        v.pairs.map((p) => [p.score, p.rating, String(p.pairs), String(p.persons), correlationText(p.within, 'df'), correlationText(p.between, 'persons'), correlationText(p.pooled, 'pairs'), String(warningsOf(p).length)]),
+        [{ label: 'Text score' }, { label: 'Self-report' }, { label: 'Pairs', numeric: true }, { label: 'Persons', numeric: true }, { label: 'Within persons (repeated-measures r, 95% CI)' }, { label: 'Between persons (r of means, 95% CI)' }, { label: 'Pooled r (descriptive, no interval)' }, { label: 'Warnings', numeric: true }],
+        v.pairs.map((p) => [p.score, p.rating, String(p.pairs), String(p.persons), correlationText(p.within, 'df'), correlationText(p.between, 'persons'), pooledText(p.pooled), String(warningsOf(p).length)]),
         'Every text score × self-report pair',
       ),
     );
