@@ -19,7 +19,7 @@
 //    token count, words split on spaces, for every pipeline), peak memory, and the ratios against
 //    the targets of the scoring issue, judged on median wall time (what a user waits for), with
 //    the ratio of CPU times beside it.
-// 4. Runs the other benches (series, import, CCM) when their scripts exist: see HOOKS below.
+// 4. Runs the other benches (series, import, CCM, redaction) when their scripts exist: see HOOKS below.
 //
 //   npm run bench                      # everything (builds first)
 //   node scripts/bench.mjs --messages 20000 --rounds 1 --no-hooks
@@ -38,8 +38,10 @@ const self = fileURLToPath(import.meta.url);
 /** Other benches folded into this run when present: [script, args, what it measures]. */
 const HOOKS = [
   ['scripts/bench-series.mjs', [], 'series binning'],
+  ['scripts/bench-series-rows.mjs', ['1000000', '3000000'], 'series peak memory at 1M and 3M rows, same bins'],
   ['scripts/bench-import.mjs', ['20', '200'], 'import mbox (20 MB and 200 MB)'],
   ['scripts/bench-ccm.mjs', [], 'convergent cross mapping'],
+  ['scripts/bench-redact.mjs', [], 'redaction of 1 MB texts'],
 ];
 
 /** Targets of the scoring issue: lexichron tokens/s divided by the peer's. */

@@ -51,6 +51,9 @@ import { isValidZone } from './ingest/zone-offset.js';
 import { readWindowsFile } from './io/read-windows-file.js';
 import { zoneOnDay } from './series/zone-on-day.js';
 import { TOOL_VERSION } from './version.js';
+import type { ShardSpec } from './shard/shard-of-person.js';
+import type { TermAudit } from './terms/term-auditor.js';
+import type { RawEntry } from './types.js';
 
 /** What a stage after the series contributes to the outputs. */
 export interface StageOutput {
@@ -163,6 +166,14 @@ export interface RunStudyOptions {
   allowSymlinks?: boolean;
   /** Column names of the CSV outputs (overrides the study's `names`): as written, or syntactic for R and pandas. */
   names?: 'as-written' | 'syntactic';
+  /** Write into this folder instead of the study's `out` (resolved against the working folder). */
+  out?: string;
+  /**
+   * Run one shard of the study (`--shard I/N`): score and bin only this shard's persons, and
+   * write a shard manifest (`shard.json`) instead of the stages, datapackage, manifest and report;
+   * `lexichron merge` puts the shards together.
+   */
+  shard?: ShardSpec;
 }
 
 /**
@@ -179,12 +190,12 @@ export interface RunStudyOptions {
  */
 export async function runStudy(studyPath: string, options: RunStudyOptions): Promise<RunStudyResult> {
   const study = await readStudy(studyPath);
-  const finalDir = resolve(dirname(resolve(studyPath)), study.out);
+  const finalDir = options.out !== undefined ? resolve(options.out) : resolve(dirname(resolve(studyPath)), study.out);
   await checkOutputFolder(finalDir, options.allowSymlinks);
   const lock = await lockOutputFolder(finalDir, `lexichron run ${studyPath}`);
   try {
     await removeStaleTemporaries(finalDir, { recursive: true });
-    const staged = await openStagedOutput(finalDir, ['report.html', 'manifest.json']);
+    const staged = await openStagedOutput(finalDir, ['report.html', 'manifest.json', SHARD_MANIFEST]);
     let result: RunStudyResult;
     try {
       result = await runStudyInto(staged.dir, study, studyPath, options);
@@ -228,25 +239,48 @@ async function ratingsWindows(settings: RatingsSettings, at: (p: string) => stri
   return promptWindows(ratings, dayStart);
 }
 
-/** The stages of runStudy, writing every output into `outDir` (the staging folder). */
-async function runStudyInto(outDir: string, study: Study, studyPath: string, options: RunStudyOptions): Promise<RunStudyResult> {
-  const studyDir = dirname(resolve(studyPath));
+/** A study file read and checked, with everything its stages need (lexicons, zones, key, series options). */
+export interface PreparedStudy {
+  study: Study;
+  /** The study file's path as given on the command line (recorded in the manifest's command). */
+  studyPath: string;
+  studyDir: string;
+  at: (path: string) => string;
+  lexicons: Awaited<ReturnType<typeof loadLexicons>>;
+  zones: ZoneTable;
+  time: TimeOptions;
+  key: Awaited<ReturnType<typeof readPseudonymKey>>;
+  pseudonyms?: ReturnType<typeof createPseudonymizer>;
+  person: (id: string) => string;
+  redact: (text: string) => string;
+  seriesOptions: ReturnType<typeof seriesOptionsFrom>;
+  reducers: ReturnType<typeof parseReducers>;
+  windows?: Awaited<ReturnType<typeof readWindowsFile>>;
+}
+
+/**
+ * Reads what a study file names (lexicons, zones, the pseudonym key, windows) and checks its
+ * series settings, before anything is scored; errors name the study file's keys. `now` (ISO 8601)
+ * bounds the plausible time window; `studyFile` is where to read it, `studyPath` how the command
+ * line named it.
+ */
+export async function prepareStudy(study: Study, studyPath: string, env: RunStudyOptions['env'], now: string, studyFile = studyPath): Promise<PreparedStudy> {
+  const studyDir = dirname(resolve(studyFile));
   const at = (p: string): string => resolve(studyDir, p);
   const lexicons = await loadLexicons(study.lexicons.map((l) => (l.includes('/') || l.endsWith('.tsv') ? at(l) : l)));
   if (study.timeZone && !isValidZone(study.timeZone)) {
     throw usageError(`Study file \`${studyPath}\`, $.timeZone: unknown time zone \`${study.timeZone}\`; expected an IANA name such as \`Europe/Brussels\`.`);
   }
   const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
-  const window = timeWindow(Date.parse(options.now), study.time.window, `Study file \`${studyPath}\`, $.time.window`);
+  const window = timeWindow(Date.parse(now), study.time.window, `Study file \`${studyPath}\`, $.time.window`);
   const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap, window };
   const privacy = study.privacy ?? {};
   const keyEnv = privacy.keyEnv ?? PSEUDONYM_KEY_ENV;
-  const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, options.env?.[keyEnv]);
+  const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, env?.[keyEnv]);
   if (privacy.keyEnv && !key) throw usageError(`The study names the key variable \`${privacy.keyEnv}\` ($.privacy.keyEnv), but it is not set; set it or remove the key from the study file.`);
   const pseudonyms = key ? createPseudonymizer(key) : undefined;
   const person = pseudonyms ? pseudonyms.person : (id: string): string => id;
   const redact = createRedactor({ names: privacy.names });
-  const auditors = study.audit === false ? [] : lexicons.filter((l) => l.scoring === 'rules').map((l) => ({ lexicon: l, auditor: termAuditor(l, { random: random(options.seed ?? DEFAULT_SEED), redact, maxShare: (study.audit as AuditSettings).maxShare, minPersons: (study.audit as AuditSettings).minPersons }) }));
   // Series settings are checked before anything is scored, and their errors name the study file's keys.
   let seriesOptions: ReturnType<typeof seriesOptionsFrom>;
   let reducers: ReturnType<typeof parseReducers>;
@@ -256,37 +290,152 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
   } catch (error) {
     throw usageError(`Study file \`${studyPath}\`, $.series: ${(error as Error).message.replace(/--([a-z-]+)/g, (_m, flag: string) => `"${flag.replace(/-([a-z])/g, (_x, c: string) => c.toUpperCase())}"`)}`);
   }
-  const dayStart = seriesOptions.dayStart;
-  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && study.ratings ? await ratingsWindows(study.ratings, at, zones, time, person, dayStart) : undefined;
-  const score = await runScore({
-    inputs: study.inputs.map((i, n) => studyInput(i, at(i.path), zones, time, `$.inputs[${n}]`)),
-    lexicons,
-    zones,
-    time,
-    out: join(outDir, 'scores.csv'),
-    countRate: study.countRate,
-    keepText: study.keepText,
-    redact,
-    ...(pseudonyms ? { pseudonyms } : {}),
-    onProgress: options.onProgress,
-    onFirstRows: options.onFirstRows,
-    onRawEntry: auditors.length === 0 ? undefined : (entry) => {
-      const bin = dateOfDayNumber(localDayOf(entry.instant, entry.zone, dayStart).day);
-      for (const a of auditors) a.auditor.add({ id: entry.id, person: entry.person, text: entry.text, bin });
-    },
-  });
-  const series = await runSeries({
-    ...seriesOptions,
-    ...(windows ? { windows } : {}),
-    zoneOn: zoneOnDay(zones),
-    scores: score.scoresPath,
+  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && study.ratings ? await ratingsWindows(study.ratings, at, zones, time, person, seriesOptions.dayStart) : undefined;
+  return { study, studyPath, studyDir, at, lexicons, zones, time, key, ...(pseudonyms ? { pseudonyms } : {}), person, redact, seriesOptions, reducers, ...(windows ? { windows } : {}) };
+}
+
+/** The term auditors of a study (one per rules lexicon; none when `audit` is false), each with the run's seeded random source. */
+export function studyAuditors(p: PreparedStudy, seed: number | undefined): Array<ReturnType<typeof termAuditor>> {
+  const { study } = p;
+  if (study.audit === false) return [];
+  return p.lexicons.filter((l) => l.scoring === 'rules').map((l) => termAuditor(l, { random: random(seed ?? DEFAULT_SEED), redact: p.redact, maxShare: (study.audit as AuditSettings).maxShare, minPersons: (study.audit as AuditSettings).minPersons }));
+}
+
+/** What the term audit is given for one entry: its local day after `dayStart` is its bin. */
+export function auditEntryFeeder(p: PreparedStudy, auditors: ReadonlyArray<ReturnType<typeof termAuditor>>): ((entry: RawEntry) => void) | undefined {
+  if (auditors.length === 0) return undefined;
+  const dayStart = p.seriesOptions.dayStart;
+  return (entry) => {
+    const bin = dateOfDayNumber(localDayOf(entry.instant, entry.zone, dayStart).day);
+    for (const a of auditors) a.add({ id: entry.id, person: entry.person, text: entry.text, bin });
+  };
+}
+
+/** The series of a study from the scores in `outDir`. */
+export async function studySeries(p: PreparedStudy, outDir: string, scoresPath: string): Promise<RunSeriesResult> {
+  const { reducers } = p;
+  return runSeries({
+    ...p.seriesOptions,
+    ...(p.windows ? { windows: p.windows } : {}),
+    zoneOn: zoneOnDay(p.zones),
+    scores: scoresPath,
     out: join(outDir, 'series-long.csv'),
     reducers: typeof reducers === 'string' ? undefined : reducers,
     allReducer: typeof reducers === 'string' ? reducers : undefined,
   });
+}
+
+/** The inputs as the manifest records them: the scored inputs, then the zones, ratings and windows files (by role when pseudonymized). */
+async function studyInputRecords(p: PreparedStudy, score: RunScoreResult): Promise<FileRecord[]> {
+  const { study, at, pseudonyms } = p;
+  const inputs: FileRecord[] = [...score.inputs];
+  // With pseudonyms, files are recorded by their role, never by a name that may hold an id.
+  const extras: Array<[string | undefined, string]> = [[study.zones, 'zones'], [study.ratings?.path, 'ratings'], [study.series.windows, 'windows']];
+  for (const [extra, role] of extras) {
+    if (!extra) continue;
+    const d = await fileDigest(at(extra));
+    inputs.push({ path: pseudonyms ? role : extra, sha256: d.sha256, bytes: d.bytes, rows: await dataRows(at(extra)) });
+  }
+  return inputs;
+}
+
+/** The manifest's `parameters`: the study as recorded, the seed and the privacy settings. */
+function studyParameters(p: PreparedStudy, score: RunScoreResult, seed: number): Record<string, unknown> {
+  const { study, person, pseudonyms, key } = p;
+  const privacy = study.privacy ?? {};
+  return {
+    // Person ids in the recorded study are the ones written in the outputs (pseudonyms when a key was given).
+    study: recordedStudy(study, person, pseudonyms !== undefined),
+    seed,
+    privacy: { pseudonymized: key !== undefined || score.pseudonymized, aggregatesOnly: privacy.aggregatesOnly === true, redactedNames: privacy.names?.length ?? 0 },
+  };
+}
+
+/** The manifest's record of the series stage. */
+function seriesSummary(series: RunSeriesResult): Record<string, unknown> {
+  return { persons: series.persons, bins: series.bins, observed: series.observed, missing: series.missing, entries: series.entries, excludedEntries: series.excludedEntries, rejected: series.rejected, columns: series.columns };
+}
+
+/** The series result of a shard without persons: nothing binned, no files written. */
+function noSeries(outDir: string): RunSeriesResult {
+  const longPath = join(outDir, 'series-long.csv');
+  const stem = join(outDir, 'series-long');
+  return { longPath, widePath: `${stem}.wide.csv`, eventsPath: `${stem}.events.csv`, rejectsPath: `${stem}.rejects.csv`, persons: 0, bins: 0, observed: 0, missing: {}, entries: 0, excludedEntries: 0, rejected: {}, columns: [], resources: [], warnings: [] };
+}
+
+/** File name of a shard's manifest. */
+export const SHARD_MANIFEST = 'shard.json';
+
+/**
+ * Writes `shard.json`, the manifest of one shard: the manifest fields of a whole run (tool
+ * version, inputs with their hashes, the study as recorded, seed, counts) plus
+ * `parameters.shard` and `parameters.studyFile` (where the study file is and its hash), so that
+ * `lexichron merge` can check that its shards belong to one run and find the study.
+ */
+async function writeShardManifest(outDir: string, fields: { prepared: PreparedStudy; shard: ShardSpec; seed: number; now: string; score: RunScoreResult; series: RunSeriesResult }): Promise<Manifest> {
+  const { prepared: p, score, series } = fields;
+  const studyFile = resolve(p.studyPath);
+  const outputs: FileRecord[] = [];
+  const seriesFiles = series.persons > 0 ? [series.longPath, `${series.longPath}.meta.json`, series.widePath, series.eventsPath, series.rejectsPath] : [];
+  for (const path of [score.scoresPath, `${score.scoresPath}.seq`, score.rejectsPath, score.metaPath, ...seriesFiles]) {
+    const d = await fileDigest(path);
+    outputs.push({ path: path.slice(outDir.length + 1), sha256: d.sha256, bytes: d.bytes });
+  }
+  const manifest = buildManifest({
+    version: TOOL_VERSION,
+    created: fields.now,
+    command: `lexichron run ${p.studyPath} --shard ${fields.shard.index}/${fields.shard.count}`,
+    inputs: await studyInputRecords(p, score),
+    lexicons: score.lexicons,
+    parameters: { ...studyParameters(p, score, fields.seed), shard: fields.shard, studyFile: { path: studyFile, studyPath: p.studyPath, sha256: (await fileDigest(studyFile)).sha256 } },
+    reconciliation: score.reconciliation,
+    stages: { series: seriesSummary(series) },
+    outputs,
+  });
+  await writeFileAtomic(join(outDir, SHARD_MANIFEST), JSON.stringify(manifest, null, 2) + '\n');
+  return manifest;
+}
+
+/** The stages of runStudy, writing every output into `outDir` (the staging folder). */
+async function runStudyInto(outDir: string, study: Study, studyPath: string, options: RunStudyOptions): Promise<RunStudyResult> {
+  const p = await prepareStudy(study, studyPath, options.env, options.now);
+  // A shard runs no term audit: `lexichron merge` audits the whole study (see merge-shards.ts).
+  const auditors = options.shard ? [] : studyAuditors(p, options.seed);
+  const score = await runScore({
+    inputs: study.inputs.map((i, n) => studyInput(i, p.at(i.path), p.zones, p.time, `$.inputs[${n}]`)),
+    lexicons: p.lexicons,
+    zones: p.zones,
+    time: p.time,
+    out: join(outDir, 'scores.csv'),
+    countRate: study.countRate,
+    keepText: study.keepText,
+    redact: p.redact,
+    ...(p.pseudonyms ? { pseudonyms: p.pseudonyms } : {}),
+    ...(options.shard ? { shard: options.shard } : {}),
+    onProgress: options.onProgress,
+    onFirstRows: options.onFirstRows,
+    onRawEntry: auditEntryFeeder(p, auditors),
+  });
+  if (options.shard) {
+    // A shard may hold no person at all (more shards than persons): it then writes no series.
+    const series = score.reconciliation.scored > 0 ? await studySeries(p, outDir, score.scoresPath) : noSeries(outDir);
+    const manifest = await writeShardManifest(outDir, { prepared: p, shard: options.shard, seed: options.seed ?? DEFAULT_SEED, now: options.now, score, series });
+    return { outDir, manifest, score, series, stages: {} };
+  }
+  return finishStudy(outDir, p, score, auditors.map((a) => a.finish()), options);
+}
+
+/**
+ * Everything of a study run after scoring: the series, the term audit (given finished), the
+ * stages, datapackage.json, manifest.json and report.html, into `outDir`. Used by runStudy and,
+ * on merged shard outputs, by `lexichron merge`, so both write the same files.
+ */
+export async function finishStudy(outDir: string, p: PreparedStudy, score: RunScoreResult, audits: TermAudit[], options: RunStudyOptions): Promise<RunStudyResult> {
+  const { study, studyPath, studyDir, at, lexicons, zones, time, person, pseudonyms } = p;
+  const series = await studySeries(p, outDir, score.scoresPath);
   const seed = options.seed ?? DEFAULT_SEED;
   const stages: Record<string, StageOutput> = {};
-  if (auditors.length > 0) stages.audit = await writeStudyAudit(outDir, auditors.map((a) => a.auditor.finish()), (study.audit as AuditSettings).top, study.keepText);
+  if (audits.length > 0) stages.audit = await writeStudyAudit(outDir, audits, (study.audit as AuditSettings).top, study.keepText);
   const context: StudyContext = { study, studyDir, outDir, at, zones, time, person, pseudonymized: pseudonyms !== undefined, score, series, seed, shared: {} };
   for (const [name, stage] of options.stages ?? []) {
     const out = await stage(context);
@@ -308,29 +457,17 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     outputs.push({ path: path.slice(outDir.length + 1), sha256: d.sha256, bytes: d.bytes });
   }
   outputs.push(...Object.values(stages).flatMap((s) => s.outputs));
-  const inputs: FileRecord[] = [...score.inputs];
-  // With pseudonyms, files are recorded by their role, never by a name that may hold an id.
-  const extras: Array<[string | undefined, string]> = [[study.zones, 'zones'], [study.ratings?.path, 'ratings'], [study.series.windows, 'windows']];
-  for (const [extra, role] of extras) {
-    if (!extra) continue;
-    const d = await fileDigest(at(extra));
-    inputs.push({ path: pseudonyms ? role : extra, sha256: d.sha256, bytes: d.bytes, rows: await dataRows(at(extra)) });
-  }
+  const inputs = await studyInputRecords(p, score);
   const manifest = buildManifest({
     version: TOOL_VERSION,
     created: options.now,
     command: `lexichron run ${studyPath}`,
     inputs,
     lexicons: score.lexicons,
-    parameters: {
-      // Person ids in the recorded study are the ones written in the outputs (pseudonyms when a key was given).
-      study: recordedStudy(study, person, pseudonyms !== undefined),
-      seed,
-      privacy: { pseudonymized: key !== undefined || score.pseudonymized, aggregatesOnly: privacy.aggregatesOnly === true, redactedNames: privacy.names?.length ?? 0 },
-    },
+    parameters: studyParameters(p, score, seed),
     reconciliation: score.reconciliation,
     stages: {
-      series: { persons: series.persons, bins: series.bins, observed: series.observed, missing: series.missing, entries: series.entries, excludedEntries: series.excludedEntries, rejected: series.rejected, columns: series.columns },
+      series: seriesSummary(series),
       ...Object.fromEntries(Object.entries(stages).map(([k, v]) => [k, v.summary])),
     },
     outputs,

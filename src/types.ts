@@ -87,4 +87,6 @@ export interface Reconciliation {
   rejected: Record<string, number>;
   /** Rows removed on purpose, e.g. third-party messages or duplicates, by reason. */
   dropped: Record<string, number>;
+  /** Only in one shard of a sharded run: rows of persons scored by another shard (and, outside shard 0, rejects and drops, which shard 0 counts). */
+  otherShard?: number;
 }

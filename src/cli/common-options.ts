@@ -81,3 +81,10 @@ export function progressReporter(label: string): { update: (rows: number) => voi
   bar.start(0, 0);
   return { update: (rows) => bar.update(rows), stop: () => bar.stop() };
 }
+
+/** `--workers`: `auto` or a whole number from 0 to 16. */
+export function parseWorkers(value: string): number | 'auto' {
+  if (value === 'auto') return 'auto';
+  if (!/^\d+$/.test(value) || Number(value) > 16) throw usageError(`--workers \`${value}\` must be auto or a whole number from 0 to 16.`);
+  return Number(value);
+}

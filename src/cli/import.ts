@@ -1,3 +1,5 @@
+import { SHARD_HELP, shardFrom } from './shard-option.js';
+import { shardOfPerson } from '../shard/shard-of-person.js';
 import { readFile } from 'node:fs/promises';
 import { Option, type Command } from 'commander';
 import { usageError } from '../errors.js';
@@ -55,10 +57,17 @@ export function registerImport(program: Command): void {
     .option('--redact-names <file>', 'file of names (one per line) to replace with [name] in the kept text')
     .option('--no-redact', 'keep e-mail addresses, phone numbers, URLs and @handles in the entries\' text (they are redacted by default)')
     .option('--aggregates-only', 'write no participant text into the rejects file (codes only)')
+    .option('--shard <spec>', SHARD_HELP)
     .action(async (format: ImportFormat, input: string, opts: Record<string, unknown>) => {
       const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
       const pseudonyms = key ? createPseudonymizer(key) : undefined;
       const person = pseudonyms ? pseudonyms.person(String(opts.person)) : String(opts.person);
+      const shard = shardFrom(opts.shard);
+      if (shard && shardOfPerson(person, shard.count) !== shard.index) {
+        // An export is one person's: it belongs to exactly one shard, and the other shards write nothing for it.
+        process.stderr.write(`this export's person belongs to shard ${shardOfPerson(person, shard.count)}/${shard.count}, not ${shard.index}/${shard.count}: nothing imported (the other shard imports it)\n`);
+        return;
+      }
       const names = await readNamesFile(opts.redactNames as string | undefined);
       const redactor = createRedactor({ names });
       const nameOnly = createRedactor({ emails: false, phones: false, urls: false, handles: false, names });

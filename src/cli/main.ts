@@ -2,6 +2,7 @@ import type { Command } from 'commander';
 import { exitCodeFor, LexichronError } from '../errors.js';
 import { TOOL_VERSION } from '../version.js';
 import { raiseJitBudget, restoreJitBudget } from './jit-budget.js';
+import { diagnosticText, ERROR_MAX_CHARS } from '../privacy/diagnostic-text.js';
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
@@ -17,6 +18,7 @@ const COMMANDS: ReadonlyArray<[string, () => Promise<Register>]> = [
   ['dynamics', async () => (await import('./dynamics.js')).registerDynamics],
   ['terms', async () => (await import('./terms.js')).registerTerms],
   ['import', async () => (await import('./import.js')).registerImport],
+  ['merge', async () => (await import('./merge.js')).registerMerge],
   ['forget', async () => (await import('./forget.js')).registerForget],
   ['report', async () => (await import('./report.js')).registerReport],
   ['lexicons', async () => (await import('./lexicons.js')).registerLexicons],
@@ -59,7 +61,7 @@ export async function main(argv: string[]): Promise<number> {
       return 2;
     }
     if (error instanceof LexichronError) {
-      process.stderr.write(`lexichron: ${error.message}\n`);
+      process.stderr.write(`lexichron: ${diagnosticText(error.message, ERROR_MAX_CHARS, true)}\n`);
       return exitCodeFor(error);
     }
     process.stderr.write(`lexichron: internal error, please report it with the command you ran: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);

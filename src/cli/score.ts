@@ -9,16 +9,10 @@ import { createRedactor } from '../privacy/create-redactor.js';
 import { createPseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { restoreJitBudget } from './jit-budget.js';
-import { addTimeOptions, delimiterFrom, parseMaxRejects, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
+import { SHARD_HELP, shardFrom } from './shard-option.js';
+import { addTimeOptions, delimiterFrom, parseMaxRejects, parseWorkers, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
-
-/** `--workers`: `auto` or a whole number from 0 to 16. */
-function parseWorkers(value: string): number | 'auto' {
-  if (value === 'auto') return 'auto';
-  if (!/^\d+$/.test(value) || Number(value) > 16) throw usageError(`--workers \`${value}\` must be auto or a whole number from 0 to 16.`);
-  return Number(value);
-}
 
 /** `lexichron score INPUT... --lexicon NAME_OR_PATH... --out FILE` */
 export function registerScore(program: Command): void {
@@ -33,7 +27,9 @@ export function registerScore(program: Command): void {
     .option('--aggregates-only', 'write no participant text at all (refuses --keep-text)')
     .option('--pseudonym-key-file <file>', `pseudonymize person ids with a keyed hash (default key: the ${PSEUDONYM_KEY_ENV} environment variable, when set)`)
     .option('--workers <n>', 'scoring threads besides the one that reads and writes: a number (0 = none) or auto (by input size and cores)', 'auto')
-    .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%');
+    .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%')
+    .option('--shard <spec>', SHARD_HELP)
+    .option('--parquet', 'also write the scores as Parquet (scores.parquet beside the CSV: UTC instant, local wall-clock time and IANA zone as separate typed columns)');
   addTimeOptions(command);
   command.addOption(new Option('--count-rate <unit>', 'unit of count categories, also written at the end of their column names: per100w (matched words per 100 words), per1000w or prop (share of words, 0–1)').choices(['per100w', 'per1000w', 'prop']).default('per100w'));
   command.addOption(new Option('--strict', 'exit with code 3 on the first rejected row\'s count (same as --max-rejects 0)'));
@@ -44,6 +40,7 @@ export function registerScore(program: Command): void {
     if (opts.aggregatesOnly && opts.keepText) throw usageError('--aggregates-only and --keep-text contradict each other: drop one.');
     const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
     const redact = createRedactor({ names: await readNamesFile(opts.redactNames as string | undefined) });
+    const shard = shardFrom(opts.shard);
     const limit = opts.strict ? { count: 0 } : parseMaxRejects(String(opts.maxRejects));
     const scoreInputs = inputs.map((path) => ({ path, columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) }));
     // The scoring threads start now (one may have started already: see main.ts) and load
@@ -77,11 +74,13 @@ export function registerScore(program: Command): void {
       ...(key ? { pseudonyms: createPseudonymizer(key) } : {}),
       workers,
       pool,
+      ...(shard ? { shard } : {}),
       onProgress: progress.update,
       onFirstRows: restoreJitBudget,
     }).finally(progress.stop);
     process.stderr.write(`${reconciliationText(result.reconciliation)}\n`);
     process.stderr.write(`scores:  ${result.scoresPath}\nrejects: ${result.rejectsPath}\nsidecar: ${result.metaPath}\n`);
+    if (opts.parquet) process.stderr.write(`parquet: ${await (await import('../io/write-parquet.js')).writeParquet(result.scoresPath, 'scores')}\n`);
     if (tooManyRejects(result.reconciliation, limit)) {
       throw inputError(`Too many rejected rows (limit ${String(opts.strict ? 0 : opts.maxRejects)}); see ${result.rejectsPath} for each row's reason, fix the input or raise --max-rejects.`);
     }

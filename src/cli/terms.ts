@@ -25,6 +25,7 @@ import type { WordNetRelation } from '../terms/wordnet-related-lemmas.js';
 import { tokenize, TokenKind } from '../text/tokenize.js';
 import type { Diagnostic } from '../types.js';
 import { addTimeOptions, delimiterFrom, timeOptionsFrom } from './common-options.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 function numberOption(name: string, min: number, max: number, integer = false): (value: string) => number {
   return (value) => {
@@ -53,7 +54,7 @@ async function collectCorpus(path: string, items: AsyncIterable<CorpusItem>, onE
   }
   if (entries === 0) {
     const first = rejects[0];
-    const why = first ? ` ${rejects.length} row${rejects.length === 1 ? ' was' : 's were'} rejected, the first on line ${first.source?.line}: ${first.message}.` : ' The file has no rows.';
+    const why = first ? ` ${rejects.length} row${rejects.length === 1 ? ' was' : 's were'} rejected, the first on line ${first.source?.line}: ${diagnosticText(first.message)}.` : ' The file has no rows.';
     throw inputError(`The corpus \`${basename(path)}\` has no entries with text.${why} Check the file, --columns text=COLUMN and --format.`);
   }
   return { entries, rejects };
@@ -62,7 +63,7 @@ async function collectCorpus(path: string, items: AsyncIterable<CorpusItem>, onE
 function printRejects(rejects: readonly Diagnostic[]): void {
   if (rejects.length === 0) return;
   process.stderr.write(`${rejects.length} corpus row${rejects.length === 1 ? '' : 's'} left out, for example:\n`);
-  for (const d of rejects.slice(0, 5)) process.stderr.write(`  ${d.source?.file}:${d.source?.line}: ${d.message}\n`);
+  for (const d of rejects.slice(0, 5)) process.stderr.write(`  ${d.source?.file}:${d.source?.line}: ${diagnosticText(d.message)}\n`);
 }
 
 function registerSuggest(terms: Command): void {
@@ -188,7 +189,7 @@ function registerAudit(terms: Command): void {
     const out = String(opts.out);
     const written = await writeTermAudit(out, audit, Number(opts.top));
     if (rejects.length > 0) {
-      await writeFileAtomic(join(out, 'corpus-rejects.csv'), csvDocument(['file', 'line', 'code', 'message'], rejects.map((d) => [d.source?.file ?? '', String(d.source?.line ?? ''), d.code, d.message])));
+      await writeFileAtomic(join(out, 'corpus-rejects.csv'), csvDocument(['file', 'line', 'code', 'message'], rejects.map((d) => [d.source?.file ?? '', String(d.source?.line ?? ''), d.code, diagnosticText(d.message)])));
     }
     process.stderr.write(`audited ${lexicon.name} (sha256 ${compiled.ref.sha256.slice(0, 12)}…) on ${audit.entries} entries of ${audit.persons} persons\n`);
     for (const c of audit.categories) {
@@ -291,10 +292,10 @@ function registerFromNorms(terms: Command): void {
         negation: opts.negation as 'ignore' | 'flip' | 'drop',
       });
       const diagnostics = [...rejects, ...result.diagnostics];
-      for (const d of diagnostics.slice(0, 10)) process.stderr.write(`  ${basename(file)} line ${d.source?.line}: ${d.message}\n`);
+      for (const d of diagnostics.slice(0, 10)) process.stderr.write(`  ${basename(file)} line ${d.source?.line}: ${diagnosticText(d.message)}\n`);
       if (diagnostics.length > 10) process.stderr.write(`  … and ${diagnostics.length - 10} more\n`);
       if (!result.lexicon) {
-        const shown = result.problems.slice(0, 20).map((p) => `  ${p.line > 0 ? `line ${p.line}: ` : ''}${p.message}`).join('\n');
+        const shown = result.problems.slice(0, 20).map((p) => `  ${p.line > 0 ? `line ${p.line}: ` : ''}${diagnosticText(p.message, 300)}`).join('\n');
         throw inputError(`Not writing \`${String(opts.out)}\`: ${result.problems.length} problem${result.problems.length === 1 ? '' : 's'} in \`${basename(file)}\`:\n${shown}`);
       }
       await writeFileAtomic(String(opts.out), serializeLexicon(result.lexicon));

@@ -1,11 +1,13 @@
-import { random } from '../stats/random.js';
-import { chooseEmbeddingDimension, type DimensionSkill } from './choose-embedding-dimension.js';
-import { ccmNotEnoughData, convergentCrossMapping, type CcmDirection, type CcmOptions } from './convergent-cross-mapping.js';
+import type { Season } from './calendar-phase.js';
+import { ccmNotEnoughData, type CcmOptions } from './convergent-cross-mapping.js';
+import { crossMapPerson, personCrossMaps, personSeries, type CcmRow, type CrossMapSettings, type EmbeddingRow, type PersonCrossMaps } from './person-cross-maps.js';
 import { DEFAULT_MIN_LAG_PAIRS, personVariableSummary, type PersonVariableSummary } from './person-variable-summary.js';
 import { pooledVar1 } from './pooled-var1.js';
 import { stackSegments, type PhasedSeries } from './stack-segments.js';
 import type { PersonSeriesInput } from './types.js';
 import { var1, type Var1Coefficient } from './var1.js';
+
+export type { CcmRow } from './person-cross-maps.js';
 
 /** Options of {@link analyseDynamics}. Everything but `seed` has a default. */
 export interface DynamicsOptions {
@@ -21,11 +23,17 @@ export interface DynamicsOptions {
   skipCrossMapping?: boolean;
   /** Also cross map all persons' segments stacked end to end (default false). */
   stack?: boolean;
+  /** Most observed bins of a stacked series that is cross mapped (default {@link MAX_STACKED_BINS}); above it the stacked rows say why not. */
+  maxStackedBins?: number;
   /**
-   * Bins per cycle for seasonal surrogates. Default: the bin of the day when bins are shorter
-   * than a day, else a 7-bin (weekly) cycle.
+   * Calendar cycle kept by the seasonal surrogates (see calendarPhase): `auto` (default) is the
+   * hour of the local day for bins shorter than a day and the local weekday for daily bins.
    */
-  seasonPeriod?: number;
+  season?: Season;
+  /** Cross maps of each person computed elsewhere (e.g. by worker threads), in `persons` order; computed here when absent. */
+  crossMaps?: readonly PersonCrossMaps[];
+  /** Called after each person's cross maps (for progress). */
+  onPerson?: (done: number, total: number) => void;
   /** Seed of every random step; each analysis gets its own stream derived from it. */
   seed: number | string;
 }
@@ -54,17 +62,6 @@ export interface VarRow extends Partial<Var1Coefficient> {
   ready: boolean;
 }
 
-/** One direction of CCM for one pair. "effect xmap cause": the effect's manifold estimates the cause. */
-export interface CcmRow extends CcmDirection {
-  scope: 'person' | 'stacked';
-  /** Empty for stacked analyses. */
-  person: string;
-  /** The putative driver (the cross-mapped, target series). */
-  cause: string;
-  /** The driven series whose delay embedding is the library. */
-  effect: string;
-}
-
 /** Everything {@link analyseDynamics} computes. */
 export interface DynamicsResult {
   options: {
@@ -74,28 +71,34 @@ export interface DynamicsResult {
     ccm: CcmOptions;
     skipCrossMapping: boolean;
     stack: boolean;
-    seasonPeriod: number | undefined;
+    season: Season;
     seed: number | string;
   };
   summaries: SummaryRow[];
   var: VarRow[];
   ccm: CcmRow[];
-  /** Embedding dimension chosen per person and variable (by simplex forecast skill). */
   /** Per person (or the stacked set) and series: the chosen E, the skill of every E tried, and a note when no E gave a positive skill. */
-  embedding: Array<{ person: string; variable: string; E: number | undefined; skills: DimensionSkill[]; reason?: string; note?: string }>;
+  embedding: EmbeddingRow[];
   notes: string[];
 }
 
 const STACKED = '';
 
 /**
- * The note for a series whose best simplex forecast skill is not above 0: it shows no
- * low-dimensional deterministic dynamics at this resolution (a positive forecast skill is the
- * usual first check before cross mapping in empirical dynamic modelling; Chang, Ushio & Hsieh
- * 2017, Ecological Research 32:785–796, cited from memory).
+ * Most bins a stacked series may have for cross mapping: the work grows with the square of the
+ * bins (neighbour tables, choosing E), and 10,000 bins already take minutes (docs/performance.md).
  */
-function noSkillNote(rho: number, E: number): string {
-  return `no embedding dimension gives this series a positive forecast skill one bin ahead (best ρ = ${rho.toFixed(3)} at E = ${E}): it shows no low-dimensional dynamics at this resolution, and cross maps from its embedding say little`;
+export const MAX_STACKED_BINS = 10_000;
+
+/** The variables, pairs and cross-mapping settings {@link analyseDynamics} uses for these options (for running the cross maps elsewhere, e.g. in worker threads). */
+export function crossMapSettings(persons: readonly PersonSeriesInput[], options: DynamicsOptions): CrossMapSettings & { variables: string[]; pairs: Array<[string, string]>; minLagPairs: number } {
+  const variables = [...(options.variables ?? Object.keys(persons[0]?.values ?? {}))];
+  const pairs: Array<[string, string]> = options.pairs
+    ? options.pairs.map(([a, b]) => [a, b])
+    : variables.flatMap((a, i) => variables.slice(i + 1).map((b): [string, string] => [a, b]));
+  const minLagPairs = options.minLagPairs ?? DEFAULT_MIN_LAG_PAIRS;
+  const ccm: CcmOptions = { ...options.ccm, minPoints: options.ccm?.minPoints ?? minLagPairs };
+  return { variables, pairs, minLagPairs, ccm, seed: options.seed, season: options.season ?? 'auto' };
 }
 
 /**
@@ -107,12 +110,9 @@ function noSkillNote(rho: number, E: number): string {
  * stream per (person, cause, effect), so results do not depend on which other pairs are run.
  */
 export function analyseDynamics(persons: readonly PersonSeriesInput[], options: DynamicsOptions): DynamicsResult {
-  const variables = [...(options.variables ?? Object.keys(persons[0]?.values ?? {}))];
-  const pairs: Array<[string, string]> = options.pairs
-    ? options.pairs.map(([a, b]) => [a, b])
-    : variables.flatMap((a, i) => variables.slice(i + 1).map((b): [string, string] => [a, b]));
-  const minLagPairs = options.minLagPairs ?? DEFAULT_MIN_LAG_PAIRS;
-  const ccmOptions: CcmOptions = { ...options.ccm, minPoints: options.ccm?.minPoints ?? minLagPairs };
+  const settings = crossMapSettings(persons, options);
+  const { variables, pairs, minLagPairs, ccm: ccmOptions } = settings;
+  const season = settings.season ?? 'auto';
   const notes: string[] = [
     'Person-mean centring biases autoregressive effects downward in short series (Hamaker & Grasman 2015); compare with the pooled fixed-effects estimates and treat short series with care.',
   ];
@@ -138,57 +138,40 @@ export function analyseDynamics(persons: readonly PersonSeriesInput[], options: 
     else for (const c of pooled.coefficients) varRows.push({ scope: 'pooled', person: '', pair, status: 'ok', lagPairs: pooled.pairs, df: pooled.df, persons: pooled.persons, ready: true, ...c });
   }
 
-  const seasonPeriod = options.seasonPeriod;
-  const phased = (person: PersonSeriesInput, variable: string): PhasedSeries => {
-    const values = person.values[variable] ?? [];
-    const subDaily = person.binOfDay !== undefined && person.binOfDay.some((b) => b > 1);
-    const phase = seasonPeriod !== undefined ? person.t.map((t) => t % seasonPeriod) : subDaily ? [...(person.binOfDay as readonly number[])] : person.t.map((t) => t % 7);
-    return { values, lagValid: person.lagValid, phase };
-  };
-  const embedding: DynamicsResult['embedding'] = [];
+  const embedding: EmbeddingRow[] = [];
   const ccmRows: CcmRow[] = [];
-  const crossMap = (scope: 'person' | 'stacked', personId: string, series: (variable: string) => PhasedSeries): void => {
-    const chosenE = new Map<string, number | undefined>();
-    const eFor = (variable: string): number | undefined => {
-      if (ccmOptions.E !== undefined) return ccmOptions.E;
-      if (!chosenE.has(variable)) {
-        const choice = chooseEmbeddingDimension(series(variable), { maxE: ccmOptions.maxE ?? 8, tau: ccmOptions.tau ?? 1, exclusionRadius: ccmOptions.exclusionRadius ?? 0 });
-        chosenE.set(variable, choice.ok ? choice.E : undefined);
-        embedding.push({
-          person: personId,
-          variable,
-          E: choice.ok ? choice.E : undefined,
-          skills: choice.ok ? choice.skills : [],
-          ...(choice.ok ? {} : { reason: choice.reason }),
-          ...(choice.ok && !(choice.rho > 0) ? { note: noSkillNote(choice.rho, choice.E) } : {}),
-        });
-      }
-      return chosenE.get(variable);
-    };
-    for (const [a, b] of pairs)
-      for (const [cause, effect] of [
-        [a, b],
-        [b, a],
-      ] as const) {
-        const E = eFor(effect);
-        const base = { scope, person: personId, cause, effect };
-        if (E === undefined) {
-          ccmRows.push({ ...base, ...ccmNotEnoughData(`no embedding dimension of \`${effect}\` gave a forecast skill (too few usable bins)`, undefined, ccmOptions.tau ?? 1, 0) });
-          continue;
-        }
-        const result = convergentCrossMapping(series(effect), series(cause), { ...ccmOptions, E }, random(`${String(options.seed)}|${scope}|${personId}|${cause}|${effect}`));
-        ccmRows.push({ ...base, ...result });
-      }
-  };
   if (!options.skipCrossMapping && pairs.length > 0) {
-    for (const person of persons) crossMap('person', person.person, (variable) => phased(person, variable));
+    persons.forEach((person, i) => {
+      const maps = options.crossMaps?.[i] ?? crossMapPerson(person, settings);
+      ccmRows.push(...maps.ccm);
+      embedding.push(...maps.embedding);
+      options.onPerson?.(i + 1, persons.length);
+    });
     if (options.stack) {
-      const gap = Math.max(ccmOptions.exclusionRadius ?? 0, 0);
+      // Gap between persons: an embedding vector's span. A default exclusion radius longer than the gap only
+      // keeps a few of the next person's first bins from being neighbours, which is harmless.
+      const gap = Math.max(ccmOptions.exclusionRadius ?? 0, (ccmOptions.maxE ?? 8) * (ccmOptions.tau ?? 1));
       const cache = new Map<string, PhasedSeries>();
-      crossMap('stacked', STACKED, (variable) => {
-        if (!cache.has(variable)) cache.set(variable, stackSegments(persons.map((p) => phased(p, variable)), gap));
+      const stackOf = (variable: string): PhasedSeries => {
+        if (!cache.has(variable)) cache.set(variable, stackSegments(persons.map((p) => personSeries(p, variable, season)), gap));
         return cache.get(variable) as PhasedSeries;
-      });
+      };
+      const bins = Math.max(0, ...variables.map((v) => stackOf(v).values.filter((x) => x !== undefined).length));
+      const maxBins = options.maxStackedBins ?? MAX_STACKED_BINS;
+      if (bins > maxBins) {
+        const reason = `the stacked series has ${bins} observed bins, more than the ${maxBins} that stacked cross mapping handles in reasonable time; read the per-person rows, or stack fewer persons or a coarser bin`;
+        for (const [a, b] of pairs)
+          for (const [cause, effect] of [
+            [a, b],
+            [b, a],
+          ])
+            ccmRows.push({ scope: 'stacked', person: STACKED, cause: cause as string, effect: effect as string, ...ccmNotEnoughData(reason, undefined, ccmOptions.tau ?? 1, bins) });
+        notes.push(`Stacked cross mapping was skipped: ${reason}.`);
+      } else {
+        const stacked = personCrossMaps('stacked', STACKED, stackOf, settings);
+        ccmRows.push(...stacked.ccm);
+        embedding.push(...stacked.embedding);
+      }
     }
   }
   const unskilled = embedding.filter((e) => e.note !== undefined).length;
@@ -196,7 +179,7 @@ export function analyseDynamics(persons: readonly PersonSeriesInput[], options: 
     notes.push(`${unskilled} of ${embedding.length} series have no positive forecast skill one bin ahead at any embedding dimension (see the embedding notes): the cross-map rows with such a series as effect say little about causation.`);
   }
   return {
-    options: { variables, pairs, minLagPairs, ccm: ccmOptions, skipCrossMapping: Boolean(options.skipCrossMapping), stack: Boolean(options.stack), seasonPeriod, seed: options.seed },
+    options: { variables, pairs, minLagPairs, ccm: ccmOptions, skipCrossMapping: Boolean(options.skipCrossMapping), stack: Boolean(options.stack), season, seed: options.seed },
     summaries,
     var: varRows,
     ccm: ccmRows,

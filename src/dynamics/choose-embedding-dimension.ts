@@ -25,7 +25,8 @@ export interface EmbeddingChoiceOptions {
   tau?: number;
   /** Horizon of the forecast used to judge E (default 1). */
   Tp?: number;
-  exclusionRadius?: number;
+  /** Exclusion radius in bins, or a function of E giving it (default 0: the point itself). */
+  exclusionRadius?: number | ((E: number) => number);
 }
 
 /**
@@ -38,7 +39,8 @@ export function chooseEmbeddingDimension(series: BinnedSeries, options: Embeddin
   const skills: DimensionSkill[] = [];
   let best: DimensionSkill | undefined;
   for (let E = 1; E <= maxE; E++) {
-    const forecast = simplexForecast(series, { E, tau: options.tau ?? 1, Tp: options.Tp ?? 1, exclusionRadius: options.exclusionRadius ?? 0 });
+    const radius = typeof options.exclusionRadius === 'function' ? options.exclusionRadius(E) : (options.exclusionRadius ?? 0);
+    const forecast = simplexForecast(series, { E, tau: options.tau ?? 1, Tp: options.Tp ?? 1, exclusionRadius: radius });
     const entry: DimensionSkill = { E, rho: forecast.skill.ok ? forecast.skill.rho : undefined, n: forecast.skill.ok ? forecast.skill.n : 0 };
     skills.push(entry);
     if (entry.rho !== undefined && (best === undefined || entry.rho > (best.rho as number))) best = entry;

@@ -1,18 +1,17 @@
 import { isNumber } from '../stats/is-number.js';
 import { quantile } from '../stats/quantile.js';
 import { randomInteger, type RandomSource } from '../stats/random.js';
-import { bootstrapMeanDifference } from './bootstrap-mean-difference.js';
 import { chooseEmbeddingDimension, type DimensionSkill } from './choose-embedding-dimension.js';
-import { delayEmbedding } from './delay-embedding.js';
-import { forecastSkill } from './forecast-skill.js';
-import { kendallTau } from './kendall-tau.js';
+import { crossMapLags, type LagSkill } from './cross-map-lags.js';
+import { delayEmbedding, type StatePoints } from './delay-embedding.js';
+import { exclusionRadius } from './exclusion-radius.js';
+import { crossMapEstimates, emptyLibraryNeighbours, libraryNeighbours } from './library-neighbours.js';
 import { librarySizes } from './library-sizes.js';
 import { neighbourTable } from './neighbour-table.js';
-import { seasonalSurrogate } from './seasonal-surrogate.js';
-import { shuffleSurrogate } from './shuffle-surrogate.js';
+import { phaseRandomisedSurrogates } from './phase-randomised-surrogate.js';
+import { seasonalSurrogates } from './seasonal-surrogate.js';
+import { skillRho } from './skill-rho.js';
 import type { PhasedSeries } from './stack-segments.js';
-import { tableProjection } from './table-projection.js';
-import type { BinnedSeries } from './types.js';
 
 /** Options of {@link convergentCrossMapping}; every field has a default. */
 export interface CcmOptions {
@@ -22,7 +21,10 @@ export interface CcmOptions {
   maxE?: number;
   /** Delay in bins (default 1). */
   tau?: number;
-  /** Library points within this many bins of a predicted point are skipped (default 0: itself). */
+  /**
+   * Library points within this many bins of a predicted point are not its neighbours. Default:
+   * the larger of E·τ and the library series' decorrelation time ({@link exclusionRadius}, Theiler 1986).
+   */
   exclusionRadius?: number;
   /** Number of library sizes from the smallest to all usable points (default 10). */
   librarySizeCount?: number;
@@ -30,14 +32,16 @@ export interface CcmOptions {
   minLibrarySize?: number;
   /** Random libraries per size (default 100). */
   samples?: number;
-  /** Surrogates of each kind for the significance test (default 100; 0 skips the test). */
+  /** Libraries of the smallest size that the surrogates are cross mapped with for the convergence test (default 20, at most `samples`). */
+  testLibraries?: number;
+  /** Surrogates of each kind (phase-randomised; seasonal when phases are known) for the tests (default 99; 0 skips them). */
   surrogates?: number;
   /** Usable points needed to run at all (default 50, common practice). */
   minPoints?: number;
-  /** Bootstrap replicates for the interval of ρ(Lmax) − ρ(Lmin) (default 1000). */
-  bootstrapReplicates?: number;
-  /** Level of that interval (default 0.95). */
+  /** 1 − the significance level of the tests (default 0.95). */
   level?: number;
+  /** Largest lag of the cross-map lag scan (Ye et al. 2015) in bins (default 0: no scan). */
+  lagScan?: number;
 }
 
 /** Cross-map skill at one library size. */
@@ -52,6 +56,9 @@ export interface CcmSkillPoint {
   samples: number;
 }
 
+/** What a direction's tests say, in short. */
+export type CcmVerdict = 'drives' | 'same_bin' | 'no_evidence';
+
 /** The result of cross mapping one direction: the library series' manifold estimates the target series. */
 export interface CcmDirection {
   status: 'ok' | 'not_enough_data';
@@ -59,29 +66,42 @@ export interface CcmDirection {
   reason?: string;
   E: number | undefined;
   tau: number;
+  /** Exclusion radius used, in bins. */
+  exclusionRadius: number | undefined;
   /** Usable points: embedding vectors of the library series with an observed target. */
   points: number;
   /** Skill of each E tried, when E was chosen. */
   embeddingSkill?: DimensionSkill[];
   skill: CcmSkillPoint[];
-  /** ρ with the full library (every usable point, leave-one-out). */
+  /** ρ with the full library (every usable point, leave-one-out outside the exclusion radius). */
   rhoAtMax: number | undefined;
   /** Mean ρ at the smallest library size. */
   rhoAtMin: number | undefined;
-  /** Kendall's τ of mean ρ on library size. */
-  kendallTau: number | undefined;
-  /** ρ(Lmax) − ρ(Lmin) with a bootstrap interval over the random libraries. */
+  /** ρ(Lmax) − ρ(Lmin): how much the skill grows with the library. */
   deltaRho: number | undefined;
-  deltaLow: number | undefined;
-  deltaHigh: number | undefined;
-  /** One-sided p of Kendall's τ > 0 (exact for up to 60 library sizes without ties). */
-  kendallP: number | undefined;
-  /** Kendall's τ significantly above 0 (p < 1 − level) and the interval of ρ(Lmax) − ρ(Lmin) above 0. */
-  converges: boolean | undefined;
-  /** (1 + #surrogates with ρ ≥ observed) / (1 + #surrogates), random-shuffle surrogates of the target. */
-  pShuffle: number | undefined;
-  /** The same with seasonal surrogates of the target (needs phases). */
+  /** 95th percentile of ρ(Lmax) over the phase-randomised surrogates. */
+  surrogateRhoHigh: number | undefined;
+  /** 95th percentile of ρ(Lmax) − ρ(Lmin) over the phase-randomised surrogates (their own curves, same libraries). */
+  surrogateDeltaHigh: number | undefined;
+  /** (1 + #surrogates with ρ(Lmax) ≥ observed) / (1 + #surrogates), phase-randomised surrogates of the target. */
+  pRho: number | undefined;
+  /** The same for the growth ρ(Lmax) − ρ(Lmin), ρ(Lmin) over the first `testLibraries` libraries for target and surrogates alike: does the skill grow more than the surrogates' does? */
+  pConvergence: number | undefined;
+  /** ρ(Lmax) against seasonal surrogates of the target (needs calendar phases). */
   pSeasonal: number | undefined;
+  /** pConvergence < 1 − level and ρ grows (ρ(Lmax) > ρ(Lmin)); undefined without surrogates. */
+  converges: boolean | undefined;
+  /** Skill over lags (only with `lagScan`). */
+  lagSkill?: LagSkill[];
+  /** Lag of the highest skill in the lag scan (ties: the lag nearest 0). */
+  peakLag: number | undefined;
+  /**
+   * `drives`: converges and ρ(Lmax) beats the surrogates (both kinds), with no lag-scan peak at lag
+   * ≥ 0; `same_bin`: the same, but the lag scan peaks at lag 0 or later (a common driver within
+   * the bin, or the other direction, explains it as well); `no_evidence` otherwise. Undefined
+   * without surrogates.
+   */
+  verdict: CcmVerdict | undefined;
   surrogates: number;
 }
 
@@ -91,149 +111,265 @@ export const ccmNotEnoughData = (reason: string, E: number | undefined, tau: num
   reason,
   E,
   tau,
+  exclusionRadius: undefined,
   points,
   ...(embeddingSkill ? { embeddingSkill } : {}),
   skill: [],
   rhoAtMax: undefined,
   rhoAtMin: undefined,
-  kendallTau: undefined,
-  kendallP: undefined,
   deltaRho: undefined,
-  deltaLow: undefined,
-  deltaHigh: undefined,
-  converges: undefined,
-  pShuffle: undefined,
+  surrogateRhoHigh: undefined,
+  surrogateDeltaHigh: undefined,
+  pRho: undefined,
+  pConvergence: undefined,
   pSeasonal: undefined,
+  converges: undefined,
+  peakLag: undefined,
+  verdict: undefined,
   surrogates: 0,
 });
+
+/** One-sided Monte Carlo p: (1 + #surrogate statistics ≥ observed) / (1 + #surrogates) (Davison & Hinkley 1997). */
+function monteCarloP(observed: number, surrogates: readonly (number | undefined)[]): number | undefined {
+  let valid = 0;
+  let atLeast = 0;
+  for (const s of surrogates) {
+    if (s === undefined) continue;
+    valid++;
+    if (s >= observed) atLeast++;
+  }
+  return valid === 0 ? undefined : (1 + atLeast) / (1 + valid);
+}
+
+/** Random streams of a cross-mapping run: a fresh stream for each set of random libraries, one stream per target for its surrogates. */
+export interface CcmRandom {
+  libraries: () => RandomSource;
+  surrogates: readonly RandomSource[];
+}
 
 /**
  * Convergent cross mapping (Sugihara et al. 2012, Science 338:496–500) in one direction: the
  * delay embedding of `library` (its shadow manifold M_X) estimates `target` (Y) at the same bin by
- * simplex projection. If Y drives X, X's history carries Y's, and the cross-map skill ρ rises and
- * levels off ("converges") as the library grows. So "X xmap Y" is evidence of Y → X.
+ * simplex projection. If Y drives X, X's history carries Y's, and the cross-map skill ρ rises
+ * ("converges") as the library grows. So "X xmap Y" is evidence of Y → X. One direction of
+ * {@link convergentCrossMappings}, with one random stream for surrogates and then libraries.
+ */
+export function convergentCrossMapping(library: PhasedSeries, target: PhasedSeries, options: CcmOptions, random: RandomSource): CcmDirection {
+  return convergentCrossMappings(library, [target], options, { libraries: () => random, surrogates: [random] })[0] as CcmDirection;
+}
+
+/**
+ * Convergent cross mapping of several targets from one library series (the directions
+ * "target → library" that share an effect), each result as {@link convergentCrossMapping} defines it.
  *
  * Steps: E by simplex forecast skill of `library` ({@link chooseEmbeddingDimension}) unless given;
- * usable points are embedding vectors over observed, unbroken bins whose target is observed; for
- * each library size L below the full set, `samples` random libraries drawn without replacement
- * predict every usable point (the point itself and its exclusion radius skipped); the full
- * library gives ρ(Lmax). Distances are computed and sorted once ({@link neighbourTable}) and reused
- * for every library and surrogate. Convergence: Kendall's τ of mean ρ on L significantly above 0
- * (one-sided, at 1 − level) and a percentile bootstrap interval of ρ(Lmax) − ρ(Lmin) above 0; a
- * skill that rises a little and then sags, as in a direction without coupling, does not count. Significance: ρ(Lmax) against cross mapping
- * of random-shuffle and seasonal surrogates of the target (one-sided p with the +1 correction of
- * Davison & Hinkley 1997). All randomness comes from `random`, in a fixed order.
+ * the exclusion radius (default max(E·τ, decorrelation time), Theiler 1986); usable points are
+ * embedding vectors over observed, unbroken bins whose target is observed; surrogates of each
+ * target that keep its autocorrelation (phase-randomised, Ebisuzaki 1997; and seasonal ones that
+ * also keep its calendar cycle), drawn within each segment (person) of the target; ρ with the
+ * full library, and for each smaller library size the mean ρ over `samples` random libraries
+ * drawn without replacement. The neighbours of a library do not depend on the series estimated,
+ * so each library's neighbours are found once and serve every target with the same usable
+ * points and all their surrogates ({@link libraryNeighbours}); a sorted {@link neighbourTable}
+ * serves the large libraries. Targets whose usable points differ are run as separate groups, each
+ * with a fresh library stream, so a target's result never depends on the other targets.
+ *
+ * Tests, all against the surrogates' own cross maps with the same libraries: `pRho` for
+ * ρ(Lmax), `pConvergence` for the growth ρ(Lmax) − ρ(Lmin) (autocorrelated but unrelated series
+ * also show a skill that grows with the library, so growth alone proves nothing), `pSeasonal`
+ * for ρ(Lmax) against the seasonal surrogates. Optionally a lag scan ({@link crossMapLags}, Ye et
+ * al. 2015). Randomness: each target's surrogates from its own stream, then the libraries.
  */
-export function convergentCrossMapping(library: PhasedSeries, target: BinnedSeries, options: CcmOptions, random: RandomSource): CcmDirection {
+export function convergentCrossMappings(library: PhasedSeries, targets: readonly PhasedSeries[], options: CcmOptions, random: CcmRandom): CcmDirection[] {
   const tau = options.tau ?? 1;
-  const radius = options.exclusionRadius ?? 0;
   const minPoints = options.minPoints ?? 50;
-  if (library.values.length !== target.values.length) throw new Error('convergentCrossMapping: library and target must have the same bins');
+  for (const target of targets) if (library.values.length !== target.values.length) throw new Error('convergentCrossMapping: library and target must have the same bins');
+  const radiusFor = (E: number): number => options.exclusionRadius ?? exclusionRadius(library, E, tau);
   let E = options.E;
   let embeddingSkill: DimensionSkill[] | undefined;
   if (E === undefined) {
-    const choice = chooseEmbeddingDimension(library, { maxE: options.maxE ?? 8, tau, exclusionRadius: radius });
-    if (!choice.ok) return ccmNotEnoughData(choice.reason, undefined, tau, 0);
+    const choice = chooseEmbeddingDimension(library, { maxE: options.maxE ?? 8, tau, exclusionRadius: radiusFor });
+    if (!choice.ok) return targets.map(() => ccmNotEnoughData(choice.reason, undefined, tau, 0));
     E = choice.E;
     embeddingSkill = choice.skills;
   }
-  const points = delayEmbedding(library, E, tau, (t) => isNumber(target.values[t]));
+  const radius = radiusFor(E);
+  const results: CcmDirection[] = new Array<CcmDirection>(targets.length);
+  const groups = new Map<string, { points: StatePoints; members: number[] }>();
+  targets.forEach((target, i) => {
+    const points = delayEmbedding(library, E as number, tau, (t) => isNumber(target.values[t]));
+    const key = points.positions.join(',');
+    const group = groups.get(key);
+    if (group) group.members.push(i);
+    else groups.set(key, { points, members: [i] });
+  });
+  for (const { points, members } of groups.values()) {
+    const run = crossMapGroup(library, members.map((i) => targets[i] as PhasedSeries), points, { ...options, E, exclusionRadius: radius, minPoints }, members.map((i) => random.surrogates[i] as RandomSource), random.libraries);
+    run.forEach((result, m) => (results[members[m] as number] = embeddingSkill ? { ...result, embeddingSkill } : result));
+  }
+  return results;
+}
+
+/** Running sums of one target in a group. */
+interface TargetRun {
+  observed: Float64Array;
+  phase: Float64Array[];
+  seasonal: Float64Array[];
+  rhoAtMax: number | undefined;
+  phaseAtMax: (number | undefined)[];
+  seasonalAtMax: (number | undefined)[];
+  /** ρ at the smallest size over the test libraries, for the target and each phase surrogate. */
+  testSum: number;
+  testCount: number;
+  phaseTestSum: Float64Array;
+  phaseTestCount: Int32Array;
+  perSize: number[][];
+}
+
+/** Cross maps targets that share the usable points `points` of the library series (E and the radius fixed). */
+function crossMapGroup(library: PhasedSeries, targets: readonly PhasedSeries[], points: StatePoints, options: CcmOptions & { E: number; exclusionRadius: number; minPoints: number }, surrogateRandoms: readonly RandomSource[], libraryRandom: () => RandomSource): CcmDirection[] {
+  const { E, exclusionRadius: radius, minPoints } = options;
+  const tau = options.tau ?? 1;
+  const alpha = 1 - (options.level ?? 0.95);
   const n = points.count;
   if (n < Math.max(minPoints, E + 3)) {
-    return ccmNotEnoughData(`${n} usable points (embedding vectors with an observed target), fewer than the ${Math.max(minPoints, E + 3)} needed`, E, tau, n, embeddingSkill);
+    return targets.map(() => ccmNotEnoughData(`${n} usable points (embedding vectors with an observed target), fewer than the ${Math.max(minPoints, E + 3)} needed`, E, tau, n));
   }
-  const targetAt = (series: readonly (number | undefined)[]): Float64Array => {
-    const out = new Float64Array(n);
-    for (let r = 0; r < n; r++) out[r] = series[points.positions[r] as number] as number;
-    return out;
-  };
-  const observed = targetAt(target.values);
-  const table = neighbourTable(points, { exclusionRadius: radius });
+  const sizes = librarySizes(options.minLibrarySize ?? Math.max(E + 2, 10), n, options.librarySizeCount ?? 10);
+  if (sizes.length < 2) return targets.map(() => ccmNotEnoughData(`${n} usable points leave no library size below the full library`, E, tau, n));
+  const surrogateCount = options.surrogates ?? 99;
+  const samples = options.samples ?? 100;
+  const testLibraries = Math.min(samples, options.testLibraries ?? 20);
+  const at = (series: readonly (number | undefined)[]): Float64Array => Float64Array.from(points.positions, (t) => series[t] as number);
+  const runs: TargetRun[] = targets.map((target, i) => {
+    const random = surrogateRandoms[i] as RandomSource;
+    const phase = phaseRandomisedSurrogates(target.values, surrogateCount, random, target.segment).map(at);
+    const seasonal = target.phase ? seasonalSurrogates(target.values, target.phase, surrogateCount, random, target.segment).map(at) : [];
+    return {
+      observed: at(target.values),
+      phase,
+      seasonal,
+      rhoAtMax: undefined,
+      phaseAtMax: [],
+      seasonalAtMax: [],
+      testSum: 0,
+      testCount: 0,
+      phaseTestSum: new Float64Array(surrogateCount),
+      phaseTestCount: new Int32Array(surrogateCount),
+      perSize: sizes.map(() => []),
+    };
+  });
+
   const k = E + 1;
   const all = Int32Array.from({ length: n }, (_, i) => i);
-  const fullMask = new Uint8Array(n).fill(1);
+  const table = neighbourTable(points, { exclusionRadius: radius });
+  const sets = emptyLibraryNeighbours(n, k);
   const estimates = new Float64Array(n);
-  const rhoWith = (mask: Uint8Array, members: ArrayLike<number>, values: Float64Array): number | undefined => {
-    tableProjection(table, points, values, { mask, members }, all, k, estimates);
-    const skill = forecastSkill(values, estimates);
-    return skill.ok ? skill.rho : undefined;
-  };
-  const rhoAtMax = rhoWith(fullMask, all, observed);
-  const sizes = librarySizes(options.minLibrarySize ?? Math.max(E + 2, 10), n, options.librarySizeCount ?? 10);
-  const samples = options.samples ?? 100;
+  const skillOf = (values: Float64Array): number | undefined => skillRho(values, crossMapEstimates(sets, values, estimates));
+
+  libraryNeighbours(points, { mask: new Uint8Array(n).fill(1), members: all }, all, radius, sets, table);
+  for (const run of runs) {
+    run.rhoAtMax = skillOf(run.observed);
+    run.phaseAtMax = run.phase.map(skillOf);
+    run.seasonalAtMax = run.seasonal.map(skillOf);
+  }
+
+  const random = libraryRandom();
   const permutation = Int32Array.from(all);
   const mask = new Uint8Array(n);
-  const perSize: number[][] = [];
-  const skill: CcmSkillPoint[] = [];
-  for (const L of sizes) {
-    const rhos: number[] = [];
+  sizes.forEach((L, sizeIndex) => {
     if (L >= n) {
-      if (rhoAtMax !== undefined) rhos.push(rhoAtMax);
-    } else {
-      for (let s = 0; s < samples; s++) {
-        // Partial Fisher–Yates: the first L entries are a uniform sample without replacement.
-        for (let i = 0; i < L; i++) {
-          const j = i + randomInteger(random, n - i);
-          const tmp = permutation[i] as number;
-          permutation[i] = permutation[j] as number;
-          permutation[j] = tmp;
-        }
-        const members = permutation.subarray(0, L);
-        for (let i = 0; i < L; i++) mask[members[i] as number] = 1;
-        const rho = rhoWith(mask, members, observed);
-        for (let i = 0; i < L; i++) mask[members[i] as number] = 0;
-        if (rho !== undefined) rhos.push(rho);
+      for (const run of runs) if (run.rhoAtMax !== undefined) (run.perSize[sizeIndex] as number[]).push(run.rhoAtMax);
+      return;
+    }
+    for (let s = 0; s < samples; s++) {
+      // Partial Fisher–Yates: the first L entries are a uniform sample without replacement.
+      for (let i = 0; i < L; i++) {
+        const j = i + randomInteger(random, n - i);
+        const tmp = permutation[i] as number;
+        permutation[i] = permutation[j] as number;
+        permutation[j] = tmp;
+      }
+      const members = permutation.subarray(0, L);
+      for (let i = 0; i < L; i++) mask[members[i] as number] = 1;
+      libraryNeighbours(points, { mask, members }, all, radius, sets, table);
+      for (let i = 0; i < L; i++) mask[members[i] as number] = 0;
+      const testing = sizeIndex === 0 && s < testLibraries;
+      for (const run of runs) {
+        const rho = skillOf(run.observed);
+        if (rho !== undefined) (run.perSize[sizeIndex] as number[]).push(rho);
+        if (!testing || rho === undefined) continue;
+        run.testSum += rho;
+        run.testCount++;
+        run.phase.forEach((values, v) => {
+          const r = skillOf(values);
+          if (r === undefined) return;
+          run.phaseTestSum[v] = (run.phaseTestSum[v] as number) + r;
+          run.phaseTestCount[v] = (run.phaseTestCount[v] as number) + 1;
+        });
       }
     }
-    perSize.push(rhos);
-    if (rhos.length > 0) {
+  });
+
+  return runs.map((run, i) => {
+    const target = targets[i] as PhasedSeries;
+    const skill: CcmSkillPoint[] = [];
+    sizes.forEach((L, sizeIndex) => {
+      const rhos = run.perSize[sizeIndex] as number[];
+      if (rhos.length === 0) return;
       let sum = 0;
       for (const r of rhos) sum += r;
       skill.push({ librarySize: L, rho: sum / rhos.length, rhoLow: quantile(rhos, 0.05) as number, rhoHigh: quantile(rhos, 0.95) as number, samples: rhos.length });
+    });
+    const rhoAtMax = run.rhoAtMax;
+    const first = run.perSize[0] as number[];
+    if (rhoAtMax === undefined || first.length === 0 || run.testCount === 0) {
+      return ccmNotEnoughData('the cross-map skill could not be computed at the smallest and the full library (constant series or too few points)', E, tau, n);
     }
-  }
-  if (skill.length < 2 || rhoAtMax === undefined) {
-    return ccmNotEnoughData('the cross-map skill could not be computed at two library sizes (constant series or too few points)', E, tau, n, embeddingSkill);
-  }
-  const trend = kendallTau(
-    skill.map((p) => p.librarySize),
-    skill.map((p) => p.rho),
-  );
-  const first = perSize.find((r) => r.length > 0) as number[];
-  const lastRhos = perSize[perSize.length - 1] as number[];
-  const delta = bootstrapMeanDifference(first, lastRhos.length > 0 ? lastRhos : [rhoAtMax], random, options.bootstrapReplicates ?? 1000, options.level ?? 0.95);
-  const surrogateCount = options.surrogates ?? 100;
-  const pValue = (make: () => (number | undefined)[]): number => {
-    let atLeast = 0;
-    for (let s = 0; s < surrogateCount; s++) {
-      const rho = rhoWith(fullMask, all, targetAt(make()));
-      if (rho !== undefined && rho >= rhoAtMax) atLeast++;
+    const rhoAtMin = first.reduce((a, b) => a + b, 0) / first.length;
+    const testDelta = rhoAtMax - run.testSum / run.testCount;
+    const phaseDelta = run.phaseAtMax.map((r, v) => (r === undefined || run.phaseTestCount[v] === 0 ? undefined : r - (run.phaseTestSum[v] as number) / (run.phaseTestCount[v] as number)));
+    const pRho = monteCarloP(rhoAtMax, run.phaseAtMax);
+    const pConvergence = monteCarloP(testDelta, phaseDelta);
+    const pSeasonal = run.seasonal.length > 0 ? monteCarloP(rhoAtMax, run.seasonalAtMax) : undefined;
+    const high = (values: readonly (number | undefined)[]): number | undefined => quantile(values.filter((v): v is number => v !== undefined), 0.95);
+    const lagSkill = options.lagScan && options.lagScan > 0 ? crossMapLags(library, target, options.lagScan, radius) : undefined;
+    let peakLag: number | undefined;
+    if (lagSkill) {
+      let best = -Infinity;
+      for (const l of lagSkill) {
+        if (l.rho === undefined) continue;
+        if (l.rho > best || (l.rho === best && Math.abs(l.lag) < Math.abs(peakLag as number))) {
+          best = l.rho;
+          peakLag = l.lag;
+        }
+      }
     }
-    return (1 + atLeast) / (1 + surrogateCount);
-  };
-  const pShuffle = surrogateCount > 0 ? pValue(() => shuffleSurrogate(target.values, random)) : undefined;
-  const phase = library.phase;
-  const pSeasonal = surrogateCount > 0 && phase ? pValue(() => seasonalSurrogate(target.values, phase, random)) : undefined;
-  const kendall = trend.ok ? trend.tau : undefined;
-  const kendallP = trend.ok ? trend.pIncreasing : undefined;
-  const alpha = 1 - (options.level ?? 0.95);
-  return {
-    status: 'ok',
-    E,
-    tau,
-    points: n,
-    ...(embeddingSkill ? { embeddingSkill } : {}),
-    skill,
-    rhoAtMax,
-    rhoAtMin: (skill[0] as CcmSkillPoint).rho,
-    kendallTau: kendall,
-    kendallP,
-    deltaRho: delta?.difference,
-    deltaLow: delta?.low,
-    deltaHigh: delta?.high,
-    converges: kendallP !== undefined && delta !== undefined ? kendallP < alpha && delta.low > 0 : undefined,
-    pShuffle,
-    pSeasonal,
-    surrogates: surrogateCount,
-  };
+    const converges = pConvergence === undefined ? undefined : pConvergence < alpha && testDelta > 0;
+    const beatsSurrogates = pRho !== undefined && pRho < alpha && (pSeasonal === undefined || pSeasonal < alpha);
+    const verdict: CcmVerdict | undefined =
+      converges === undefined ? undefined : converges && beatsSurrogates ? (peakLag !== undefined && peakLag >= 0 ? 'same_bin' : 'drives') : 'no_evidence';
+    const result: CcmDirection = {
+      status: 'ok',
+      E,
+      tau,
+      exclusionRadius: radius,
+      points: n,
+      skill,
+      rhoAtMax,
+      rhoAtMin,
+      deltaRho: rhoAtMax - rhoAtMin,
+      surrogateRhoHigh: high(run.phaseAtMax),
+      surrogateDeltaHigh: high(phaseDelta),
+      pRho,
+      pConvergence,
+      pSeasonal,
+      converges,
+      ...(lagSkill ? { lagSkill } : {}),
+      peakLag,
+      verdict,
+      surrogates: surrogateCount,
+    };
+    return result;
+  });
 }

@@ -16,7 +16,8 @@ const n = formatNumber;
  * The tidy CSV tables of a {@link DynamicsResult}, numbers written with `formatNumber` so the same
  * inputs give byte-identical files: per person × variable descriptives (`dynamics-persons.csv`),
  * VAR(1) coefficients per person and pooled (`dynamics-var.csv`), one CCM row per person × pair ×
- * direction (`dynamics-ccm.csv`) and the skill curve over library sizes (`dynamics-ccm-skill.csv`).
+ * direction (`dynamics-ccm.csv`), the skill curve over library sizes (`dynamics-ccm-skill.csv`)
+ * and, when the lag scan ran, the skill over lags (`dynamics-ccm-lags.csv`).
  */
 export function dynamicsTables(result: DynamicsResult): DynamicsTable[] {
   const persons: DynamicsTable = {
@@ -64,10 +65,10 @@ export function dynamicsTables(result: DynamicsResult): DynamicsTable[] {
   };
   const ccm: DynamicsTable = {
     file: 'dynamics-ccm.csv',
-    description: 'Convergent cross mapping per pair and direction: evidence that `cause` drives `effect` when the effect’s delay embedding cross-maps the cause with a skill that converges with library size and beats surrogates',
+    description: 'Convergent cross mapping per pair and direction: evidence that `cause` drives `effect` when the effect’s delay embedding cross-maps the cause with a skill that grows with the library and beats surrogates of the cause that keep its autocorrelation',
     header: [
-      'scope', 'person', 'cause', 'effect', 'direction', 'status', 'E', 'tau', 'points', 'rho_lmin', 'rho_lmax', 'kendall_tau', 'kendall_p',
-      'delta_rho', 'delta_low', 'delta_high', 'converges', 'p_shuffle', 'p_seasonal', 'surrogates', 'reason',
+      'scope', 'person', 'cause', 'effect', 'direction', 'status', 'E', 'tau', 'exclusion_radius', 'points', 'rho_lmin', 'rho_lmax', 'delta_rho',
+      'surrogate_rho_p95', 'surrogate_delta_p95', 'p_rho', 'p_convergence', 'p_seasonal', 'converges', 'peak_lag', 'verdict', 'surrogates', 'reason',
     ],
     rows: result.ccm.map((c) => [
       c.scope,
@@ -78,17 +79,19 @@ export function dynamicsTables(result: DynamicsResult): DynamicsTable[] {
       c.status,
       n(c.E),
       n(c.tau),
+      n(c.exclusionRadius),
       String(c.points),
       n(c.rhoAtMin),
       n(c.rhoAtMax),
-      n(c.kendallTau),
-      n(c.kendallP),
       n(c.deltaRho),
-      n(c.deltaLow),
-      n(c.deltaHigh),
-      flag(c.converges),
-      n(c.pShuffle),
+      n(c.surrogateRhoHigh),
+      n(c.surrogateDeltaHigh),
+      n(c.pRho),
+      n(c.pConvergence),
       n(c.pSeasonal),
+      flag(c.converges),
+      n(c.peakLag),
+      c.verdict ?? '',
       String(c.surrogates),
       c.reason ?? '',
     ]),
@@ -99,5 +102,13 @@ export function dynamicsTables(result: DynamicsResult): DynamicsTable[] {
     header: ['scope', 'person', 'cause', 'effect', 'library_size', 'rho', 'rho_p05', 'rho_p95', 'libraries'],
     rows: result.ccm.flatMap((c) => c.skill.map((p) => [c.scope, c.person, c.cause, c.effect, String(p.librarySize), n(p.rho), n(p.rhoLow), n(p.rhoHigh), String(p.samples)])),
   };
-  return [persons, varTable, ccm, skill];
+  const scanned = result.ccm.filter((c) => c.lagSkill !== undefined);
+  if (scanned.length === 0) return [persons, varTable, ccm, skill];
+  const lags: DynamicsTable = {
+    file: 'dynamics-ccm-lags.csv',
+    description: 'Cross-map skill over lags (Ye et al. 2015): the effect’s state at bin t estimates the cause at bin t + lag; a driver peaks at a negative lag',
+    header: ['scope', 'person', 'cause', 'effect', 'lag', 'rho', 'points'],
+    rows: scanned.flatMap((c) => (c.lagSkill ?? []).map((l) => [c.scope, c.person, c.cause, c.effect, String(l.lag), n(l.rho), String(l.points)])),
+  };
+  return [persons, varTable, ccm, skill, lags];
 }

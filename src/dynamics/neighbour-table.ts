@@ -11,6 +11,8 @@ export interface NeighbourTable {
   width: number;
   /** `order[i·width + m]`: the m-th nearest point of i (ties: lower index first). */
   order: Uint32Array;
+  /** `distance[i·width + m]`: its Euclidean distance from i (as {@link pointDistance} computes it). */
+  distance: Float64Array;
   /** Entries filled in each row (fewer than `width` when the exclusion radius removed points). */
   filled: Uint32Array;
   /** True when every row lists all non-excluded points (nothing was cut to save memory). */
@@ -22,7 +24,7 @@ export interface NeighbourTable {
 export interface NeighbourTableOptions {
   /** Points within this many bins of a point are never its neighbours (default 0: itself only). */
   exclusionRadius?: number;
-  /** Memory cap on `count · width` (default 2²⁴ entries, 64 MB); rows are cut to fit. */
+  /** Memory cap on `count · width` (default 2²³ entries: 32 MB of order, 64 MB of distances); rows are cut to fit. */
   maxEntries?: number;
 }
 
@@ -39,10 +41,11 @@ export interface NeighbourTableOptions {
  */
 export function neighbourTable(points: StatePoints, options: NeighbourTableOptions = {}): NeighbourTable {
   const radius = options.exclusionRadius ?? 0;
-  const maxEntries = options.maxEntries ?? 1 << 24;
+  const maxEntries = options.maxEntries ?? 1 << 23;
   const n = points.count;
   const width = Math.max(0, Math.min(n - 1, Math.floor(maxEntries / Math.max(n, 1))));
   const order = new Uint32Array(n * width);
+  const sortedDistance = new Float64Array(n * width);
   const filled = new Uint32Array(n);
   const bits = Math.max(1, Math.ceil(Math.log2(Math.max(n, 2))));
   const lowMask = bits >= 32 ? 0xffffffff : (1 << bits) - 1;
@@ -89,7 +92,8 @@ export function neighbourTable(points: StatePoints, options: NeighbourTableOptio
     const keep = Math.min(m, width);
     if (keep < m) complete = false;
     order.set(row.subarray(0, keep), i * width);
+    for (let s = 0; s < keep; s++) sortedDistance[i * width + s] = distance[row[s] as number] as number;
     filled[i] = keep;
   }
-  return { count: n, width, order, filled, complete, exclusionRadius: radius };
+  return { count: n, width, order, distance: sortedDistance, filled, complete, exclusionRadius: radius };
 }

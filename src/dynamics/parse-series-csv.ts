@@ -2,6 +2,8 @@ import { inputError } from '../errors.js';
 import Papa from 'papaparse';
 import type { Diagnostic } from '../types.js';
 import type { PersonSeriesInput } from './types.js';
+import { restoreCell } from '../report/csv.js';
+import { describeValue } from '../privacy/describe-value.js';
 
 const FIXED = new Set(['person', 't', 'bin_start', 'bin_end', 'local_date', 'day', 'bin_of_day', 'bin_hours', 'hours_since_prev', 'entries', 'words', 'missing', 'lag_valid']);
 const DERIVED = /\.(n|person_mean|within|lag1|within_lag1|filled|detrended)$/;
@@ -44,10 +46,10 @@ export function parseSeriesCsv(text: string, file = 'series-long.csv'): ParsedSe
   const byPerson = new Map<string, Building>();
   table.rows.forEach((row, r) => {
     const line = r + 2;
-    const person = cell(row, 'person');
+    const person = restoreCell(cell(row, 'person'));
     const t = Number(cell(row, 't'));
     if (!Number.isInteger(t) || t < 0) {
-      diagnostics.push({ code: 'bad_bin_index', message: `\`t\` is \`${cell(row, 't')}\`, not a whole number ≥ 0; row skipped`, source: { file, line }, stage: 'dynamics' });
+      diagnostics.push({ code: 'bad_bin_index', message: `\`t\` is ${describeValue(cell(row, 't'))}, not a whole number ≥ 0; row skipped`, source: { file, line }, stage: 'dynamics' });
       return;
     }
     const values = scores.map((s) => {
@@ -55,7 +57,7 @@ export function parseSeriesCsv(text: string, file = 'series-long.csv'): ParsedSe
       if (raw === '') return undefined;
       const v = Number(raw);
       if (!Number.isFinite(v)) {
-        diagnostics.push({ code: 'bad_number', message: `\`${s}\` is \`${raw}\`, not a number; treated as missing`, source: { file, line }, stage: 'dynamics' });
+        diagnostics.push({ code: 'bad_number', message: `\`${s}\` is ${describeValue(raw)}, not a number; treated as missing`, source: { file, line }, stage: 'dynamics' });
         return undefined;
       }
       return v;

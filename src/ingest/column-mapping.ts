@@ -1,4 +1,5 @@
 import { usageError } from '../errors.js';
+import { describeColumns, headerLooksLikeData } from '../privacy/describe-columns.js';
 
 /** Which input column holds each field of an entry. */
 export interface ColumnMapping {
@@ -49,7 +50,7 @@ export function resolveColumns(mapping: ColumnMapping, header: readonly string[]
     const hint = delimiter
       ? ` The header is one column that contains \`${delimiter === '\t' ? '\\t' : delimiter}\`: the file seems to use another delimiter; pass --delimiter '${delimiter === '\t' ? '\\t' : delimiter}'.`
       : ` Map your columns with --columns ${missing.map(([f]) => `${f}=COLUMN`).join(',')}.`;
-    throw usageError(`Cannot read \`${file}\`: no column ${missing.map(([f, c]) => `\`${c}\` (${f})`).join(', ')}; the header has ${header.map((h) => `\`${h}\``).join(', ') || 'no columns'}.${hint}`);
+    throw usageError(`Cannot read \`${file}\`: no column ${missing.map(([f, c]) => `\`${c}\` (${f})`).join(', ')}; the header has ${describeColumns(header)}.${headerLooksLikeData(header) ? '' : hint}`);
   }
   return {
     ...mapping,

@@ -3,6 +3,7 @@ import { writeAscii } from '../text/ascii-bytes.js';
 import { inTimeWindow, type TimeWindow } from './time-window.js';
 import { daysInMonth, utcFromFields } from './utc-from-fields.js';
 import { resolveWallClock, zoneOffset, type WallClockPolicy } from './zone-offset.js';
+import { describeValue, omitValue } from '../privacy/describe-value.js';
 
 /** How timestamps are read. */
 export interface TimeOptions {
@@ -134,7 +135,7 @@ function commonFields(value: string): DateTimeFields | undefined {
 }
 
 function bad(value: string, what: string): InstantResult {
-  return { ok: false, code: 'bad_time', message: `cannot read the time \`${value.slice(0, 60)}\`: ${what}` };
+  return { ok: false, code: 'bad_time', message: `cannot read the time (${describeValue(value)}): ${omitValue(what, value)}` };
 }
 
 /**

@@ -5,6 +5,7 @@ import { DEFAULT_TIME_OPTIONS, parseInstant, type TimeOptions } from './parse-in
 import { readRecordBatches, type ReadRecordsOptions } from './read-records.js';
 import { isValidZone, zoneOffset } from './zone-offset.js';
 import { zoneAtInstant, zoneOnLocalDate, type ZoneTable } from './zone-table.js';
+import { describeValue } from '../privacy/describe-value.js';
 
 export interface ReadEntriesOptions extends ReadRecordsOptions {
   columns?: ColumnMapping | string;
@@ -12,6 +13,9 @@ export interface ReadEntriesOptions extends ReadRecordsOptions {
   time?: TimeOptions;
 }
 
+/** Values shown as they are in a diagnostic: what looks like an IANA zone name or a person id (see describeValue). */
+const ZONE_LIKE = /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/;
+const ID_LIKE = /^[\p{L}\p{N}_.:@#-]+$/u;
 /** Column of entries pseudonymized at import that holds the key's check value (see entryLine). */
 export const PSEUDONYM_KEY_COLUMN = 'pseudonym_key';
 
@@ -36,11 +40,11 @@ export function recordToEntry(record: Record<string, string>, source: SourceRef,
   const timeText = (record[columns.time] ?? '').trim();
   let zone = columns.zone ? (record[columns.zone] ?? '').trim() : '';
   if (zone !== '') {
-    if (!isValidZone(zone)) return reject('unknown_zone', `unknown time zone \`${zone}\`; expected an IANA name such as Europe/Brussels`, source);
+    if (!isValidZone(zone)) return reject('unknown_zone', `unknown time zone ${describeValue(zone, ZONE_LIKE)}; expected an IANA name such as Europe/Brussels`, source);
   } else {
     const date = /^\d{4}-\d{2}-\d{2}/.test(timeText) ? timeText.slice(0, 10) : undefined;
     zone = (date ? zoneOnLocalDate(zones, person, date) : undefined) ?? zoneAtInstant(zones, person, 0) ?? '';
-    if (zone === '') return reject('no_zone', `person \`${person}\` has no time zone; list them in --zones or pass --time-zone`, source);
+    if (zone === '') return reject('no_zone', `person ${describeValue(person, ID_LIKE)} has no time zone; list them in --zones or pass --time-zone`, source);
   }
   const parsed = parseInstant(timeText, zone, time);
   if (!parsed.ok) return reject(parsed.code, parsed.message, source);

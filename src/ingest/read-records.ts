@@ -243,6 +243,16 @@ async function* readDelimited(path: string, delimiter: string, maxField: number,
   }
 }
 
+/**
+ * Where JSON.parse stopped, from its error (` at character 13`), or nothing: its message is not
+ * shown, since V8 quotes the text it could not read (a participant's words).
+ */
+function jsonErrorPlace(error: unknown): string {
+  const position = /position (\d+)/.exec((error as Error).message);
+  return position ? ` at character ${Number(position[1]) + 1}` : '';
+}
+
+
 /** A JSON value nested deeper than this (objects and arrays) makes its row `bad_json`: no mapped field is that deep. */
 const MAX_JSON_DEPTH = 64;
 
@@ -296,7 +306,7 @@ async function* readJsonLines(path: string, maxField: number, onBytes?: (bytes: 
     try {
       parsed = JSON.parse(text);
     } catch (error) {
-      items.push(reject(file, line, 'bad_json', `the line is not valid JSON (${(error as Error).message}); each line must hold one JSON object`));
+      items.push(reject(file, line, 'bad_json', `the line is not valid JSON${jsonErrorPlace(error)}; each line must hold one JSON object`));
       continue;
     }
     const record = toRecord(parsed);
@@ -334,7 +344,7 @@ async function* readJsonArray(path: string, maxField: number, onBytes?: (bytes: 
   try {
     parsed = JSON.parse(text);
   } catch (error) {
-    throw inputError(`Cannot read \`${path}\`: not valid JSON (${(error as Error).message}); expected an array of objects, or use JSON Lines (.jsonl).`);
+    throw inputError(`Cannot read \`${path}\`: not valid JSON${jsonErrorPlace(error)}; expected an array of objects, or use JSON Lines (.jsonl).`);
   }
   if (!Array.isArray(parsed)) throw inputError(`Cannot read \`${path}\`: the JSON is not an array; expected [ {…}, {…} ] with one object per entry.`);
   let items: RecordItem[] = [{ kind: 'header', columns: [], source: { file, line: 1 } }];

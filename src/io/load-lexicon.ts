@@ -7,6 +7,7 @@ import type { Lexicon } from '../lexicon/lexicon-types.js';
 import { parseLexicon } from '../lexicon/parse-lexicon.js';
 import { applyLexiconOverrides } from '../terms/apply-lexicon-overrides.js';
 import { parseLexiconOverrides } from '../terms/lexicon-overrides.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** Extension of lexicon files. */
 export const LEXICON_EXTENSION = '.lex.tsv';
@@ -45,7 +46,7 @@ export async function readLexicon(nameOrPath: string): Promise<Lexicon> {
   }
   const { lexicon, problems } = parseLexicon(text);
   if (!lexicon) {
-    const shown = [...problems].sort((a, b) => a.line - b.line).slice(0, 20).map((p) => `  line ${p.line}: ${p.message}`).join('\n');
+    const shown = [...problems].sort((a, b) => a.line - b.line).slice(0, 20).map((p) => `  line ${p.line}: ${diagnosticText(p.message, 300)}`).join('\n');
     const more = problems.length > 20 ? `\n  … and ${problems.length - 20} more` : '';
     throw usageError(`Cannot use lexicon \`${basename(path)}\`: ${problems.length} problem${problems.length === 1 ? '' : 's'}; fix them and run again:\n${shown}${more}`);
   }
@@ -64,7 +65,7 @@ async function readOverriddenLexicon(path: string, depth: number): Promise<Lexic
     throw usageError(`Cannot read override file \`${path}\`: no such file; check the path.`);
   }
   const fail = (problems: ReadonlyArray<{ line: number; message: string }>): never => {
-    const shown = [...problems].sort((a, b) => a.line - b.line).slice(0, 20).map((p) => `  line ${p.line}: ${p.message}`).join('\n');
+    const shown = [...problems].sort((a, b) => a.line - b.line).slice(0, 20).map((p) => `  line ${p.line}: ${diagnosticText(p.message, 300)}`).join('\n');
     throw usageError(`Cannot use override file \`${basename(path)}\`: ${problems.length} problem${problems.length === 1 ? '' : 's'}; fix them and run again:\n${shown}`);
   };
   const { overrides, problems } = parseLexiconOverrides(text);

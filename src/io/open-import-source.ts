@@ -62,7 +62,7 @@ async function settleChatDateOrder(path: string): Promise<{ order: DateOrder; ev
   const seen = new Set<string>();
   for await (const { text } of readDecodedLines(path)) {
     const parsed = parseChatLine(text);
-    if (parsed.kind === 'continuation') continue;
+    if (parsed.kind === 'continuation' || parsed.kind === 'damaged') continue;
     const key = `${parsed.stamp.firstDigits}:${parsed.stamp.parts[0]}/${parsed.stamp.parts[1]}`;
     if (seen.has(key)) continue; // the first two numbers decide; keep memory small on long logs
     seen.add(key);

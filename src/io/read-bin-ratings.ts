@@ -2,6 +2,7 @@ import { readFile } from 'node:fs/promises';
 import Papa from 'papaparse';
 import { usageError } from '../errors.js';
 import type { RatingsByBin } from './run-dynamics.js';
+import { describeColumns } from '../privacy/describe-columns.js';
 
 /**
  * Reads self-reports aggregated per bin from the aligned pairs file that `lexichron validate`
@@ -21,7 +22,7 @@ export async function readBinRatings(path: string, ratingColumns: readonly strin
   }
   if (ratingColumns.length === 0) throw usageError('Name the rating columns to add with --rating, e.g. --rating mood.');
   const missing = ratingColumns.filter((c) => !header.includes(c));
-  if (missing.length > 0) throw usageError(`\`${path}\` has no column ${missing.map((m) => `\`${m}\``).join(', ')}; its columns are ${header.map((h) => `\`${h}\``).join(', ')}.`);
+  if (missing.length > 0) throw usageError(`\`${path}\` has no column ${missing.map((m) => `\`${m}\``).join(', ')}; its columns are ${describeColumns(header)}.`);
   const at = (name: string): number => header.indexOf(name);
   const byBin = new Map<string, Record<string, number | undefined>>();
   for (const row of rows) {

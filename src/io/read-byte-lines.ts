@@ -3,7 +3,7 @@ import { stat } from 'node:fs/promises';
 import { inputError, usageError } from '../errors.js';
 import { decodeTextLine } from '../ingest/import/decode-text-line.js';
 import type { NumberedLine } from '../ingest/import/read-chat-lines.js';
-import { splitByteLines, type ByteLine } from '../ingest/import/split-byte-lines.js';
+import { splitByteLines, type ByteLine, type SplitByteLinesOptions } from '../ingest/import/split-byte-lines.js';
 
 /** Throws a usage error naming the problem when `path` is not a readable file. */
 export async function assertInputFile(path: string): Promise<void> {
@@ -19,19 +19,22 @@ export async function assertInputFile(path: string): Promise<void> {
 }
 
 /** Streams the lines of a file as bytes (1 MiB reads); see splitByteLines. */
-export async function* readByteLines(path: string): AsyncGenerator<ByteLine> {
+export async function* readByteLines(path: string, options: SplitByteLinesOptions = {}): AsyncGenerator<ByteLine> {
   await assertInputFile(path);
   const stream = createReadStream(path, { highWaterMark: 1 << 20 });
   try {
-    yield* splitByteLines(stream);
+    yield* splitByteLines(stream, options);
   } finally {
     stream.destroy();
   }
 }
 
-/** Streams the lines of a text file decoded with decodeTextLine (UTF-8, Windows-1252 fallback, mojibake repaired). */
+/**
+ * Streams the lines of a text file decoded with decodeTextLine (UTF-8, Windows-1252 fallback,
+ * mojibake repaired). LF, CR and CRLF all end a line, so a stray CR cannot hide a line's start.
+ */
 export async function* readDecodedLines(path: string): AsyncGenerator<NumberedLine> {
-  for await (const { line, bytes } of readByteLines(path)) {
+  for await (const { line, bytes } of readByteLines(path, { crBreaks: true })) {
     const decoded = decodeTextLine(bytes);
     yield decoded.repaired ? { line, text: decoded.text, repaired: decoded.repaired } : { line, text: decoded.text };
   }

@@ -9,6 +9,7 @@ import { readRecords, type TableFormat } from '../ingest/read-records.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import type { AuditEntry } from '../terms/term-auditor.js';
 import type { Diagnostic } from '../types.js';
+import { describeColumns } from '../privacy/describe-columns.js';
 
 /** How to read a corpus for `terms suggest` and `terms audit`. */
 export interface ReadCorpusOptions {
@@ -61,7 +62,7 @@ export async function* readCorpus(path: string, options: ReadCorpusOptions = {})
   let idColumn: string | undefined;
   const check = (header: readonly string[]): void => {
     if (!header.includes(mapping.text)) {
-      throw usageError(`Cannot read \`${file}\`: no text column \`${mapping.text}\`; the header has ${header.map((h) => `\`${h}\``).join(', ') || 'no columns'}. Name the text column with --columns text=COLUMN.`);
+      throw usageError(`Cannot read \`${file}\`: no text column \`${mapping.text}\`; the header has ${describeColumns(header)}. Name the text column with --columns text=COLUMN.`);
     }
     hasPerson = header.includes(mapping.person);
     idColumn = mapping.id ?? (header.includes('id') ? 'id' : undefined);

@@ -2,6 +2,7 @@ import { basename } from 'node:path';
 import { usageError } from '../errors.js';
 import { readRecords } from '../ingest/read-records.js';
 import { buildZoneTable, type ZoneTable } from '../ingest/zone-table.js';
+import { describeColumns } from '../privacy/describe-columns.js';
 
 /**
  * Reads a zone file (CSV/TSV/JSONL with columns `person`, `zone` and optionally `from`, the local
@@ -14,7 +15,7 @@ export async function readZoneFile(path: string | undefined, fallback?: string):
   for await (const item of readRecords(path)) {
     if (item.kind === 'header') {
       if (item.columns.length > 0 && (!item.columns.includes('person') || !item.columns.includes('zone'))) {
-        throw usageError(`Cannot read \`${file}\`: a zone file needs the columns \`person\` and \`zone\` (and optionally \`from\`); the header has ${item.columns.map((c) => `\`${c}\``).join(', ')}`);
+        throw usageError(`Cannot read \`${file}\`: a zone file needs the columns \`person\` and \`zone\` (and optionally \`from\`); the header has ${describeColumns(item.columns)}`);
       }
       continue;
     }

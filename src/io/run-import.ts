@@ -7,6 +7,7 @@ import { csvRow } from '../report/csv.js';
 import { TOOL_VERSION } from '../version.js';
 import { openAtomicLineWriter, writeFileAtomic } from './atomic-write.js';
 import { openImportSource, type ImportSourceSpec } from './open-import-source.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** Everything `lexichron import` needs. */
 export interface RunImportOptions {
@@ -63,7 +64,7 @@ export async function runImport(options: RunImportOptions): Promise<RunImportRes
         await entries.write(entryLine(entry));
       } else if (item.kind === 'reject') {
         const d = item.diagnostic;
-        const message = options.aggregatesOnly ? d.code : options.redactMessages(d.message);
+        const message = options.aggregatesOnly ? d.code : diagnosticText(options.redactMessages(d.message));
         const file = d.source ? (options.pseudonyms ? 'input' : d.source.file) : '';
         await rejects.write(csvRow([file, d.source ? String(d.source.line) : '', d.code, message]));
       }

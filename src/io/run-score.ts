@@ -16,7 +16,9 @@ import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } fr
 import { createScorePool, scoreWorkerCount, type ScorePool } from './score-pool.js';
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
+import { shardFilter, type ShardSpec } from '../shard/shard-of-person.js';
 import { openAtomicLineWriter, writeFileAtomic, type AtomicLineWriter } from './atomic-write.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** One input file with how to read it. */
 export interface ScoreInput {
@@ -68,6 +70,14 @@ export interface RunScoreOptions {
   onEntry?: (entry: ScoredEntry) => void;
   /** Also receives each entry with its text, after pseudonymization and before scoring (for the term audit of `run`). */
   onRawEntry?: (entry: RawEntry) => void;
+  /**
+   * Score only this shard's persons (shardOfPerson of the id as written). Rows of other persons
+   * are counted as `otherShard` in the reconciliation; rejected rows and drops belong to shard 0
+   * (the others count them as `otherShard`), so the shards' counts add up to a whole run's. The
+   * position of each scored row among all rows read is written to `<out>.seq` (one number a
+   * line), which `lexichron merge` uses to put the rows back in input order.
+   */
+  shard?: ShardSpec;
 }
 
 /** Description of an input file for the manifest. */
@@ -150,13 +160,20 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
   let markedEntries = false;
   let inputName = '';
   const row = scoreRowFiller(columns, options.lexicons, keepText);
+  const shard = options.shard;
+  const inShard = shard ? shardFilter(shard) : undefined;
+  /** Rows a shard leaves to another shard; only rejects and drops of shard 0 are its own. */
+  const rowsElsewhere = shard !== undefined && shard.index !== 0;
+  if (shard) reconciliation.otherShard = 0;
+  let seqWriter: AtomicLineWriter | undefined;
   try {
+    if (shard) seqWriter = await openAtomicLineWriter(`${options.out}.seq`);
     await scores.write(csvRow(scoresHeader(columns, options.lexicons, keepText)));
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
     const addReject = async (d: Diagnostic): Promise<void> => {
       reconciliation.rejected[d.code] = (reconciliation.rejected[d.code] ?? 0) + 1;
       const file = pseudonyms && d.source ? inputName : (d.source?.file ?? '');
-      await rejects.write(csvRow([file, String(d.source?.line ?? ''), d.stage, d.code, d.message]));
+      await rejects.write(csvRow([file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
     };
     if (pool) pool.setLexicons(options.lexicons);
     else pool = createScorePool(options.lexicons, await scoreWorkerCount(options.inputs.map((input) => input.path), options.workers));
@@ -166,13 +183,16 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     // Entries are scored in batches and written in input order, by the workers when there are any
     // (at most INFLIGHT_PER_WORKER batches in flight per worker, so memory stays bounded), else in
     // this thread.
-    const inflight: Array<{ entries: RawEntry[]; scores: Promise<BatchScores> }> = [];
+    const inflight: Array<{ entries: RawEntry[]; seqs: number[]; scores: Promise<BatchScores> }> = [];
     let batch: RawEntry[] = [];
+    let batchSeqs: number[] = [];
     const maxInflight = pool ? INFLIGHT_PER_WORKER * pool.size + 4 : 0;
     const submit = (): void => {
       if (batch.length === 0) return;
       const entries = batch;
+      const seqs = batchSeqs;
       batch = [];
+      batchSeqs = [];
       const texts = entries.map((e) => e.text);
       // When the workers fall behind (they tokenize, which costs most on text with many rare
       // words), this thread scores the batch's VADER lexicons itself, from the pieces the worker
@@ -187,13 +207,14 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
           return scores;
         });
       }
-      inflight.push({ entries, scores: scored });
+      inflight.push({ entries, seqs, scores: scored });
     };
     let firstRows = options.onFirstRows;
     const drain = async (keep: number): Promise<void> => {
       while (inflight.length > keep) {
-        const { entries, scores: pendingScores } = inflight.shift() as (typeof inflight)[number];
+        const { entries, seqs, scores: pendingScores } = inflight.shift() as (typeof inflight)[number];
         const scored = await pendingScores;
+        if (seqWriter && seqs.length > 0) await seqWriter.write(seqs.join('\n'));
         if (firstRows) {
           firstRows();
           firstRows = undefined;
@@ -231,6 +252,10 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
           rows++;
           reconciliation.read++;
           if (reconciliation.read % 1000 === 0) options.onProgress?.(reconciliation.read);
+          if (item.kind !== 'entry' && rowsElsewhere) {
+            reconciliation.otherShard = (reconciliation.otherShard ?? 0) + 1;
+            continue;
+          }
           if (item.kind === 'drop') {
             reconciliation.dropped[item.reason] = (reconciliation.dropped[item.reason] ?? 0) + 1;
             continue;
@@ -247,11 +272,20 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
               entry.source = { ...entry.source, file: inputName };
             }
           } else if (pseudonyms && entry.pseudonymKey !== pseudonyms.keyCheck) {
+            if (rowsElsewhere) {
+              reconciliation.otherShard = (reconciliation.otherShard ?? 0) + 1;
+              continue;
+            }
             await addReject({ code: 'pseudonym_other_key', message: 'the entry was pseudonymized at import with another key; give the key it was imported with, or import the export again with this key', source: entry.source, stage: 'ingest' });
             continue;
           } else markedEntries = true; // pseudonymized once, at import: kept as it is
+          if (inShard && !inShard(entry.person)) {
+            reconciliation.otherShard = (reconciliation.otherShard ?? 0) + 1;
+            continue;
+          }
           options.onRawEntry?.(entry);
           batch.push(entry);
+          if (seqWriter) batchSeqs.push(reconciliation.read);
           if (batch.length >= BATCH_SIZE) {
             submit();
             if (inflight.length > maxInflight) await drain(maxInflight);
@@ -271,13 +305,16 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       inputs,
       reconciliation,
       options: { keepText, time: options.time, pseudonymized: options.person !== undefined || pseudonyms !== undefined || markedEntries },
+      ...(shard ? { shard } : {}),
     };
     await scores.commit();
     await rejects.commit();
+    await seqWriter?.commit();
     await writeFileAtomic(sidecars.meta, JSON.stringify(meta, null, 2) + '\n');
   } catch (error) {
     await scores.abort();
     await rejects.abort();
+    await seqWriter?.abort();
     throw error;
   } finally {
     await pool?.close();

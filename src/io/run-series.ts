@@ -5,7 +5,7 @@ import { inputError, usageError } from '../errors.js';
 import { readRecords } from '../ingest/read-records.js';
 import { formatLocal } from '../ingest/parse-instant.js';
 import { isValidZone, zoneOffset } from '../ingest/zone-offset.js';
-import { csvRow } from '../report/csv.js';
+import { csvRow, restoreCell } from '../report/csv.js';
 import { tableResource, type TableResource } from '../report/data-dictionary.js';
 import { formatNumber } from '../report/format-number.js';
 import { seriesHeader, seriesRow, type SeriesLayout } from '../report/series-rows.js';
@@ -18,6 +18,9 @@ import { openAtomicLineWriter } from './atomic-write.js';
 import { mergedDataPackage } from './merge-data-package.js';
 import { fileDigest } from './run-score.js';
 import { TOOL_VERSION } from '../version.js';
+import { shardFilter, type ShardSpec } from '../shard/shard-of-person.js';
+import { describeValue } from '../privacy/describe-value.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** Score column metadata from a scores sidecar (`scores.csv.meta.json`). */
 export interface ScoreColumnMeta {
@@ -35,6 +38,8 @@ export interface RunSeriesOptions extends Omit<SeriesOptions, 'reducers'> {
   allReducer?: BinReducer;
   /** Only these score columns (default: all). */
   columns?: string[];
+  /** Bin only this shard's persons (see shardOfPerson); other persons' rows are counted as `otherShard`. */
+  shard?: ShardSpec;
   /** Most bins one person's series may have (default 100,000); more stops the run, naming the person and the entries at the ends. */
   maxBins?: number;
   /** A person whose entries span more days than this gets a warning (default 730). */
@@ -62,6 +67,8 @@ export interface RunSeriesResult {
   rejected: Record<string, number>;
   columns: Array<ScoreColumnMeta & { reducer: BinReducer }>;
   resources: TableResource[];
+  /** Only with a shard: scores rows of persons of other shards. */
+  otherShard?: number;
   /** Warnings for the user: persons whose entries span more than warnSpanDays (positions and counts only). */
   warnings: string[];
 }
@@ -130,10 +137,12 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
   const rejected: Record<string, number> = {};
   let entries = 0;
   let state: ReturnType<typeof createSeriesState> | undefined;
+  const inShard = options.shard ? shardFilter(options.shard) : undefined;
+  let otherShard = 0;
   const ends = new Map<string, { first: EntryEnd; last: EntryEnd }>();
   const reject = async (d: Diagnostic): Promise<void> => {
     rejected[d.code] = (rejected[d.code] ?? 0) + 1;
-    await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, d.message]));
+    await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
   };
   try {
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
@@ -170,12 +179,16 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       const zone = r.zone ?? '';
       const words = Number(r.words);
       if (!isValidZone(zone)) {
-        await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone \`${zone}\`; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
+        await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone ${describeValue(zone, /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/)}; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
         continue;
       }
       if (!(r.person ?? '').trim() || !inTimeWindow(instant, undefined) || !Number.isInteger(words) || words < 0) {
-        const what = !(r.person ?? '').trim() ? 'no person' : !inTimeWindow(instant, undefined) ? 'time_utc is not an RFC 3339 instant with a year 0000–9999' : `words \`${r.words ?? ''}\` is not a whole number ≥ 0`;
+        const what = !(r.person ?? '').trim() ? 'no person' : !inTimeWindow(instant, undefined) ? `time_utc (${describeValue(r.time_utc ?? '')}) is not an RFC 3339 instant with a year 0000–9999` : `words (${describeValue(r.words ?? '')}) is not a whole number ≥ 0`;
         await reject({ code: 'bad_score_row', message: `${what}; the series stage reads rows written by lexichron score`, source: item.source, stage: 'series' });
+        continue;
+      }
+      if (inShard && !inShard(restoreCell((r.person as string).trim()))) {
+        otherShard++;
         continue;
       }
       const values = idx.map((i) => {
@@ -184,17 +197,17 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       });
       const matched = nIdx.map((i) => (i >= 0 ? Number(r[(header as string[])[i] as string] ?? 0) || 0 : 0));
       entries++;
-      const person = (r.person as string).trim();
-      const here: EntryEnd = { instant, id: r.entry_id ?? '', line: item.source.line };
+      const person = restoreCell((r.person as string).trim());
+      const here: EntryEnd = { instant, id: restoreCell(r.entry_id ?? ''), line: item.source.line };
       const end = ends.get(person);
       if (!end) ends.set(person, { first: here, last: here });
       else if (instant < end.first.instant) end.first = here;
       else if (instant > end.last.instant) end.last = here;
-      const placed = addSeriesEntry(state as NonNullable<typeof state>, { person: (r.person as string).trim(), instant, zone, words, values, matched });
+      const placed = addSeriesEntry(state as NonNullable<typeof state>, { person, instant, zone, words, values, matched });
       await events.write(
         csvRow([
-          r.entry_id ?? '',
-          r.person as string,
+          restoreCell(r.entry_id ?? ''),
+          person,
           r.time_utc as string,
           formatLocal(instant, zoneOffset(zone, instant)),
           zone,
@@ -266,7 +279,8 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
           lexicons: lexicons ?? 'unknown: the scores file has no .meta.json sidecar',
           options: { bin: options.bin.text, dayStart: options.dayStart, minWords: options.minWords, excludeHours: options.excludeHours, fill: options.fill, maxFill: options.maxFill, detrend: options.detrend, span: options.span, windows: options.windows ? options.windows.size : 0 },
           columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
-          counts: { persons: persons.length, bins, observed, missing, entries, excludedEntries: state.excludedEntries, rejected },
+          counts: { persons: persons.length, bins, observed, missing, entries, excludedEntries: state.excludedEntries, rejected, ...(options.shard ? { otherShard } : {}) },
+          ...(options.shard ? { shard: options.shard } : {}),
         }, null, 2) + '\n';
       const describe = (name: string): string | undefined => {
         const base = name.replace(/@\d+$/, '');
@@ -312,6 +326,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
         rejected,
         columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
         resources,
+        ...(options.shard ? { otherShard } : {}),
         warnings,
       };
     } catch (error) {

@@ -1,7 +1,7 @@
 import { join, relative } from 'node:path';
 import type { StageOutput, StudyContext, StudyStage } from '../pipeline.js';
 import { fileDigest } from './run-score.js';
-import { runDynamics, type RatingsByBin } from './run-dynamics.js';
+import { runDynamics, type RatingsByBin, type RunDynamicsOptions } from './run-dynamics.js';
 import { runValidate } from './run-validate.js';
 import type { FileRecord } from '../report/manifest.js';
 import type { TableResource } from '../report/data-dictionary.js';
@@ -80,52 +80,61 @@ export const validateStage: StudyStage = async (context) => {
 };
 
 /** Dynamics stage of `run`: every score column (and the self-reports per bin, when validated by bins), into `dynamics/`. */
-export const dynamicsStage: StudyStage = async (context) => {
-  const settings = context.study.dynamics;
-  if (settings === false) return undefined;
-  const dir = join(context.outDir, 'dynamics');
-  const ratings = settings.includeRatings ? (context.shared.ratingsByBin as RatingsByBin | undefined) : undefined;
-  const run = await runDynamics(
-    context.series.longPath,
-    dir,
-    {
-      ...(settings.variables ? { variables: settings.variables } : {}),
-      ...(settings.pairs ? { pairs: settings.pairs.map((p) => p.split(':') as [string, string]) } : {}),
-      minLagPairs: settings.minPairs,
-      ccm: {
-        ...(settings.embedding !== undefined ? { E: settings.embedding } : {}),
-        maxE: settings.maxEmbedding,
-        tau: settings.tau,
-        exclusionRadius: settings.exclusionRadius,
-        librarySizeCount: settings.librarySizes,
-        samples: settings.libraries,
-        surrogates: settings.surrogates,
-      },
-      skipCrossMapping: !settings.crossMapping,
-      stack: settings.stack,
-      seed: context.seed,
-    },
-    ratings,
-  );
-  return {
-    resources: rerooted(run.resources, 'dynamics'),
-    outputs: await records(context.outDir, dir, run.files),
-    summary: {
-      persons: run.persons,
-      variables: run.variables,
-      ready: run.result.summaries.filter((s) => s.ready).length,
-      series: run.result.summaries.length,
-      crossMapping: run.result.ccm.length,
-      converging: run.result.ccm.filter((c) => c.converges).length,
-      diagnostics: run.diagnostics.length,
-    },
-  };
-};
+export const dynamicsStage: StudyStage = (context) => dynamicsStageWith({})(context);
 
-/** The stages `lexichron run` calls after score and series, in order. */
-export function defaultStudyStages(): Array<[string, StudyStage]> {
+/** The dynamics stage with threads and progress reporting for cross mapping (see runDynamics). */
+export function dynamicsStageWith(threading: RunDynamicsOptions): StudyStage {
+  return async (context) => {
+    const settings = context.study.dynamics;
+    if (settings === false) return undefined;
+    const dir = join(context.outDir, 'dynamics');
+    const ratings = settings.includeRatings ? (context.shared.ratingsByBin as RatingsByBin | undefined) : undefined;
+    const run = await runDynamics(
+      context.series.longPath,
+      dir,
+      {
+        ...(settings.variables ? { variables: settings.variables } : {}),
+        ...(settings.pairs ? { pairs: settings.pairs.map((p) => p.split(':') as [string, string]) } : {}),
+        minLagPairs: settings.minPairs,
+        ccm: {
+          ...(settings.embedding !== undefined ? { E: settings.embedding } : {}),
+          maxE: settings.maxEmbedding,
+          tau: settings.tau,
+          ...(settings.exclusionRadius !== undefined ? { exclusionRadius: settings.exclusionRadius } : {}),
+          librarySizeCount: settings.librarySizes,
+          samples: settings.libraries,
+          surrogates: settings.surrogates,
+          lagScan: settings.lagScan,
+        },
+        season: settings.season,
+        skipCrossMapping: !settings.crossMapping,
+        stack: settings.stack,
+        seed: context.seed,
+      },
+      ratings,
+      threading,
+    );
+    return {
+      resources: rerooted(run.resources, 'dynamics'),
+      outputs: await records(context.outDir, dir, run.files),
+      summary: {
+        persons: run.persons,
+        variables: run.variables,
+        ready: run.result.summaries.filter((s) => s.ready).length,
+        series: run.result.summaries.length,
+        crossMapping: run.result.ccm.length,
+        converging: run.result.ccm.filter((c) => c.converges).length,
+        drives: run.result.ccm.filter((c) => c.verdict === 'drives').length,
+        diagnostics: run.diagnostics.length,
+      },
+    };
+  };
+}
+
+/** The stages `lexichron run` calls after score and series, in order (`dynamics`: threads and progress of cross mapping). */
+export function defaultStudyStages(options: { dynamics?: RunDynamicsOptions } = {}): Array<[string, StudyStage]> {
   return [
     ['validation', validateStage],
-    ['dynamics', dynamicsStage],
+    ['dynamics', dynamicsStageWith(options.dynamics ?? {})],
   ];
 }

@@ -33,6 +33,11 @@ export interface ParseLexiconResult {
   problems: LexiconProblem[];
 }
 
+/** A value from the file as a problem quotes it: in backticks, cut after 60 characters (a line may be megabytes long). */
+function shown(value: string): string {
+  return `\`${value.length > 60 ? `${value.slice(0, 60)}…` : value}\``;
+}
+
 /**
  * Reads the text of a lexichron lexicon file (format in lexicons/README.md).
  *
@@ -62,7 +67,7 @@ export function parseLexicon(text: string): ParseLexiconResult {
       const key = fields[0] ?? '';
       const values = fields.slice(1).filter((v) => v !== '');
       if (!KNOWN_KEYS.has(key)) {
-        problems.push({ line: lineNo, message: `unknown metadata key \`${key}\`; known keys are ${[...KNOWN_KEYS].join(', ')}` });
+        problems.push({ line: lineNo, message: `unknown metadata key ${shown(key)}; known keys are ${[...KNOWN_KEYS].join(', ')}` });
         continue;
       }
       if (key === 'category') {
@@ -70,9 +75,9 @@ export function parseLexicon(text: string): ParseLexiconResult {
         if (!name || !aggregation) {
           problems.push({ line: lineNo, message: 'a category line needs a name and an aggregation: `## category<TAB>worry<TAB>count`' });
         } else if (!AGGREGATIONS.includes(aggregation as Aggregation)) {
-          problems.push({ line: lineNo, message: `unknown aggregation \`${aggregation}\` for category \`${name}\`; use count, rating or sum` });
+          problems.push({ line: lineNo, message: `unknown aggregation ${shown(aggregation)} for category ${shown(name)}; use count, rating or sum` });
         } else if (categories.some((c) => c.name === name)) {
-          problems.push({ line: lineNo, message: `category \`${name}\` is declared twice` });
+          problems.push({ line: lineNo, message: `category ${shown(name)} is declared twice` });
         } else {
           categories.push({ name, aggregation: aggregation as Aggregation, description: description.join(' ') });
         }
@@ -82,7 +87,7 @@ export function parseLexicon(text: string): ParseLexiconResult {
         notes.push(values.join(' '));
         continue;
       }
-      if (meta.has(key)) problems.push({ line: lineNo, message: `metadata key \`${key}\` appears twice` });
+      if (meta.has(key)) problems.push({ line: lineNo, message: `metadata key ${shown(key)} appears twice` });
       meta.set(key, values);
       continue;
     }
@@ -107,22 +112,22 @@ export function parseLexicon(text: string): ParseLexiconResult {
       continue;
     }
     if (term !== '*' && term.includes('*') && !isWildcard(term) && /^[\p{L}\p{M}\p{N}\s'’-]*\*[\p{L}\p{M}\p{N}\s'’*-]*$/u.test(term)) {
-      problems.push({ line: lineNo, message: `\`${term}\`: a wildcard may only end a single word, as in \`worr*\`` });
+      problems.push({ line: lineNo, message: `${shown(term)}: a wildcard may only end a single word, as in \`worr*\`` });
       continue;
     }
     if (term === '*' || (isWildcard(term) && term.length - 1 < MIN_WILDCARD_STEM)) {
-      problems.push({ line: lineNo, message: `wildcard \`${term}\` is too short: it would match nearly every word; give at least ${MIN_WILDCARD_STEM} letters before *` });
+      problems.push({ line: lineNo, message: `wildcard ${shown(term)} is too short: it would match nearly every word; give at least ${MIN_WILDCARD_STEM} letters before *` });
       continue;
     }
     const weightText = weightRaw.trim() === '' ? '1' : weightRaw.trim();
     const weight = Number(weightText);
     if (!Number.isFinite(weight) || !/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(weightText)) {
-      problems.push({ line: lineNo, message: `weight \`${weightRaw}\` of \`${term}\` is not a number; write it with a dot as decimal mark, e.g. 1.5` });
+      problems.push({ line: lineNo, message: `weight ${shown(weightRaw)} of ${shown(term)} is not a number; write it with a dot as decimal mark, e.g. 1.5` });
       continue;
     }
     const status = (statusRaw.trim().toLowerCase() || 'accepted') as TermStatus;
     if (!STATUSES.includes(status)) {
-      problems.push({ line: lineNo, message: `status \`${statusRaw}\` of \`${term}\` is not one of accepted, pending, rejected` });
+      problems.push({ line: lineNo, message: `status ${shown(statusRaw)} of ${shown(term)} is not one of accepted, pending, rejected` });
       continue;
     }
     terms.push({ term, category, weight, status, line: lineNo });
@@ -138,22 +143,22 @@ export function parseLexicon(text: string): ParseLexiconResult {
     problems.push({ line: 1, message: '`## scale` needs two numbers, lowest then highest weight, e.g. `## scale<TAB>-5<TAB>5`' });
   } else scale = [scaleValues[0] as number, scaleValues[1] as number];
   const scoring = meta.get('scoring')?.[0] ?? 'rules';
-  if (scoring !== 'rules' && scoring !== 'vader' && scoring !== 'plain-words') problems.push({ line: 1, message: `unknown scoring \`${scoring}\`; use rules, vader or plain-words` });
+  if (scoring !== 'rules' && scoring !== 'vader' && scoring !== 'plain-words') problems.push({ line: 1, message: `unknown scoring ${shown(scoring)}; use rules, vader or plain-words` });
   const negation = (meta.get('negation')?.[0] ?? 'ignore') as NegationRule;
-  if (!NEGATIONS.includes(negation)) problems.push({ line: 1, message: `unknown negation rule \`${negation}\`; use flip, drop or ignore` });
+  if (!NEGATIONS.includes(negation)) problems.push({ line: 1, message: `unknown negation rule ${shown(negation)}; use flip, drop or ignore` });
   const windowText = meta.get('window')?.[0] ?? '3';
   const window = Number(windowText);
-  if (!Number.isInteger(window) || window < 0 || window > 20) problems.push({ line: 1, message: `\`## window\` must be a whole number of tokens from 0 to 20, not \`${windowText}\`` });
+  if (!Number.isInteger(window) || window < 0 || window > 20) problems.push({ line: 1, message: `\`## window\` must be a whole number of tokens from 0 to 20, not ${shown(windowText)}` });
   if (categories.length === 0) problems.push({ line: 1, message: 'no category is declared; add `## category<TAB>NAME<TAB>count|rating|sum`' });
 
   const seen = new Map<string, TermRow>();
   for (const row of terms) {
     if (!categories.some((c) => c.name === row.category)) {
-      problems.push({ line: row.line, message: `\`${row.term}\` names category \`${row.category}\`, which is not declared; declare it with \`## category\` or fix the name` });
+      problems.push({ line: row.line, message: `${shown(row.term)} names category ${shown(row.category)}, which is not declared; declare it with \`## category\` or fix the name` });
       continue;
     }
     if (row.weight < scale[0] || row.weight > scale[1]) {
-      problems.push({ line: row.line, message: `weight ${row.weight} of \`${row.term}\` is outside the scale ${scale[0]} to ${scale[1]}` });
+      problems.push({ line: row.line, message: `weight ${row.weight} of ${shown(row.term)} is outside the scale ${scale[0]} to ${scale[1]}` });
     }
     const key = `${scoring === 'vader' ? row.term : row.term.toLocaleLowerCase()}\u0000${row.category}`;
     const previous = seen.get(key);
@@ -161,8 +166,8 @@ export function parseLexicon(text: string): ParseLexiconResult {
       problems.push({
         line: row.line,
         message: previous.weight === row.weight
-          ? `\`${row.term}\` is listed twice in category \`${row.category}\` (first on line ${previous.line}); remove one`
-          : `\`${row.term}\` is listed twice in category \`${row.category}\` with different weights (${previous.weight} on line ${previous.line}, ${row.weight} here); keep one`,
+          ? `${shown(row.term)} is listed twice in category ${shown(row.category)} (first on line ${previous.line}); remove one`
+          : `${shown(row.term)} is listed twice in category ${shown(row.category)} with different weights (${previous.weight} on line ${previous.line}, ${row.weight} here); keep one`,
       });
       continue;
     }

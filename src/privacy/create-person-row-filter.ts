@@ -1,4 +1,5 @@
 import Papa from 'papaparse';
+import { restoreCell } from '../report/csv.js';
 
 /** A line-by-line filter that removes one person's rows from a CSV, TSV or JSON Lines file. */
 export interface PersonRowFilter {
@@ -96,7 +97,7 @@ export function createPersonRowFilter(ids: ReadonlySet<string>, format: 'csv' | 
       }
       const own =
         personIndex !== undefined
-          ? ids.has((fields[personIndex] ?? '').trim())
+          ? ids.has(restoreCell((fields[personIndex] ?? '').trim()))
           : messageIndex !== undefined && mention !== undefined && mention.test(fields[messageIndex] ?? '');
       if (own) {
         removed++;

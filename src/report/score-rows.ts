@@ -104,18 +104,24 @@ export function scoreRowText(filler: ScoreRowFiller, entry: RawEntry, batch: Bat
 
 const COMMA = 0x2c;
 
-/** Bytes csvField(value) takes at most in UTF-8: every code unit doubled (quotes), 3 bytes each, and two quotes. */
+/** Bytes csvField(value) takes at most in UTF-8: every code unit doubled (quotes), 3 bytes each, two quotes and a neutralising single quote. */
 function textBytes(value: string): number {
-  return 6 * value.length + 2;
+  return 6 * value.length + 3;
 }
 
 /**
  * Writes csvField(value) in UTF-8 at `at`; returns where it ended. Plain ASCII without a quote,
- * comma or line break (ids, person ids, zone names, mostly) is copied byte by byte; anything else
- * goes through csvField and Buffer's UTF-8 encoder.
+ * comma or line break (ids, person ids, zone names, mostly) is copied byte by byte; anything else,
+ * and a value starting with a character that could open a spreadsheet formula or with a single
+ * quote (csvField neutralises those, see neutralizeCell), goes through csvField and Buffer's
+ * UTF-8 encoder.
  */
 function writeTextField(buffer: Buffer, at: number, value: string): number {
   const start = at;
+  const first = value.charCodeAt(0);
+  if (first === 0x3d || first === 0x2b || first === 0x2d || first === 0x40 || first === 0x09 || first === 0x00 || first === 0x27) {
+    return start + buffer.write(csvField(value), start, 'utf8');
+  }
   for (let k = 0; k < value.length; k++) {
     const c = value.charCodeAt(k);
     if (c >= 0x80 || c === 0x22 || c === COMMA || c === 0x0a || c === 0x0d) return start + buffer.write(csvField(value), start, 'utf8');

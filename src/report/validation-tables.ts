@@ -2,6 +2,7 @@ import type { FixedEffect } from '../stats/linear-mixed-model.js';
 import type { StatResult } from '../stats/stat-result.js';
 import type { ValidationResult } from '../validate/validate-series.js';
 import { formatNumber } from './format-number.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** A table ready for `csvDocument`: header and rows of already-formatted fields. */
 export interface Table {
@@ -114,7 +115,7 @@ export function binsPerPersonTable(result: ValidationResult): Table {
 
 /** Diagnostics of the validation stage. */
 export function validationDiagnosticsTable(result: ValidationResult): Table {
-  return { header: ['code', 'message', 'file', 'line', 'stage'], rows: result.diagnostics.map((d) => [d.code, d.message, d.source?.file ?? '', num(d.source?.line), d.stage]) };
+  return { header: ['code', 'message', 'file', 'line', 'stage'], rows: result.diagnostics.map((d) => [d.code, diagnosticText(d.message), d.source?.file ?? '', num(d.source?.line), d.stage]) };
 }
 
 /**

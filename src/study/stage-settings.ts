@@ -33,10 +33,15 @@ export interface DynamicsSettings {
   embedding?: number;
   maxEmbedding: number;
   tau: number;
-  exclusionRadius: number;
+  /** Default: max(E·tau, decorrelation time) per series. */
+  exclusionRadius?: number;
   librarySizes: number;
   libraries: number;
   surrogates: number;
+  /** Largest lag of the cross-map lag scan (0: none). */
+  lagScan: number;
+  /** Calendar cycle kept by seasonal surrogates. */
+  season: 'auto' | 'day' | 'week' | 'none';
   stack: boolean;
   crossMapping: boolean;
   /** Also analyse the self-reports aggregated into the bins (when `ratings` is given). */
@@ -113,6 +118,8 @@ const DYNAMICS_RULES: Record<string, Rule> = {
   librarySizes: { check: wholeAtLeast(2), expected: 'a whole number ≥ 2' },
   libraries: { check: wholeAtLeast(1), expected: 'a whole number ≥ 1' },
   surrogates: { check: wholeAtLeast(0), expected: 'a whole number ≥ 0' },
+  lagScan: { check: wholeAtLeast(0), expected: 'a whole number ≥ 0' },
+  season: { check: (v) => v === 'auto' || v === 'day' || v === 'week' || v === 'none', expected: 'one of "auto", "day", "week", "none"' },
   stack: { check: isBoolean, expected: 'true or false' },
   crossMapping: { check: isBoolean, expected: 'true or false' },
   includeRatings: { check: isBoolean, expected: 'true or false' },
@@ -165,10 +172,12 @@ export function dynamicsSettings(value: Record<string, unknown>, problems: Study
     embedding: value.embedding as number | undefined,
     maxEmbedding: (value.maxEmbedding as number | undefined) ?? 8,
     tau: (value.tau as number | undefined) ?? 1,
-    exclusionRadius: (value.exclusionRadius as number | undefined) ?? 0,
+    exclusionRadius: value.exclusionRadius as number | undefined,
     librarySizes: (value.librarySizes as number | undefined) ?? 10,
     libraries: (value.libraries as number | undefined) ?? 100,
-    surrogates: (value.surrogates as number | undefined) ?? 100,
+    surrogates: (value.surrogates as number | undefined) ?? 99,
+    lagScan: (value.lagScan as number | undefined) ?? 0,
+    season: (value.season as DynamicsSettings['season'] | undefined) ?? 'auto',
     stack: value.stack === true,
     crossMapping: value.crossMapping !== false,
     includeRatings: value.includeRatings !== false,

@@ -1,5 +1,6 @@
 import { inTimeWindow } from '../ingest/time-window.js';
 import type { Diagnostic, SourceRef } from '../types.js';
+import { restoreCell } from '../report/csv.js';
 
 /** One scored entry as validation needs it (from the series stage's event file or the scores file). */
 export interface EntryScore {
@@ -27,7 +28,7 @@ export function entryScoreColumns(header: readonly string[]): string[] {
  * is unusable.
  */
 export function entryScoreFromRecord(record: Readonly<Record<string, string>>, source: SourceRef, scoreColumns: readonly string[]): EntryScore | Diagnostic {
-  const person = (record.person ?? '').trim();
+  const person = restoreCell((record.person ?? '').trim());
   const instant = Date.parse(record.time_utc ?? '');
   const words = Number(record.words);
   if (person === '' || !inTimeWindow(instant, undefined) || !Number.isInteger(words) || words < 0) {

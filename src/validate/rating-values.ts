@@ -1,5 +1,6 @@
 import type { Diagnostic, SourceRef } from '../types.js';
 import { scaleOf, type RatingScale } from './rating-scale.js';
+import { describeValue } from '../privacy/describe-value.js';
 
 /**
  * Reads the rating columns of one self-report row against their declared scales.
@@ -25,7 +26,7 @@ export function ratingValues(
     if (text === '' || missing.has(text)) continue;
     const value = /^[-+]?(\d+(\.\d*)?|\.\d+)([eE][-+]?\d+)?$/.test(text) ? Number(text) : NaN;
     if (!Number.isFinite(value)) {
-      diagnostics.push({ code: 'rating_not_numeric', message: `rating \`${column}\` is \`${text.slice(0, 40)}\`, not a number; the value is left out`, source, stage: 'validate' });
+      diagnostics.push({ code: 'rating_not_numeric', message: `rating \`${column}\` is ${describeValue(text)}, not a number; the value is left out`, source, stage: 'validate' });
       continue;
     }
     const scale = scaleOf(scales, column);

@@ -1,5 +1,6 @@
 import { inTimeWindow } from '../ingest/time-window.js';
 import type { Diagnostic, SourceRef } from '../types.js';
+import { restoreCell } from '../report/csv.js';
 
 /** One bin of the long series file, as validation needs it. */
 export interface SeriesBin {
@@ -35,7 +36,7 @@ const parseNumber = (text: string | undefined): number | undefined => {
  * `bin_start` or `bin_end` is unusable; an unreadable score becomes missing.
  */
 export function seriesBinFromRecord(record: Readonly<Record<string, string>>, source: SourceRef, scoreColumns: readonly string[]): SeriesBin | Diagnostic {
-  const person = (record.person ?? '').trim();
+  const person = restoreCell((record.person ?? '').trim());
   const start = Date.parse(record.bin_start ?? '');
   const end = Date.parse(record.bin_end ?? '');
   if (person === '' || !inTimeWindow(start, undefined) || !inTimeWindow(end, undefined) || end <= start) {

@@ -1,5 +1,7 @@
 import { readFileSync } from 'node:fs';
+import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
+import { parseSeriesCsv } from '../../src/dynamics/parse-series-csv.js';
 import { pseudonymizePerson } from '../../src/privacy/pseudonymize-person.js';
 import { runCli } from '../support/run-cli.js';
 import { tempFolder } from '../support/temp-files.js';
@@ -41,5 +43,19 @@ describe('privacy of score outputs', () => {
     const refused = await cli('score', tmp.path('in.csv'), '--time-zone', 'UTC', '--keep-text', '--aggregates-only', '-o', tmp.path('x.csv'));
     expect(refused.code).toBe(2);
     expect(refused.stderr).toContain('--aggregates-only and --keep-text');
+  });
+});
+
+describe('formula injection in score and series outputs (OWASP, CSV Injection)', () => {
+  it('writes person ids that could start a spreadsheet formula with a single quote, and reads them back as written', async () => {
+    tmp.write('f.csv', ['person,time,text', '=p1,2026-03-02T09:00:00+01:00,a good day', '-p2,2026-03-02T10:00:00+01:00,a bad day', '=p1,2026-03-03T09:00:00+01:00,happy again', ''].join('\n'));
+    expect((await cli('score', tmp.path('f.csv'), '--time-zone', 'Europe/Brussels', '-l', 'afinn-165', '-o', tmp.path('f-scores.csv'))).code).toBe(0);
+    const scores = Papa.parse<string[]>(readFileSync(tmp.path('f-scores.csv'), 'utf8'), { delimiter: ',', skipEmptyLines: true }).data.slice(1);
+    expect(scores.map((r) => r[1])).toEqual(["'=p1", "'-p2", "'=p1"]);
+    expect((await cli('series', tmp.path('f-scores.csv'), '--bin', '1d', '-o', tmp.path('f-long.csv'))).code).toBe(0);
+    const long = readFileSync(tmp.path('f-long.csv'), 'utf8');
+    const persons = new Set(Papa.parse<Record<string, string>>(long, { header: true, skipEmptyLines: true }).data.map((r) => r.person));
+    expect([...persons].sort()).toEqual(["'-p2", "'=p1"]);
+    expect(parseSeriesCsv(long).persons.map((p) => p.person).sort()).toEqual(['-p2', '=p1']);
   });
 });

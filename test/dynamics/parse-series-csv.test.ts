@@ -20,7 +20,7 @@ describe('parseSeriesCsv', () => {
     expect(a.missing).toEqual(['', '', 'absent', 'no_text']);
     expect(a.binOfDay).toBeUndefined(); // bin 2 is absent, so no complete bin-of-day track
     expect(parsed.diagnostics).toEqual([
-      { code: 'bad_number', message: '`vader.neu` is `abc`, not a number; treated as missing', source: { file: 'series-long.csv', line: 5 }, stage: 'dynamics' },
+      { code: 'bad_number', message: '`vader.neu` is a value of 3 characters shaped `aaa`, not a number; treated as missing', source: { file: 'series-long.csv', line: 5 }, stage: 'dynamics' },
     ]);
   });
 

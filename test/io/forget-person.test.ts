@@ -86,6 +86,12 @@ describe('createPersonRowFilter and removePersonFromJson', () => {
     expect(out).toEqual(['person,text', 'y,"c', 'd"', 'z,x']);
     expect(filter.removed).toBe(2);
   });
+  it('matches a person id that the CSV writers neutralised as a formula cell (OWASP CSV Injection)', () => {
+    const filter = createPersonRowFilter(new Set(['=p1', '-p2']), 'csv');
+    const out = ['person,words', `"'=p1",3`, `"'-p2",4`, 'p3,5', `"'=p1x",6`].flatMap((l) => filter.push(l));
+    expect(out).toEqual(['person,words', 'p3,5', `"'=p1x",6`]);
+    expect(filter.removed).toBe(2);
+  });
   it('reads TSV and leaves a table without a person column alone', () => {
     const tsv = createPersonRowFilter(new Set(['x']), 'tsv');
     expect(['person\tv', 'x\t1', 'y\t2'].flatMap((l) => tsv.push(l))).toEqual(['person\tv', 'y\t2']);

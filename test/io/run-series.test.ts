@@ -38,7 +38,7 @@ describe('bad input to the series stage gives clear errors naming the problem an
     const scores = tmp.write('words.csv', `${HEADER}\ne1,p1,2026-05-01T10:00:00.000Z,UTC,,five,1,1\ne2,p1,2026-05-01T10:00:00.000Z,UTC,,5,1,1\n`);
     const result = await runSeries(options(scores, `${tmp.dir}/words-out/series.csv`));
     expect(result.rejected).toEqual({ bad_score_row: 1 });
-    expect(readFileSync(result.rejectsPath, 'utf8')).toContain('words `five` is not a whole number ≥ 0');
+    expect(readFileSync(result.rejectsPath, 'utf8')).toContain('words (a value of 4 characters shaped `aaaa`) is not a whole number ≥ 0');
   });
 
   it('refuses a bin that is not a positive duration, listing valid forms', () => {

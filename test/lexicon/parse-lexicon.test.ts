@@ -74,6 +74,10 @@ describe('parseLexicon reads a valid lexicon', () => {
 });
 
 describe('parseLexicon reports every problem with its line', () => {
+  it('quotes at most 60 characters of a value, so a 5 MB line gives a short message (issue 18 item 5)', () => {
+    const [problem] = problems(`glad|valence|${'9x'.repeat(2_500_000)}`);
+    expect(problem?.message).toBe(`weight \`${'9x'.repeat(30)}…\` of \`glad\` is not a number; write it with a dot as decimal mark, e.g. 1.5`);
+  });
   it('reports a term listed twice in a category with the line of the first', () => {
     expect(problems('glad|valence|2', 'Glad|valence|2')).toEqual([{ line: 14, message: '`Glad` is listed twice in category `valence` (first on line 13); remove one' }]);
   });

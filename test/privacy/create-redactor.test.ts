@@ -75,3 +75,54 @@ describe('createRedactor replaces URLs, handles and names', () => {
     expect(createRedactor({ urls: false, emails: false })('x@y.org https://a.b')).toBe('x@y.org https://a.b');
   });
 });
+
+describe('createRedactor replaces every listed name whole, however it is typed', () => {
+  it('replaces "Jan de Vries" whole when "Jan" is on the same list, in either order, and never leaves "de Vries" behind', () => {
+    for (const names of [['Jan', 'Jan de Vries'], ['Jan de Vries', 'Jan']]) {
+      expect(createRedactor({ names })('Jan de Vries and Jan came; later jan de vries left.')).toBe('[name] and [name] came; later [name] left.');
+    }
+  });
+  it('matches a name across runs of white space and line breaks', () => {
+    expect(createRedactor({ names: ['Jan de Vries'] })('met Jan  de\nVries and Jan\u00a0de\tVries')).toBe('met [name] and [name]');
+  });
+  it('matches curly and straight apostrophes alike (U+2019 RIGHT SINGLE QUOTATION MARK, U+02BC MODIFIER LETTER APOSTROPHE)', () => {
+    expect(createRedactor({ names: ["O'Brien"] })('O\u2019Brien, O\u02bcBrien and O\'Brien')).toBe('[name], [name] and [name]');
+    expect(createRedactor({ names: ['O\u2019Brien'] })("O'Brien")).toBe('[name]');
+  });
+  it('matches with or without accents, precomposed or decomposed (Unicode NFD)', () => {
+    expect(createRedactor({ names: ['Zoë', 'Jose'] })('Zoe, ZOË, Zoe\u0308 and José')).toBe('[name], [name], [name] and [name]');
+  });
+  it('still leaves a name inside a longer word alone', () => {
+    expect(createRedactor({ names: ['Jan'] })('January with Jane')).toBe('January with Jane');
+  });
+});
+
+describe('createRedactor takes time linear in the text\'s length', () => {
+  // Each input made the former backtracking patterns take quadratic time (a 100,000-character token: 45 s).
+  // Speed itself is measured by `npm run bench` (scripts/bench-redact.mjs); this only bounds it generously.
+  const size = 1_000_000;
+  const pathological: Array<[string, string]> = [
+    ['one long word', 'a'.repeat(size)],
+    ['dotted atoms with no @', 'a.'.repeat(size / 2)],
+    ['a domain of a million labels', `x@${'a.'.repeat(size / 2)}`],
+    ['hyphens', 'a-'.repeat(size / 2)],
+    ['digits and spaces', '1 '.repeat(size / 2)],
+    ['plus signs and digits', '+1'.repeat(size / 2)],
+    ['digits and dots', '1.'.repeat(size / 2)],
+    ['address specials', '!#'.repeat(size / 2)],
+    ['@ signs', 'a@'.repeat(size / 2)],
+  ];
+  it('redacts each of 9 pathological 1 MB texts in under 10 s (a generous bound; the bench shows well under a second)', () => {
+    const redact = createRedactor({ names: ['Jan de Vries', 'Ann'] });
+    for (const [what, text] of pathological) {
+      const started = performance.now();
+      redact(text);
+      expect(performance.now() - started, what).toBeLessThan(10_000);
+    }
+  }, 120_000);
+  it('still finds addresses, phones and names at the end of a long text', () => {
+    const redact = createRedactor({ names: ['Ann Lee'] });
+    const text = `${'word '.repeat(20000)}mail ann@example.org or call +44 20 7946 0958, Ann  Lee.`;
+    expect(redact(text)).toMatch(/ word mail \[email\] or call \[phone\], \[name\]\.$/);
+  });
+});

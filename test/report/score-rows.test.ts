@@ -1,11 +1,11 @@
 // Scores rows are written as bytes (scoreRowFiller); each must be, in UTF-8, the CSV line built
-// field by field with the string formatters: csvRow (RFC 4180 quoting), formatUtc/formatLocal
+// field by field with the string formatters: csvField (RFC 4180 quoting, formula neutralising), formatUtc/formatLocal
 // (checked against Date.prototype.toISOString in test/ingest/parse-instant.test.ts) and
 // formatNumber/integerText.
 import { describe, expect, it } from 'vitest';
 import { formatLocal, formatUtc, writeLocalTime, writeUtcTime } from '../../src/ingest/parse-instant.js';
 import { loadLexicons } from '../../src/io/load-lexicon.js';
-import { csvRow } from '../../src/report/csv.js';
+import { csvField } from '../../src/report/csv.js';
 import { formatNumber, integerText } from '../../src/report/format-number.js';
 import { scoreRowFiller, scoreRowText, scoresHeader } from '../../src/report/score-rows.js';
 import { scoreColumns } from '../../src/score/score-columns.js';
@@ -22,9 +22,13 @@ describe('scoreRowFiller', async () => {
   const rand = random(20261202);
   const values = [NaN, 0, -0, 1, -5, 12.5, 0.2003473983, -0.390734372, 1 / 3, 2 / 3, 1e-7, 123456789.123, 1e21, -1024, 1024, 99999];
 
-  /** The line built field by field with the string formatters. */
+  /**
+   * The line built field by field with the string formatters: the text columns (id, person, zone,
+   * kept text) through csvField, which quotes them and neutralises spreadsheet formulas; numbers
+   * and times as their formatters write them (an extended year's `+010000-…` is a time, not a formula).
+   */
   function expected(e: RawEntry, batch: ReturnType<typeof createBatchScores>, i: number, keepText: boolean, text: string): string {
-    const fields = [e.id, e.person, formatUtc(e.instant), e.zone, formatLocal(e.instant, e.offsetMinutes), integerText(batch.words[i] as number)];
+    const fields = [csvField(e.id), csvField(e.person), formatUtc(e.instant), csvField(e.zone), formatLocal(e.instant, e.offsetMinutes), integerText(batch.words[i] as number)];
     for (const [l, lex] of lexicons.entries()) {
       const own = columns.map((c, k) => [c, k] as const).filter(([c]) => c.lexicon === lex.ref.name);
       for (const [, k] of own) fields.push(formatNumber(batch.values[i * columns.length + k]));
@@ -33,8 +37,8 @@ describe('scoreRowFiller', async () => {
         fields.push(integerText(batch.negated[i * lexicons.length + l] as number));
       }
     }
-    if (keepText) fields.push(text);
-    return csvRow(fields);
+    if (keepText) fields.push(csvField(text));
+    return fields.join(',');
   }
 
   const people: Array<[string, string]> = [
@@ -43,6 +47,8 @@ describe('scoreRowFiller', async () => {
     ['id "quoted"', 'p\n2'],
     ['日本-7', 'ålesund-9'],
     ['x\r', '🐝'],
+    ['-e1', '=p1'],
+    ['@e2', "'+p3"],
   ];
   const times: Array<[number, string, number]> = [
     [Date.UTC(2026, 2, 29, 0, 30), 'Europe/Brussels', 60],
@@ -69,7 +75,7 @@ describe('scoreRowFiller', async () => {
           }
           for (let l = 0; l < lexicons.length; l++) batch.negated[i * lexicons.length + l] = Math.floor(rand() * 5);
           const e = entry(id, person, instant, zone, offset);
-          const text = i % 2 === 0 ? 'plain text' : 'kept, "quoted" 🐝\nover two lines, päivä';
+          const text = i % 3 === 0 ? 'plain text' : i % 3 === 1 ? 'kept, "quoted" 🐝\nover two lines, päivä' : '=cmd|\' /C calc\'!A0';
           const line = scoreRowText(filler, e, batch, i, text);
           expect(line).toBe(expected(e, batch, i, keepText, text));
           expect(Buffer.byteLength(line)).toBeLessThanOrEqual(filler.most(e, text));

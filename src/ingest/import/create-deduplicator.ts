@@ -65,6 +65,31 @@ function jaccard(a: Uint32Array, b: Uint32Array): number {
   return both / (a.length + b.length - both);
 }
 
+/** Shingle sets packed in one array: set i is `values[ends[i − 1] … ends[i])`. */
+interface PackedSets {
+  values: Uint32Array;
+  used: number;
+  ends: number[];
+}
+
+/** Appends a set; returns its number. */
+function addPackedSet(store: PackedSets, set: Uint32Array): number {
+  if (store.used + set.length > store.values.length) {
+    const grown = new Uint32Array(Math.max(store.values.length * 2, store.used + set.length));
+    grown.set(store.values.subarray(0, store.used));
+    store.values = grown;
+  }
+  store.values.set(set, store.used);
+  store.used += set.length;
+  store.ends.push(store.used);
+  return store.ends.length - 1;
+}
+
+/** Set number `i` (a view, not a copy). */
+function packedSet(store: PackedSets, i: number): Uint32Array {
+  return store.values.subarray(i === 0 ? 0 : (store.ends[i - 1] as number), store.ends[i] as number);
+}
+
 /**
  * Creates a duplicate detector for the entries of one import, seen in order; the first of a set
  * of duplicates is kept. Within each person:
@@ -74,15 +99,21 @@ function jaccard(a: Uint32Array, b: Uint32Array): number {
  *   found with MinHash signatures of 32 values in 8 bands of 4 (locality-sensitive hashing; a pair
  *   at similarity 0.8 becomes a candidate with probability 1 − (1 − 0.8⁴)⁸ ≈ 0.98), then the exact
  *   Jaccard similarity decides. The 0.8 default is common practice, not a published constant.
- * Memory grows with the number of distinct entries kept (their shingle sets), not with their text.
+ * Memory grows with the number of distinct entries kept (a digest, packed shingle hashes and eight
+ * numeric band keys each: about 0.5 KB, never their text).
  */
 export function createDeduplicator(options: DedupeOptions = {}): (person: string, text: string) => DuplicateVerdict {
   const threshold = options.threshold ?? 0.8;
   const k = options.shingleWords ?? 3;
   const minWords = options.minWords ?? 5;
   const exact = new Map<string, Set<string>>();
-  const stored = new Map<string, Uint32Array[]>();
-  const buckets = new Map<string, Map<string, number[]>>();
+  // Per person: every kept entry's sorted shingle hashes, packed one after another in one growing
+  // array (`ends[i]` is where entry i's end), and the band buckets under a 32-bit hash of band
+  // number and band values (a bucket holds one entry number, or an array when several share it).
+  // A hash collision only adds a candidate, which the exact Jaccard similarity then rejects, so
+  // verdicts are those of full keys; the state is a few hundred bytes per kept entry, no text.
+  const stored = new Map<string, PackedSets>();
+  const buckets = new Map<string, Map<number, number | number[]>>();
   return (person, text) => {
     const normal = normalizeForDuplicates(text);
     const words = normal === '' ? [] : normal.split(' ');
@@ -96,23 +127,27 @@ export function createDeduplicator(options: DedupeOptions = {}): (person: string
     const signature = new Uint32Array(SIGNATURE).fill(0xffffffff);
     for (const s of set) for (let h = 0; h < SIGNATURE; h++) signature[h] = Math.min(signature[h] as number, mix(s, h + 1));
     let personStore = stored.get(person);
-    if (!personStore) stored.set(person, (personStore = []));
+    if (!personStore) stored.set(person, (personStore = { values: new Uint32Array(256), used: 0, ends: [] }));
     let personBuckets = buckets.get(person);
     if (!personBuckets) buckets.set(person, (personBuckets = new Map()));
-    const keys: string[] = [];
+    const keys: number[] = [];
     const candidates = new Set<number>();
     for (let b = 0; b < BANDS; b++) {
-      const key = `${b}:${Array.from(signature.subarray(b * ROWS, (b + 1) * ROWS)).join(',')}`;
+      let key = mix(b, 0x5bd1e995);
+      for (let r = 0; r < ROWS; r++) key = mix((key ^ (signature[b * ROWS + r] as number)) >>> 0, r + 1);
       keys.push(key);
-      for (const c of personBuckets.get(key) ?? []) candidates.add(c);
+      const bucket = personBuckets.get(key);
+      if (typeof bucket === 'number') candidates.add(bucket);
+      else if (bucket) for (const c of bucket) candidates.add(c);
     }
-    for (const c of candidates) if (jaccard(set, personStore[c] as Uint32Array) >= threshold) return 'duplicate_near';
-    const index = personStore.length;
-    personStore.push(set);
+    for (const c of candidates) if (jaccard(set, packedSet(personStore, c)) >= threshold) return 'duplicate_near';
+    const index = addPackedSet(personStore, set);
     for (const key of keys) {
-      const list = personBuckets.get(key);
-      if (list) list.push(index);
-      else personBuckets.set(key, [index]);
+      const bucket = personBuckets.get(key);
+      if (bucket === undefined) personBuckets.set(key, index);
+      else if (typeof bucket === 'number') {
+        if (bucket !== index) personBuckets.set(key, [bucket, index]);
+      } else if (bucket[bucket.length - 1] !== index) bucket.push(index);
     }
     return 'unique';
   };

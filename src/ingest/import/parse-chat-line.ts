@@ -15,6 +15,7 @@ export interface ChatStamp {
 export type ChatLine =
   | { kind: 'message'; stamp: ChatStamp; sender: string; text: string }
   | { kind: 'system'; stamp: ChatStamp }
+  | { kind: 'damaged' }
   | { kind: 'continuation'; text: string };
 
 const S = '[\\s\\u00a0\\u202f]';
@@ -32,6 +33,64 @@ export function normalizeSender(name: string): string {
   return name.replace(INVISIBLE, '').normalize('NFC').replace(/[\s\u00a0\u202f]+/g, ' ').trim().toLowerCase();
 }
 
+/** A header of either form inside a line (not at its start), with a sender: where a lost line break joined two messages. */
+const EMBEDDED = [
+  new RegExp(`(?<![\\d\\[])\\[${DATE},?${S}+${TIME}\\]${S}*[^:\\n\\[\\]]{1,120}?:`, 'gis'),
+  new RegExp(`(?<!\\d)${DATE},?${S}+${TIME}${S}+[-\\u2013\\u2014]${S}+[^:\\n]{1,120}?:`, 'gis'),
+];
+
+/**
+ * Splits a line where a whole message header (date, time and sender) stands inside it: a line
+ * break lost or damaged (a flipped byte, a CR read as text) joins two messages into one line, and
+ * the text after the inner header is not the first message's author's. Returns the line itself
+ * when it holds no inner header. Participants rarely type `31/12/2024, 21:05 - Name:` mid-sentence;
+ * when they do, the part after it is treated as another message, which errs on the safe side.
+ */
+export function splitEmbeddedHeaders(line: string): string[] {
+  const starts: number[] = [];
+  for (const pattern of EMBEDDED) {
+    pattern.lastIndex = 1;
+    for (let m = pattern.exec(line); m !== null; m = pattern.exec(line)) {
+      if (m.index > 0) starts.push(m.index);
+      pattern.lastIndex = m.index + 1;
+    }
+  }
+  if (starts.length === 0) return [line];
+  starts.sort((a, b) => a - b);
+  const parts: string[] = [];
+  let from = 0;
+  for (const start of starts) {
+    if (start <= from) continue;
+    parts.push(line.slice(from, start));
+    from = start;
+  }
+  parts.push(line.slice(from));
+  return parts;
+}
+
+/** Leading characters skipped before a line is judged: white space, controls and invisible marks. */
+const LEADING_NOISE = /^[\s\u0000-\u001f\u007f\u200e\u200f\u202a-\u202e\u2066-\u2069\ufeff]+/;
+
+/**
+ * True when a line that is not a readable header still looks like one: after white space,
+ * control characters and invisible marks, a digit comes within the first three characters and
+ * the first 32 characters hold at least 6 digits (a date and a clock time hold 7 or more). Such a
+ * line is most likely a header damaged by a flipped byte, a NUL or invalid UTF-8, so its author
+ * is unknown. Ordinary message lines rarely start this way; phone numbers and dated lists can.
+ */
+export function looksLikeChatHeader(line: string): boolean {
+  const text = line.replace(LEADING_NOISE, '');
+  const head = text.slice(0, 32);
+  const first = head.search(/\d/);
+  if (first === -1 || first > 2) return false;
+  let digits = 0;
+  for (let i = 0; i < head.length; i++) {
+    const c = head.charCodeAt(i);
+    if (c >= 48 && c <= 57) digits++;
+  }
+  return digits >= 6;
+}
+
 /**
  * Parses one line of a line-based chat export ("chat-lines"):
  * `date, time - sender: message` or `[date, time] sender: message`, where
@@ -40,13 +99,15 @@ export function normalizeSender(name: string): string {
  *   (`PM`, `pm`, `p.m.`, `p. m.`), which may follow a space, a no-break space U+00A0 or the narrow
  *   no-break space U+202F that recent Unicode CLDR locale data puts before it;
  * - a dated line without `sender: ` is a system line;
+ * - a line that looks like a header but cannot be read (looksLikeChatHeader) is `damaged`: its
+ *   author is unknown, so neither it nor the lines after it may join anyone's message;
  * - any other line continues the previous message (a message with line breaks).
  * Direction marks and other invisible characters at the start are ignored.
  */
 export function parseChatLine(line: string): ChatLine {
   const text = line.replace(/^[\u200e\u200f\u202a-\u202e\u2066-\u2069\ufeff]+/, '');
   const m = BRACKETED.exec(text) ?? DASHED.exec(text);
-  if (!m) return { kind: 'continuation', text: line };
+  if (!m) return looksLikeChatHeader(line) ? { kind: 'damaged' } : { kind: 'continuation', text: line };
   const stamp: ChatStamp = {
     parts: [Number(m[1]), Number(m[3]), Number(m[4])],
     firstDigits: (m[1] as string).length,

@@ -1,3 +1,4 @@
+import { describeValue, omitValue } from '../../privacy/describe-value.js';
 import { daysInMonth, utcFromFields } from '../utc-from-fields.js';
 /** A Date header read as an instant with the offset written in it, or the reason it could not be read. */
 export type MailDateResult =
@@ -35,7 +36,7 @@ function stripComments(value: string): string {
 }
 
 function fail(value: string, why: string): MailDateResult {
-  return { ok: false, code: 'mail_bad_date', message: `the Date header \`${value.slice(0, 80)}\` cannot be read: ${why}` };
+  return { ok: false, code: 'mail_bad_date', message: `the Date header (${describeValue(value)}) cannot be read: ${omitValue(why, value)}` };
 }
 
 /**

@@ -6,6 +6,7 @@ import { normalizeAddress, parseAddressList } from './parse-address-list.js';
 import { parseMailDate } from './parse-mail-date.js';
 import { repairMojibake } from './repair-mojibake.js';
 import { stripMailQuotes } from './strip-mail-quotes.js';
+import { diagnosticText } from '../../privacy/diagnostic-text.js';
 
 /** Who the participant is and where the message came from. */
 export interface MailContext {
@@ -25,7 +26,7 @@ function truncation(raw: Buffer, bodyStart: number | undefined, contentType: str
   const boundary = contentType && /^\s*multipart\//i.test(contentType) ? /boundary\s*=\s*(?:"([^"]+)"|([^\s;]+))/i.exec(contentType) : null;
   if (boundary) {
     const marker = `--${boundary[1] ?? boundary[2]}--`;
-    if (raw.indexOf(marker, bodyStart, 'latin1') === -1) return `the multipart body never reaches its closing boundary \`${marker}\` (the file may be cut off here)`;
+    if (raw.indexOf(marker, bodyStart, 'latin1') === -1) return 'the multipart body never reaches its closing boundary (the file may be cut off here)';
   }
   return undefined;
 }
@@ -34,7 +35,9 @@ function truncation(raw: Buffer, bodyStart: number | undefined, contentType: str
  * Turns one raw message of an mbox into an entry, a reject or a drop.
  *
  * 1. From (RFC 5322 section 3.6.2) is parsed with parseAddressList; a message whose From holds
- *    none of the participant's addresses is dropped as `third_party` before its body is decoded.
+ *    none of the participant's addresses is dropped as `third_party` before its body is decoded;
+ *    one whose From also names someone else (or that has two From fields) is rejected as
+ *    `mail_shared_from`: only text whose author is proven to be the participant is kept.
  * 2. A cut-off message (no end of headers, or a multipart body without its closing boundary) →
  *    `mail_truncated`, before the Date is looked at: a header section cut off in or before its
  *    Date line would otherwise be reported as a bad or missing date.
@@ -48,10 +51,14 @@ function truncation(raw: Buffer, bodyStart: number | undefined, contentType: str
 export async function parseMailMessage(raw: Buffer, context: MailContext): Promise<ImportItem> {
   const { file, line } = context;
   const block = readMailHeaders(raw);
-  const from = mailHeader(block, 'from');
-  if (from === undefined) return importReject(file, line, 'mail_no_from', 'the message has no From header, so its sender is unknown');
-  const senders = parseAddressList(from).map((m) => normalizeAddress(m.address));
-  if (!senders.some((address) => context.addresses.has(address))) return { kind: 'drop', reason: 'third_party', source: { file, line } };
+  const fromFields = block.headers.filter((h) => h.name === 'from');
+  if (fromFields.length === 0) return importReject(file, line, 'mail_no_from', 'the message has no From header, so its sender is unknown');
+  const senders = fromFields.flatMap((h) => parseAddressList(h.value)).map((m) => normalizeAddress(m.address));
+  const ownCount = senders.filter((address) => context.addresses.has(address)).length;
+  if (ownCount === 0) return { kind: 'drop', reason: 'third_party', source: { file, line } };
+  if (ownCount < senders.length || fromFields.length > 1) {
+    return importReject(file, line, 'mail_shared_from', `the From header names ${senders.length - ownCount} author(s) besides the participant${fromFields.length > 1 ? ` (in ${fromFields.length} From fields)` : ''}, so whose words are whose cannot be told; the message is left out`);
+  }
   const cut = truncation(raw, block.bodyStart, mailHeader(block, 'content-type'));
   if (cut) return importReject(file, line, 'mail_truncated', cut);
   const dateValue = mailHeader(block, 'date');
@@ -63,7 +70,7 @@ export async function parseMailMessage(raw: Buffer, context: MailContext): Promi
     const parsed = await simpleParser(raw, { skipImageLinks: true, skipTextLinks: true, skipTextToHtml: true, keepCidLinks: true });
     text = parsed.text ?? '';
   } catch (error) {
-    return importReject(file, line, 'mail_unreadable', `the message cannot be decoded (${(error as Error).message})`);
+    return importReject(file, line, 'mail_unreadable', `the message cannot be decoded (${diagnosticText((error as Error).name || 'error', 60)} in the MIME decoder); check that the file is an mbox export`);
   }
   const notes: EntryNote[] = [];
   const repaired = repairMojibake(text);

@@ -3,7 +3,7 @@ import { daysInMonth, utcFromFields } from '../utc-from-fields.js';
 import { resolveWallClock, type WallClockPolicy } from '../zone-offset.js';
 import type { DecodedLine } from './decode-text-line.js';
 import { importReject, type EntryNote, type ImportItem } from './import-item.js';
-import { normalizeSender, parseChatLine, type ChatStamp } from './parse-chat-line.js';
+import { normalizeSender, parseChatLine, splitEmbeddedHeaders, type ChatStamp } from './parse-chat-line.js';
 import type { DateOrder } from './settle-date-order.js';
 
 /** Options of the chat-lines importer. */
@@ -55,18 +55,28 @@ export function chatStampTime(stamp: ChatStamp, order: DateOrder, zone: string, 
  * Each dated line with a sender starts a message; undated lines continue it. Messages whose
  * sender is one of `senders` (compared with normalizeSender) become entries; all others are
  * dropped as `third_party` with no text kept; dated lines without a sender are dropped as
- * `system_line`. Undated lines before the first dated line → one `chat_orphan_lines` reject;
+ * `system_line`. A line that looks like a header but cannot be read (a flipped byte, a NUL or
+ * invalid UTF-8 in its date or time: see looksLikeChatHeader) → `chat_bad_header`, together with
+ * the lines that continue it: their author is unknown, so they join no message. Continuation
+ * lines are trusted only while they cannot be mistaken for a header. Undated lines before the
+ * first dated line → one `chat_orphan_lines` reject;
  * impossible dates and times → `chat_bad_date`/`chat_bad_time`; times in a daylight-saving gap or
  * overlap follow `dst`. The `id` is `<file>:<line>` of the message's first line.
  */
 export async function* readChatLines(lines: AsyncIterable<NumberedLine> | Iterable<NumberedLine>, options: ChatLinesOptions): AsyncGenerator<ImportItem> {
   const own = new Set(options.senders.map(normalizeSender));
   type Pending = { line: number; stamp: ChatStamp; own: boolean; parts: string[]; notes: Set<EntryNote> };
-  let pending: Pending | undefined;
+  /** A damaged header and the number of lines that continue it (rejected together). */
+  type Damaged = { line: number; damaged: number };
+  let pending: Pending | Damaged | undefined;
   let orphanStart = 0;
   let orphans = 0;
-  const finish = (p: Pending): ImportItem => {
+  const finish = (p: Pending | Damaged): ImportItem => {
     const { file } = options;
+    if ('damaged' in p) {
+      const more = p.damaged > 0 ? ` and the ${p.damaged} line(s) after it are` : ' is';
+      return importReject(file, p.line, 'chat_bad_header', `the line looks like the start of a message, but its date, time or sender cannot be read (a damaged byte?); it${more} left out, since their author is unknown`);
+    }
     if (!p.own) return { kind: 'drop', reason: 'third_party', source: { file, line: p.line } };
     const time = chatStampTime(p.stamp, options.dateOrder, options.zone, options.dst);
     if (!time.ok) return importReject(file, p.line, time.code, time.message);
@@ -75,28 +85,38 @@ export async function* readChatLines(lines: AsyncIterable<NumberedLine> | Iterab
     const entry: RawEntry = { id: `${file}:${p.line}`, person: options.person, instant: time.instant, zone: options.zone, offsetMinutes: time.offsetMinutes, text, source: { file, line: p.line } };
     return p.notes.size > 0 ? { kind: 'entry', entry, notes: [...p.notes] } : { kind: 'entry', entry };
   };
-  for await (const { line, text, repaired } of lines) {
-    const parsed = parseChatLine(text);
-    if (parsed.kind === 'continuation') {
-      if (pending) {
-        if (pending.own) {
-          pending.parts.push(parsed.text);
-          if (repaired) pending.notes.add(repaired);
+  for await (const numbered of lines) {
+    // a line that holds another message's header is read as two lines (see splitEmbeddedHeaders)
+    for (const text of splitEmbeddedHeaders(numbered.text)) {
+      const { line, repaired } = numbered;
+      const parsed = parseChatLine(text);
+      if (parsed.kind === 'continuation') {
+        if (pending && 'damaged' in pending) {
+          pending.damaged++;
+        } else if (pending) {
+          if (pending.own) {
+            pending.parts.push(parsed.text);
+            if (repaired) pending.notes.add(repaired);
+          }
+        } else if (parsed.text.trim() !== '') {
+          if (orphans === 0) orphanStart = line;
+          orphans++;
         }
-      } else if (parsed.text.trim() !== '') {
-        if (orphans === 0) orphanStart = line;
-        orphans++;
+        continue;
       }
-      continue;
+      if (pending) yield finish(pending);
+      pending = undefined;
+      if (parsed.kind === 'system') {
+        yield { kind: 'drop', reason: 'system_line', source: { file: options.file, line } };
+        continue;
+      }
+      if (parsed.kind === 'damaged') {
+        pending = { line, damaged: 0 };
+        continue;
+      }
+      const isOwn = own.has(normalizeSender(parsed.sender));
+      pending = { line, stamp: parsed.stamp, own: isOwn, parts: isOwn ? [parsed.text] : [], notes: new Set(isOwn && repaired ? [repaired] : []) };
     }
-    if (pending) yield finish(pending);
-    pending = undefined;
-    if (parsed.kind === 'system') {
-      yield { kind: 'drop', reason: 'system_line', source: { file: options.file, line } };
-      continue;
-    }
-    const isOwn = own.has(normalizeSender(parsed.sender));
-    pending = { line, stamp: parsed.stamp, own: isOwn, parts: isOwn ? [parsed.text] : [], notes: new Set(isOwn && repaired ? [repaired] : []) };
   }
   if (pending) yield finish(pending);
   if (orphans > 0) {

@@ -5,6 +5,7 @@ import type { RecordItem } from '../read-records.js';
 import { importReject, type EntryNote, type ImportItem } from './import-item.js';
 import { normalizeSender } from './parse-chat-line.js';
 import { repairMojibake } from './repair-mojibake.js';
+import { describeColumns } from '../../privacy/describe-columns.js';
 
 /** Options of the chat-table importer (JSON, JSON Lines or CSV with one message per row). */
 export interface ChatTableOptions {
@@ -30,7 +31,7 @@ export const CHAT_TABLE_FIELDS = {
 function pickField(kind: keyof typeof CHAT_TABLE_FIELDS, named: string | undefined, columns: readonly string[], file: string): string {
   if (named !== undefined) {
     if (columns.includes(named)) return named;
-    throw inputError(`Cannot read \`${file}\`: there is no ${kind} field \`${named}\`; the fields are ${columns.map((c) => `\`${c}\``).join(', ') || '(none)'}.`);
+    throw inputError(`Cannot read \`${file}\`: there is no ${kind} field \`${named}\`; the fields are ${describeColumns(columns)}.`);
   }
   const lower = columns.map((c) => c.toLowerCase());
   for (const candidate of CHAT_TABLE_FIELDS[kind]) {
@@ -38,7 +39,7 @@ function pickField(kind: keyof typeof CHAT_TABLE_FIELDS, named: string | undefin
     if (i >= 0) return columns[i] as string;
   }
   throw inputError(
-    `Cannot read \`${file}\`: no ${kind} field; expected one of ${CHAT_TABLE_FIELDS[kind].map((c) => `\`${c}\``).join(', ')}, found ${columns.map((c) => `\`${c}\``).join(', ') || '(none)'}; name it with --${kind}-field.`,
+    `Cannot read \`${file}\`: no ${kind} field; expected one of ${CHAT_TABLE_FIELDS[kind].map((c) => `\`${c}\``).join(', ')}, found ${describeColumns(columns)}; name it with --${kind}-field.`,
   );
 }
 

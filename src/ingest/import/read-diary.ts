@@ -5,6 +5,7 @@ import { utcFromFields } from '../utc-from-fields.js';
 import { resolveWallClock, type WallClockPolicy } from '../zone-offset.js';
 import { importReject, type EntryNote, type ImportItem } from './import-item.js';
 import type { NumberedLine } from './read-chat-lines.js';
+import { describeValue, omitValue } from '../../privacy/describe-value.js';
 
 /** Options of the diary importer. */
 export interface DiaryOptions {
@@ -98,13 +99,13 @@ export async function* readDiary(lines: AsyncIterable<NumberedLine> | Iterable<N
     const { file } = options;
     const dt = DateTime.fromFormat(p.date.trim(), options.dateFormat, { zone: 'UTC', locale: options.locale ?? 'en' });
     if (!dt.isValid) {
-      return importReject(file, p.line, 'diary_bad_date', `the heading date \`${p.date.trim().slice(0, 60)}\` does not fit the format \`${options.dateFormat}\` or does not exist (${dt.invalidExplanation ?? dt.invalidReason ?? 'no reason given'})`);
+      return importReject(file, p.line, 'diary_bad_date', `the heading date (${describeValue(p.date.trim())}) does not fit the format \`${options.dateFormat}\` or does not exist (${omitValue(dt.invalidExplanation ?? dt.invalidReason ?? 'no reason given', p.date)})`);
     }
     let clock = { hour: withTime ? dt.hour : fallback.hour, minute: withTime ? dt.minute : fallback.minute, second: withTime ? dt.second : 0 };
     if (p.time !== undefined) {
       const t = DateTime.fromFormat(p.time.trim(), timeFormat, { zone: 'UTC', locale: options.locale ?? 'en' });
       if (!t.isValid) {
-        return importReject(file, p.line, 'diary_bad_time', `the entry time \`${p.time.trim().slice(0, 30)}\` does not fit the format \`${timeFormat}\` (${t.invalidExplanation ?? t.invalidReason ?? 'no reason given'}); give the format with --entry-time-format (entryTimeFormat in a study file)`);
+        return importReject(file, p.line, 'diary_bad_time', `the entry time (${describeValue(p.time.trim())}) does not fit the format \`${timeFormat}\` (${omitValue(t.invalidExplanation ?? t.invalidReason ?? 'no reason given', p.time)}); give the format with --entry-time-format (entryTimeFormat in a study file)`);
       }
       clock = { hour: t.hour, minute: t.minute, second: t.second };
     }

@@ -15,6 +15,10 @@ const HEADER_FOLLOW = /^\s*(?:sent|date|to|subject|gesendet|datum|an|betreff|env
 /** The signature delimiter "-- " of RFC 3676 section 4.3 (the trailing space is often lost, so "--" alone counts too). */
 const SIGNATURE = /^-- ?$/;
 const QUOTED = /^\s*>/;
+/** An mbox separator line (`From sender Thu Nov 21 09:55:06 1997`, RFC 4155) with a damaged first word. */
+const DAMAGED_SEPARATOR = /^\S{3,6} \S+ .*\b\d{1,2}:\d{2}\b/;
+/** An mbox separator line inside a body (its message glued on when the line was damaged after `From `): an address or `-`, then a clock time. */
+const SEPARATOR_LIKE = /^From (?:\S*@\S*|-)\s.*\b\d{1,2}:\d{2}/;
 /** A device footer that mail programs append on their own ("Sent from my phone"), in a few languages. */
 const DEVICE_FOOTER = /^\s*(?:sent from my|sent from|envoyé de mon|gesendet von meinem|verzonden vanaf mijn|enviado desde mi|inviato da)\b.{0,40}$/i;
 
@@ -28,7 +32,10 @@ function isHeaderBlock(lines: readonly string[], at: number): boolean {
  * Keeps only the sender's own words of a plain-text mail body:
  * - cuts at the signature delimiter (RFC 3676 section 4.3) and everything after it;
  * - cuts at a forwarded or original-message block (`---------- Forwarded message ---------`,
- *   `-----Original Message-----`, `Begin forwarded message:`, or a rule or blank line followed by `From:` … `Sent:`);
+ *   `-----Original Message-----`, `Begin forwarded message:`, or any line `From:` followed by `Sent:`,
+ *   `Date:`, `To:` or `Subject:` within four lines, two such header fields in a row, or a line
+ *   shaped like an mbox separator: an included message, or the next message of an mbox whose
+ *   separator line was damaged);
  * - removes reply attributions ("On <date>, <name> wrote:", holding a digit, also when wrapped over two lines) and quoted lines
  *   starting with `>` (RFC 3676 section 4.5); when an attribution is followed by no `>` lines
  *   (quoting lost in an HTML conversion), the rest is taken as the quote and cut;
@@ -44,7 +51,14 @@ export function stripMailQuotes(body: string): string {
     if (SIGNATURE.test(line)) break;
     if (FORWARD.test(line)) break;
     if (RULE.test(line) && isHeaderBlock(lines, i + 1)) break;
-    if (isHeaderBlock(lines, i) && (i === 0 || (lines[i - 1] ?? '').trim() === '')) break;
+    // a header block anywhere: an included message, or the next message of the mbox glued on when its
+    // separator line was damaged (that line, just before the block, goes too: it names the next sender)
+    // two header fields in a row (`To:` then `Date:`) or a separator line: another message starts here
+    const fields = (HEADER_LINE.test(line) || HEADER_FOLLOW.test(line)) && (HEADER_LINE.test(lines[i + 1] ?? '') || HEADER_FOLLOW.test(lines[i + 1] ?? ''));
+    if (isHeaderBlock(lines, i) || fields || SEPARATOR_LIKE.test(line)) {
+      if (kept.length > 0 && DAMAGED_SEPARATOR.test(kept[kept.length - 1] as string)) kept.pop();
+      break;
+    }
     let attributionEnd = -1;
     if (ATTRIBUTION.test(line) && /\d/.test(line)) attributionEnd = i;
     else if (ATTRIBUTION_START.test(line) && i + 1 < lines.length) {

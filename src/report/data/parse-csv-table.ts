@@ -1,4 +1,5 @@
 import Papa from 'papaparse';
+import { restoreCell } from '../csv.js';
 
 /** A CSV document as a header and string rows. */
 export interface CsvTable {
@@ -8,11 +9,13 @@ export interface CsvTable {
 
 /**
  * Parses a whole CSV document (RFC 4180, first row the header) into string cells; blank lines are
- * skipped. Returns undefined when the text has no header row.
+ * skipped, and cells neutralised against spreadsheet formulas by lexichron's writers are given back
+ * as written (restoreCell: a person `'=p1` is `=p1` in the report). Returns undefined when the text
+ * has no header row.
  */
 export function parseCsvTable(text: string): CsvTable | undefined {
   const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { skipEmptyLines: true });
   const [header, ...rows] = parsed.data;
   if (!header || header.length === 0) return undefined;
-  return { header, rows };
+  return { header, rows: rows.map((row) => row.map(restoreCell)) };
 }

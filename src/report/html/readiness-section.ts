@@ -1,5 +1,6 @@
 import type { DynamicsData, Part, ReadinessData } from '../report-data.js';
 import { absentNote } from './absent-note.js';
+import { crossMapNote } from './cross-map-note.js';
 import { escapeHtml } from './escape-html.js';
 import { formatValue } from './format-value.js';
 import { htmlTable } from './html-table.js';
@@ -37,6 +38,10 @@ export function readinessSection(readiness: Part<ReadinessData>, dynamics: Part<
   } else parts.push(absentNote('Readiness figures are', readiness.reason));
   parts.push('<h3>Dynamics results</h3>');
   if (dynamics.ok) parts.push('<p class="note">One table per output file of the dynamics stage; open a table to read it (the CSV files hold the same rows).</p>');
+  if (dynamics.ok) {
+    const note = crossMapNote(dynamics.value);
+    if (note) parts.push(note);
+  }
   if (dynamics.ok) {
     for (const t of dynamics.value.tables) {
       const omitted = t.omitted ? `<p class="note">${t.omitted} more rows are in the output file; ${escapeHtml(t.title)} is cut here to keep the page light.</p>` : '';

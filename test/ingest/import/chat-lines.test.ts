@@ -86,6 +86,46 @@ describe('readChatLines keeps only the participant\'s messages', () => {
   });
 });
 
+describe('readChatLines never glues text of an unproven author onto the participant\'s message', () => {
+  const own = '03/04/2024, 09:01 - Ann Lee: Good morning!';
+  const fromBytes = (lines: Buffer[]): NumberedLine[] => lines.map((bytes, i) => ({ line: i + 1, ...decodeTextLine(bytes) }));
+  const damaged: Array<[string, Buffer]> = [
+    ['a flipped byte in the date', Buffer.from('03/0\u00144/2024, 09:02 - Bob: SECRET of Bob')],
+    ['a NUL in the date', Buffer.from('03/04\u0000/2024, 09:02 - Bob: SECRET of Bob')],
+    ['invalid UTF-8 in the date', Buffer.concat([Buffer.from('03/04/20'), Buffer.from([0xff]), Buffer.from('24, 09:02 - Bob: SECRET of Bob')])],
+    ['a flipped byte in the time', Buffer.from('03/04/2024, 09;02 - Bob: SECRET of Bob')],
+    ['a flipped opening bracket', Buffer.from('{03/04/2024, 09:02:00] Bob: SECRET of Bob')],
+    ['a flipped dash', Buffer.from('03/04/2024, 09:02 = Bob: SECRET of Bob')],
+  ];
+  for (const [what, bytes] of damaged) {
+    it(`rejects a header line with ${what} as chat_bad_header, with its continuation lines`, async () => {
+      const items = await collect(readChatLines(fromBytes([Buffer.from(own), bytes, Buffer.from('more SECRET words'), Buffer.from('03/04/2024, 09:03 - Ann Lee: bye')]), { ...OPTIONS, dateOrder: 'dmy' }));
+      expect(entries(items).map((e) => e.text)).toEqual(['Good morning!', 'bye']);
+      expect(others(items)).toEqual(['chat_bad_header']);
+      expect(JSON.stringify(items)).not.toMatch(/SECRET/);
+    });
+  }
+  it('splits a line where a lost or damaged line break joined another sender\'s header onto it', async () => {
+    for (const glue of ['', 'X', '\u0000']) {
+      const items = await read(`${own}${glue}03/04/2024, 09:02 - Bob: SECRET of Bob\nmore SECRET words\n03/04/2024, 09:03 - Ann Lee: bye`);
+      expect(entries(items).map((e) => e.text)).toEqual([`Good morning!${glue}`.trim(), 'bye']);
+      expect(others(items)).toEqual(['drop:third_party']);
+    }
+  });
+  it('still joins ordinary continuation lines, including ones that start with a number', async () => {
+    const items = await read(`${own}\n2 coffees later\nand a walk at 10:30`);
+    expect(entries(items).map((e) => e.text)).toEqual(['Good morning!\n2 coffees later\nand a walk at 10:30']);
+  });
+  it('reads a bare CR as a line break, so a header after it starts a new message (file read through openImportSource)', async () => {
+    const path = tmp.write('cr.txt', `${own}\r03/04/2024, 09:02 - Bob: SECRET of Bob\r\n13/04/2024, 09:03 - Ann Lee: bye\rsecond line\n`);
+    const opened = await openImportSource({ format: 'chat-lines', path, person: 'P01', zone: 'Europe/Brussels', senders: ['Ann Lee'] });
+    const items = await collect(opened.items);
+    expect(entries(items).map((e) => [e.id, e.text])).toEqual([['cr.txt:1', 'Good morning!'], ['cr.txt:3', 'bye\nsecond line']]);
+    expect(others(items)).toEqual(['drop:third_party']);
+    expect(JSON.stringify(items)).not.toMatch(/SECRET/);
+  });
+});
+
 describe('decodeTextLine and repairMojibake repair double-encoded UTF-8 and mixed encodings', () => {
   it('undoes UTF-8 read as Windows-1252: Ã© → é, â€™ → ’, and â€¯ → the narrow no-break space U+202F', () => {
     expect(repairMojibake('trÃ¨s bien, câ€™est Ã§a')).toBe('très bien, c’est ça');

@@ -28,7 +28,7 @@ describe('readDiary reads plain-text diaries with dated headings', () => {
     const items = await collect(readDiary(lines('front matter\n# 2025-02-30\nlost day\n# 2025-03-01\n\n# 2025-03-02\nfine'), { ...base, heading: compileDiaryHeading(DEFAULT_DIARY_HEADING), dateFormat: 'yyyy-MM-dd' }));
     expect(others(items)).toEqual(['diary_bad_date', 'diary_empty_entry', 'diary_before_first_heading']);
     const bad = items.find((i) => i.kind === 'reject');
-    expect(bad?.kind === 'reject' && bad.diagnostic).toMatchObject({ source: { line: 2 }, message: expect.stringContaining('2025-02-30') });
+    expect(bad?.kind === 'reject' && bad.diagnostic).toMatchObject({ source: { line: 2 }, message: expect.stringContaining('(a value of 10 characters shaped `9999-99-99`) does not fit the format `yyyy-MM-dd` or does not exist') });
     expect(entries(items).map((e) => e.text)).toEqual(['fine']);
   });
   it('splits a day into timed entries with --entry-time, in the zone\'s offset on each side of the spring-forward change (IANA tz: Europe/Brussels went from +01:00 to +02:00 at 01:00 UTC on 30 March 2025)', async () => {
@@ -54,7 +54,7 @@ describe('readDiary reads plain-text diaries with dated headings', () => {
     ]);
     expect(others(items)).toEqual(['time_in_gap', 'diary_bad_time', 'diary_empty_entry']);
     const badTime = items.find((i) => i.kind === 'reject' && i.diagnostic.code === 'diary_bad_time');
-    expect(badTime?.kind === 'reject' && badTime.diagnostic).toMatchObject({ source: { line: 9 }, message: expect.stringContaining('`25:70` does not fit the format `H:mm`') });
+    expect(badTime?.kind === 'reject' && badTime.diagnostic).toMatchObject({ source: { line: 9 }, message: expect.stringContaining('(a value of 5 characters shaped `99:99`) does not fit the format `H:mm`') });
   });
 
   it('refuses an entry-time pattern without a capture group, saying how to fix it', () => {

@@ -81,3 +81,60 @@ describe('importEntries keeps the notes of kept entries', () => {
     }
   });
 });
+
+describe('createDeduplicator (fuzzed against brute force)', () => {
+  it('calls an entry a near duplicate only when an earlier kept entry of the person is at least that similar, and finds planted near copies (Broder 1997 shingle Jaccard)', async () => {
+    const { createDeduplicator, normalizeForDuplicates } = await import('../../../src/ingest/import/create-deduplicator.js');
+    let a = 5;
+    const rnd = (): number => {
+      a = (a + 0x6d2b79f5) | 0;
+      let t = Math.imul(a ^ (a >>> 15), 1 | a);
+      t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+      return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+    };
+    const vocab = Array.from({ length: 200 }, (_, i) => `word${i}`);
+    const shingleSet = (text: string): Set<string> => {
+      const w = normalizeForDuplicates(text).split(' ');
+      const out = new Set<string>();
+      if (w.length <= 3) out.add(w.join(' '));
+      else for (let i = 0; i + 3 <= w.length; i++) out.add(w.slice(i, i + 3).join(' '));
+      return out;
+    };
+    const jaccard = (x: Set<string>, y: Set<string>): number => {
+      let both = 0;
+      for (const s of x) if (y.has(s)) both++;
+      return both / (x.size + y.size - both);
+    };
+    const dedupe = createDeduplicator({ threshold: 0.8 });
+    const kept = new Map<string, Array<Set<string>>>();
+    let planted = 0;
+    let found = 0;
+    for (let i = 0; i < 1500; i++) {
+      const person = `p${i % 3}`;
+      const mine = kept.get(person) ?? [];
+      let text: string;
+      let copy = false;
+      if (i > 10 && rnd() < 0.3) {
+        // A 40-word text, then the same with its last word changed: Jaccard 37/39 ≈ 0.95.
+        const base = Array.from({ length: 40 }, (_, j) => vocab[(i * 13 + j * 3) % vocab.length] as string);
+        const first = dedupe(person, base.join(' '));
+        if (first === 'unique') mine.push(shingleSet(base.join(' ')));
+        base[39] = `changed${i}`;
+        text = base.join(' ');
+        copy = first === 'unique';
+        if (copy) planted++;
+      } else text = Array.from({ length: 5 + Math.floor(rnd() * 20) }, () => vocab[Math.floor(rnd() * vocab.length)]).join(' ');
+      const verdict = dedupe(person, text);
+      const set = shingleSet(text);
+      if (verdict === 'duplicate_near') {
+        expect(Math.max(...mine.map((m) => jaccard(set, m)))).toBeGreaterThanOrEqual(0.8);
+        if (copy) found++;
+      }
+      if (verdict === 'unique' && normalizeForDuplicates(text).split(' ').length >= 5) mine.push(set);
+      kept.set(person, mine);
+    }
+    expect(planted).toBeGreaterThan(50);
+    // A pair at Jaccard ≈ 0.95 is a candidate with probability 1 − (1 − 0.95⁴)⁸ > 0.9999.
+    expect(found).toBe(planted);
+  });
+});

@@ -67,6 +67,26 @@ describe('readMbox keeps the participant\'s own messages only', () => {
     expect(entry?.kind === 'entry' && [entry.entry.id, new Date(entry.entry.instant).toISOString(), entry.entry.offsetMinutes]).toEqual(['mail.mbox:1', '2025-03-03T08:00:00.000Z', 60]);
   });
 
+  it('leaves out a message whose From (RFC 5322 section 3.6.2) also names someone else, or that has two From fields, since whose words are whose cannot be told', async () => {
+    const shared = message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', 'SECRET of Bob and Ann').replace('From: ann@example.org', 'From: Ann <ann@example.org>, Bob <bob@example.org>');
+    const twice = message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', 'SECRET of Bob').replace('From: ann@example.org', 'From: ann@example.org\nFrom: bob@example.org');
+    const items = await read(shared, twice, message('ann@example.org', 'Mon, 3 Mar 2025 10:00:00 +0100', 'my own words'));
+    expect(texts(items)).toEqual(['my own words']);
+    expect(codes(items)).toEqual(['mail_shared_from', 'mail_shared_from']);
+    expect(JSON.stringify(items)).not.toMatch(/SECRET/);
+  });
+  it('leaves out the next message when a damaged separator line glues it onto the participant\'s message', async () => {
+    const bob = message('bob@example.org', 'Mon, 3 Mar 2025 09:30:00 +0100', 'SECRET of Bob').replace(/^From /, 'Fxom ');
+    const items = await read(message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', 'my own words'), bob);
+    expect(texts(items)).toEqual(['my own words']);
+    expect(JSON.stringify(items)).not.toMatch(/SECRET/);
+  });
+  it('leaves out the next message when its separator line lost its line break (privacy fuzz seed 3105)', async () => {
+    const cleo = message('cleo@example.net', 'Mon, 3 Mar 2025 09:30:00 +0100', 'SECRET of Cleo').replace('2025\nFrom: cleo', '2025From: cleo');
+    const items = await read(message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', 'my own words'), cleo);
+    expect(texts(items)).toEqual(['my own words']);
+    expect(JSON.stringify(items)).not.toMatch(/SECRET|cleo/);
+  });
   it('decodes quoted-printable (RFC 2045 section 6.7) and base64 (section 6.8) bodies in their charsets', async () => {
     const qp = message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', 'Caf=E9 au lait, tr=E8s bien =\nmerci.', 'MIME-Version: 1.0\nContent-Type: text/plain; charset=ISO-8859-1\nContent-Transfer-Encoding: quoted-printable\n');
     const b64 = message('ann@example.org', 'Mon, 3 Mar 2025 10:00:00 +0100', Buffer.from('Grüße aus Köln', 'utf8').toString('base64'), 'MIME-Version: 1.0\nContent-Type: text/plain; charset=utf-8\nContent-Transfer-Encoding: base64\n');
