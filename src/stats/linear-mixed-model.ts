@@ -1,5 +1,5 @@
 import { cholesky } from './cholesky.js';
-import { normalQuantile, normalTwoSidedP, studentTQuantile, studentTTwoSidedP } from './distributions.js';
+import { fixedEffectsTable } from './fixed-effects-table.js';
 import { isNumber } from './is-number.js';
 import { minimizeScalar } from './minimize-scalar.js';
 import { notEstimable, type StatResult } from './stat-result.js';
@@ -192,33 +192,7 @@ export function linearMixedModel<T>(
     boundary = true;
   }
   const { beta, sigma2, criterion, factor } = fit;
-  const inverse = factor.inverse();
-  // Back-transform from centred predictors: β₀ = β₀c + ȳ − Σ βⱼ x̄ⱼ; covariance T C Tᵀ.
-  const transform = Array.from({ length: p }, (_, r) => Array.from({ length: p }, (_, s) => (r === s ? 1 : r === 0 ? -(xMeans[s - 1] as number) : 0)));
-  const estimates = beta.slice();
-  estimates[0] = (beta[0] as number) + yMean - xMeans.reduce((sum, xm, j) => sum + (beta[j + 1] as number) * xm, 0);
-  const covariance = Array.from({ length: p }, (_, r) =>
-    Array.from({ length: p }, (_, s) => {
-      let sum = 0;
-      for (let u = 0; u < p; u++) for (let v = 0; v < p; v++) sum += ((transform[r] as number[])[u] as number) * ((inverse[u] as number[])[v] as number) * ((transform[s] as number[])[v] as number);
-      return sigma2 * sum;
-    }),
-  );
-  const betweenTerms = 1 + withinVaries.filter((w) => !w).length;
-  const withinTerms = withinVaries.filter((w) => w).length;
-  const fixed: FixedEffect[] = names.map((name, r) => {
-    const estimate = estimates[r] as number;
-    const se = Math.sqrt((covariance[r] as number[])[r] as number);
-    const statistic = estimate / se;
-    const levelOf: 'between' | 'within' = r > 0 && withinVaries[r - 1] ? 'within' : 'between';
-    if (inference === 'wald-z') {
-      const half = normalQuantile((1 + level) / 2) * se;
-      return { name, estimate, se, statistic, df: undefined, p: normalTwoSidedP(statistic), ciLow: estimate - half, ciHigh: estimate + half, level: levelOf };
-    }
-    const df = Math.max(1, levelOf === 'within' ? n - g - withinTerms : g - betweenTerms);
-    const half = studentTQuantile((1 + level) / 2, df) * se;
-    return { name, estimate, se, statistic, df, p: studentTTwoSidedP(statistic, df), ciLow: estimate - half, ciHigh: estimate + half, level: levelOf };
-  });
+  const { fixed, covariance } = fixedEffectsTable(beta, factor.inverse(), sigma2, xMeans, yMean, { names, withinVaries, n, groups: g, level, inference });
   const varianceIntercept = lambda * sigma2;
   return {
     ok: true,
