@@ -102,14 +102,16 @@ export function analyzePair(pairs: readonly AlignedPair[], options: PairAnalysis
   const between = betweenPersonCorrelation(complete, level);
   const within = repeatedMeasuresCorrelation(complete, (d) => d.person, (d) => d.x, (d) => d.y, { level });
   const perPerson = perPersonCorrelations(pairs, options.minPairs ?? 10);
+  // Within- and between-person parts of the text score: person-mean centred, and the person mean around the mean of means.
+  const predictors = (d: (typeof complete)[number]): number[] => {
+    const m = meanByPerson.get(d.person) as number;
+    return [(d.x as number) - m, m - grandOfMeans];
+  };
   const mixedModel = linearMixedModel(
     complete,
     (d) => d.person,
     (d) => d.y,
-    (d) => {
-      const m = meanByPerson.get(d.person) as number;
-      return [(d.x as number) - m, m - grandOfMeans];
-    },
+    predictors,
     { names: ['score_within', 'score_between'], level, inference: options.inference ?? 'between-within-t' },
   );
   const choice = options.randomSlopes ?? 'auto';
@@ -120,10 +122,7 @@ export function analyzePair(pairs: readonly AlignedPair[], options: PairAnalysis
           complete,
           (d) => d.person,
           (d) => d.y,
-          (d) => {
-            const m = meanByPerson.get(d.person) as number;
-            return [(d.x as number) - m, m - grandOfMeans];
-          },
+          predictors,
           { names: ['score_within', 'score_between'], slope: 0, level, inference: options.inference ?? 'between-within-t' },
         );
   const slopeTest = mixedModel.ok && randomSlopeModel.ok ? randomSlopeTest(mixedModel.remlCriterion, randomSlopeModel.criterion) : undefined;
