@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 
 /** The parts of wink-eng-lite-web-model's core model read by lexichron (see loadCoreModel). */
@@ -17,9 +18,6 @@ export interface CoreModel {
 
 const requireModelFile = createRequire(import.meta.url);
 
-/** The core model of wink-eng-lite-web-model 1.8.1, as the package installs it. */
-const MODEL_FILE = 'wink-eng-lite-web-model/dist/languages/cur/models/eng-core-web-model.json';
-
 /** A fresh ArrayBuffer holding the bytes of base64 `data`. */
 function bytesOfBase64(data: string): ArrayBuffer {
   const bytes = Buffer.from(data, 'base64');
@@ -31,21 +29,12 @@ function bytesOfBase64(data: string): ArrayBuffer {
  * (dist/read-core-model.js and dist/load-core-model.js of version 1.8.1), with two cheaper
  * steps: the model file parsed once into a fresh object (the package loads it with `require`
  * and copies it through a JSON round trip), and Node's base64 decoder instead of a character
- * loop. About 0.17 s less per start of the tool and of each scoring worker. The file is loaded
- * like any installed package (Node's JSON loader: read once, parsed once) and taken out of the
- * module cache at once (an entry the package's own loader left there is put back), so each call
- * gets a fresh object to prepare and no file is read here
- * (docs/architecture.md, "Layers").
+ * loop. About 0.17 s less per start of the tool and of each scoring worker.
  * test/text/tokenize-memo.test.ts checks the tokens equal those of the package's own loader.
  */
 export function loadCoreModel(): CoreModel {
-  const path = requireModelFile.resolve(MODEL_FILE);
-  const cache = requireModelFile.cache;
-  const theirs = cache[path];
-  delete cache[path];
-  const core = requireModelFile(path) as CoreModel;
-  delete cache[path];
-  if (theirs) cache[path] = theirs;
+  const path = requireModelFile.resolve('wink-eng-lite-web-model/dist/languages/cur/models/eng-core-web-model.json');
+  const core = JSON.parse(readFileSync(path, 'utf8')) as CoreModel;
   const { packing, features, pos } = core;
   core.lexicon = new Uint32Array(bytesOfBase64(core.lexicon as string));
   core.xpansions = new Uint32Array(bytesOfBase64(core.xpansions as string));

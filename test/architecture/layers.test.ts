@@ -30,9 +30,14 @@ const EFFECTFUL = new Set(EFFECTFUL_MODULES.flatMap((name) => [name, `node:${nam
 const EFFECT_LAYERS = ['io', 'cli'];
 
 /**
- * Known exceptions: `file (relative to src/, with /) → reason`. Empty: every breach is a failure.
+ * Known exceptions: `file (relative to src/, with /) → reason`; every other breach is a failure.
  */
-const ALLOWED: Record<string, string> = {};
+const ALLOWED: Record<string, string> = {
+  // The installed wink-eng-lite-web-model package's model file, read the way the package's own
+  // loader reads it (part of a dependency, not user data). Left until the tokenizer is given its
+  // model from io/ (issue 23, items 3-4: the fast path's loaders move into one folder).
+  'text/wink-model.ts': 'reads the installed wink model package file (a dependency, not user data)',
+};
 
 function sourceFiles(dir: string): string[] {
   const files: string[] = [];
