@@ -6,8 +6,9 @@ export { LexichronError, usageError, inputError, exitCodeFor } from './errors.js
 export { TOOL_VERSION } from './version.js';
 
 // ingest
-export { readRecords, formatFromPath, type RecordItem, type ReadRecordsOptions, type TableFormat } from './ingest/read-records.js';
+export { readRecords, formatFromPath, type RecordItem, type ReadRecordsOptions, type TableFile, type TableFormat } from './ingest/read-records.js';
 export { readEntries, recordToEntry, type ReadEntriesOptions } from './ingest/read-entries.js';
+export { tableFile } from './io/table-file.js';
 export { parseInstant, formatLocal, formatUtc, DEFAULT_TIME_OPTIONS, type TimeOptions, type InstantResult } from './ingest/parse-instant.js';
 export { timeWindow, type TimeWindow } from './ingest/time-window.js';
 export { resolveWallClock, zoneOffset, isValidZone, type WallClockPolicy } from './ingest/zone-offset.js';

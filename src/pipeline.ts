@@ -13,7 +13,6 @@
  * Every stage is a library function; this module only resolves paths against the study
  * file's folder, calls the stages in order and records provenance.
  */
-import { readFile } from 'node:fs/promises';
 import { basename, dirname, join, relative, resolve } from 'node:path';
 import { usageError } from './errors.js';
 import { writeFileAtomic } from './io/atomic-write.js';
@@ -27,8 +26,9 @@ import { fileDigest, runScore, type RunScoreResult } from './io/run-score.js';
 import { runSeries, type RunSeriesResult } from './io/run-series.js';
 import { dataPackage, tableResource, type TableResource } from './report/data-dictionary.js';
 import { buildManifest, type FileRecord, type Manifest } from './report/manifest.js';
-import { parseReducers, seriesOptionsFrom } from './cli/series-options.js';
-import { parseStudy, type Study } from './study/parse-study.js';
+import { parseReducers, seriesOptionsFrom } from './series/series-options.js';
+import type { Study } from './study/parse-study.js';
+import { readStudy } from './io/read-study.js';
 import type { AuditSettings, RatingsSettings } from './study/stage-settings.js';
 import { readRatings } from './io/run-validate.js';
 import { promptWindows } from './series/prompt-windows.js';
@@ -46,6 +46,7 @@ import { writeStudyAudit } from './io/write-study-audit.js';
 import { writeReport, type WriteReportResult } from './io/write-report.js';
 import { studyInput } from './io/study-input.js';
 import { readRecords } from './ingest/read-records.js';
+import { tableFile } from './io/table-file.js';
 import { scoresHeader } from './report/score-rows.js';
 import { isValidZone } from './ingest/zone-offset.js';
 import { readWindowsFile } from './io/read-windows-file.js';
@@ -54,6 +55,9 @@ import { TOOL_VERSION } from './version.js';
 import type { ShardSpec } from './shard/shard-of-person.js';
 import type { TermAudit } from './terms/term-auditor.js';
 import type { RawEntry } from './types.js';
+
+/** Reads and validates a study file (src/io/read-study.ts); exported here for its callers. */
+export { readStudy };
 
 /** What a stage after the series contributes to the outputs. */
 export interface StageOutput {
@@ -103,7 +107,7 @@ const REJECTS_HEADER = ['file', 'line', 'stage', 'code', 'message'];
 /** Data rows of a table input (records and rejected rows, streamed with the shared reader, so quoted line breaks are not counted as rows). */
 async function dataRows(path: string): Promise<number> {
   let rows = 0;
-  for await (const item of readRecords(path)) if (item.kind !== 'header') rows++;
+  for await (const item of readRecords(tableFile(path))) if (item.kind !== 'header') rows++;
   return rows;
 }
 
@@ -135,21 +139,6 @@ function recordedStudy(study: Study, person: (id: string) => string, pseudonymiz
     if (study.series.windows) recorded.series = { ...study.series, windows: 'windows' };
   }
   return recorded;
-}
-
-/** Reads and validates a study file; throws a usage error listing every problem with its JSON path. */
-export async function readStudy(path: string): Promise<Study> {
-  let json: unknown;
-  try {
-    json = JSON.parse(await readFile(path, 'utf8'));
-  } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    if (code === 'ENOENT') throw usageError(`Cannot read study file \`${path}\`: no such file; check the path.`);
-    throw usageError(`Cannot read study file \`${path}\`: not valid JSON (${(error as Error).message}).`);
-  }
-  const { study, problems } = parseStudy(json);
-  if (!study) throw usageError(`Study file \`${path}\` has ${problems.length} problem${problems.length === 1 ? '' : 's'}:\n${problems.map((p) => `  ${p.path}: ${p.message}`).join('\n')}`);
-  return study;
 }
 
 /** Options of runStudy. */

@@ -47,7 +47,7 @@ const EXPORTS = [
   'simplexForecast', 'spearmanBrown', 'spearmanBrownFactor', 'splitByteLines',
   'splitHalfReliability', 'splitMbox', 'standardDeviation', 'stripMailQuotes', 'studentTCdf',
   'studentTQuantile', 'studentTTwoSidedP', 'studyInput', 'suggestTerms', 'suggestionReasonText',
-  'tableResource', 'tallyImportItem', 'termAuditFiles', 'termAuditor', 'termReliability',
+  'tableFile', 'tableResource', 'tallyImportItem', 'termAuditFiles', 'termAuditor', 'termReliability',
   'timeWindow', 'tokenOffsets', 'tokenize', 'tokenizeEnglish', 'tokenizeSegmenter', 'topTerms', 'usageError',
   'validateSeries', 'validateStage', 'var1', 'variance', 'wordCountReliability', 'wordnetDictDir',
   'wordnetKey', 'wordnetPartsOfSpeech', 'wordnetRelatedLemmas', 'writeReport', 'writeStudyAudit',

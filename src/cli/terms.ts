@@ -7,6 +7,7 @@ import { readLexicon } from '../io/load-lexicon.js';
 import { openWordNet } from '../io/open-wordnet.js';
 import { readCorpus, type CorpusItem, type ReadCorpusOptions } from '../io/read-corpus.js';
 import { readRecords } from '../ingest/read-records.js';
+import { tableFile } from '../io/table-file.js';
 import { readZoneFile } from '../io/read-zone-file.js';
 import { writeTermAudit } from '../io/write-term-audit.js';
 import { compileLexicon } from '../lexicon/compile-lexicon.js';
@@ -271,7 +272,7 @@ function registerFromNorms(terms: Command): void {
       }
       const records: NormsRecord[] = [];
       const rejects: Diagnostic[] = [];
-      for await (const item of readRecords(file, { format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) })) {
+      for await (const item of readRecords(tableFile(file), { format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) })) {
         if (item.kind === 'header') {
           const missing = [String(opts.word), ...ratings.map((r) => r.column)].filter((c) => item.columns.length > 0 && !item.columns.includes(c));
           if (missing.length) throw usageError(`Cannot read \`${basename(file)}\`: no column ${missing.map((m) => `\`${m}\``).join(', ')}; the header has ${item.columns.map((c) => `\`${c}\``).join(', ')}. Fix --word / --rating.`);

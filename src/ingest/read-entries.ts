@@ -2,7 +2,7 @@ import { basename } from 'node:path';
 import type { Diagnostic, RawEntry, ReadItem, SourceRef } from '../types.js';
 import { parseColumnMapping, resolveColumns, type ColumnMapping } from './column-mapping.js';
 import { DEFAULT_TIME_OPTIONS, parseInstant, type TimeOptions } from './parse-instant.js';
-import { readRecordBatches, type ReadRecordsOptions } from './read-records.js';
+import { readRecordBatches, type ReadRecordsOptions, type TableFile } from './read-records.js';
 import { isValidZone, zoneOffset } from './zone-offset.js';
 import { zoneAtInstant, zoneOnLocalDate, type ZoneTable } from './zone-table.js';
 import { describeValue } from '../privacy/describe-value.js';
@@ -69,21 +69,21 @@ export function recordToEntry(record: Record<string, string>, source: SourceRef,
 }
 
 /**
- * Reads entries from a CSV, TSV, JSON Lines or JSON file as a stream: each row becomes an entry
+ * Reads entries from a CSV, TSV, JSON Lines or JSON file (opened by src/io/: `tableFile(path)`) as a stream: each row becomes an entry
  * or a reject with file, line and reason. Throws (before any row) when the header lacks a mapped
  * column.
  */
-export async function* readEntries(path: string, options: ReadEntriesOptions): AsyncGenerator<ReadItem> {
-  for await (const batch of readEntryBatches(path, options)) yield* batch;
+export async function* readEntries(source: TableFile, options: ReadEntriesOptions): AsyncGenerator<ReadItem> {
+  for await (const batch of readEntryBatches(source, options)) yield* batch;
 }
 
 /** readEntries in batches: the entries and rejects of one chunk of the file at a time, in order, never empty. */
-export async function* readEntryBatches(path: string, options: ReadEntriesOptions): AsyncGenerator<ReadItem[]> {
+export async function* readEntryBatches(source: TableFile, options: ReadEntriesOptions): AsyncGenerator<ReadItem[]> {
   const time = options.time ?? DEFAULT_TIME_OPTIONS;
   const mapping = typeof options.columns === 'string' || options.columns === undefined ? parseColumnMapping(options.columns) : options.columns;
   let columns: ColumnMapping | undefined;
-  const file = basename(path);
-  for await (const records of readRecordBatches(path, options)) {
+  const file = basename(source.path);
+  for await (const records of readRecordBatches(source, options)) {
     const items: ReadItem[] = [];
     for (const item of records) {
       if (item.kind === 'header') {

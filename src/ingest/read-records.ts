@@ -1,5 +1,3 @@
-import { createReadStream } from 'node:fs';
-import { open, readFile } from 'node:fs/promises';
 import { basename, extname } from 'node:path';
 import { createInterface } from 'node:readline';
 import { Readable } from 'node:stream';
@@ -8,6 +6,21 @@ import { inputError, usageError } from '../errors.js';
 import type { Diagnostic, SourceRef } from '../types.js';
 import { lineBreakState, normalizeLineBreaks } from './normalize-line-breaks.js';
 import { textDecoder, textEncoding } from './text-encoding.js';
+
+/**
+ * A table file to read, as src/io/ opens it (`tableFile(path)`, src/io/table-file.ts): this module
+ * parses, the caller reads (docs/architecture.md, "Layers").
+ */
+export interface TableFile {
+  /** The file's path as the user named it: used in messages and to tell the format. */
+  path: string;
+  /** Throws a clear error when the file cannot be opened for reading (missing, a folder …). */
+  check(): Promise<void>;
+  /** The file's bytes in chunks, in order; leaving the loop early releases the file. */
+  chunks(): AsyncIterable<Buffer>;
+  /** The file's bytes at once. */
+  bytes(): Promise<Buffer>;
+}
 
 /** The table formats lexichron reads. */
 export type TableFormat = 'csv' | 'tsv' | 'jsonl' | 'json';
@@ -49,7 +62,7 @@ function reject(file: string, line: number, code: string, message: string): Reco
 }
 
 /**
- * Reads a table file as a stream of records keyed by column name.
+ * Reads a table file (opened by src/io/: `readRecords(tableFile(path))`) as a stream of records keyed by column name.
  *
  * CSV/TSV go through papaparse with RFC 4180 quoting (quoted fields may hold delimiters,
  * doubled quotes and line breaks); the first item is always the header. Row-level problems
@@ -57,8 +70,8 @@ function reject(file: string, line: number, code: string, message: string): Reco
  * `reject` items with the physical line of the row's start; nothing is dropped silently.
  * A byte-order mark is removed. Memory stays bounded by one row.
  */
-export async function* readRecords(path: string, options: ReadRecordsOptions = {}): AsyncGenerator<RecordItem> {
-  for await (const batch of readRecordBatches(path, options)) yield* batch;
+export async function* readRecords(source: TableFile, options: ReadRecordsOptions = {}): AsyncGenerator<RecordItem> {
+  for await (const batch of readRecordBatches(source, options)) yield* batch;
 }
 
 /**
@@ -66,17 +79,18 @@ export async function* readRecords(path: string, options: ReadRecordsOptions = {
  * order, never empty. For readers that handle many rows per step of the event loop (scoring);
  * memory stays bounded by a chunk plus one row.
  */
-export async function* readRecordBatches(path: string, options: ReadRecordsOptions = {}): AsyncGenerator<RecordItem[]> {
+export async function* readRecordBatches(source: TableFile, options: ReadRecordsOptions = {}): AsyncGenerator<RecordItem[]> {
+  const path = source.path;
   const format = options.format ?? formatFromPath(path);
   if (!format) {
     throw usageError(`Cannot tell the format of \`${path}\` from its extension; name it .csv, .tsv, .jsonl or .json, or pass --format csv|tsv|jsonl|json.`);
   }
-  await assertReadable(path);
+  await source.check();
   const maxField = options.maxFieldLength ?? DEFAULT_MAX_FIELD;
   const onBytes = options.onBytes;
-  if (format === 'jsonl') yield* readJsonLines(path, maxField, onBytes);
-  else if (format === 'json') yield* readJsonArray(path, maxField, onBytes);
-  else yield* readDelimited(path, format === 'tsv' ? (options.delimiter ?? '\t') : (options.delimiter ?? ','), maxField, onBytes);
+  if (format === 'jsonl') yield* readJsonLines(source, maxField, onBytes);
+  else if (format === 'json') yield* readJsonArray(source, maxField, onBytes);
+  else yield* readDelimited(source, format === 'tsv' ? (options.delimiter ?? '\t') : (options.delimiter ?? ','), maxField, onBytes);
 }
 
 /**
@@ -84,37 +98,20 @@ export async function* readRecordBatches(path: string, options: ReadRecordsOptio
  * first chunk; a character split between chunks is joined, invalid bytes become U+FFFD), handing
  * the bytes to `onBytes` on the way.
  */
-async function* readTextChunks(path: string, onBytes: ((bytes: Buffer) => void) | undefined): AsyncGenerator<string> {
-  const stream = createReadStream(path, { highWaterMark: 1 << 16 });
+async function* readTextChunks(source: TableFile, onBytes: ((bytes: Buffer) => void) | undefined): AsyncGenerator<string> {
   let decoder: ReturnType<typeof textDecoder> | undefined;
-  try {
-    for await (const bytes of stream as AsyncIterable<Buffer>) {
-      onBytes?.(bytes);
-      decoder ??= textDecoder(textEncoding(bytes));
-      const text = decoder.write(bytes);
-      if (text !== '') yield text;
-    }
-    const rest = decoder?.end() ?? '';
-    if (rest !== '') yield rest;
-  } finally {
-    stream.destroy();
+  for await (const bytes of source.chunks()) {
+    onBytes?.(bytes);
+    decoder ??= textDecoder(textEncoding(bytes));
+    const text = decoder.write(bytes);
+    if (text !== '') yield text;
   }
+  const rest = decoder?.end() ?? '';
+  if (rest !== '') yield rest;
 }
 
 /** Items per batch of the JSON readers. */
 const JSON_BATCH = 256;
-
-async function assertReadable(path: string): Promise<void> {
-  try {
-    const handle = await open(path, 'r');
-    await handle.close();
-  } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    if (code === 'ENOENT') throw usageError(`Cannot read \`${path}\`: no such file; check the path.`);
-    if (code === 'EISDIR') throw usageError(`Cannot read \`${path}\`: it is a folder; name a file.`);
-    throw inputError(`Cannot read \`${path}\`: ${(error as Error).message}.`);
-  }
-}
 
 function stripBom(text: string): string {
   return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
@@ -168,9 +165,10 @@ function assertUniqueColumns(header: readonly string[], path: string, line: numb
  * synchronously and the unfinished last row is carried into the next batch. A carried row is
  * parsed again only once the buffer has doubled, so a long quoted field costs linear time.
  */
-async function* readDelimited(path: string, delimiter: string, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
+async function* readDelimited(source: TableFile, delimiter: string, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
+  const path = source.path;
   const file = basename(path);
-  const chunks = readTextChunks(path, onBytes);
+  const chunks = readTextChunks(source, onBytes);
   let header: string[] | undefined;
   let line = 1;
   let pending = '';
@@ -284,9 +282,10 @@ function toRecord(value: unknown): Record<string, string> | 'deep' | undefined {
 const DEEP_JSON_MESSAGE = `the line holds JSON nested more than ${MAX_JSON_DEPTH} levels deep; flatten the object so that each entry's fields are at most a few levels deep`;
 
 /** Reads JSON Lines: one object per line; blank lines are skipped, bad lines rejected. */
-async function* readJsonLines(path: string, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
+async function* readJsonLines(source: TableFile, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
+  const path = source.path;
   const file = basename(path);
-  const lines = createInterface({ input: Readable.from(readTextChunks(path, onBytes)), crlfDelay: Infinity });
+  const lines = createInterface({ input: Readable.from(readTextChunks(source, onBytes)), crlfDelay: Infinity });
   let line = 0;
   let headerSent = false;
   let items: RecordItem[] = [];
@@ -334,9 +333,10 @@ async function* readJsonLines(path: string, maxField: number, onBytes?: (bytes: 
  * streamed without a streaming parser); prefer JSON Lines for large inputs. Line numbers are
  * the 1-based position of each element in the array.
  */
-async function* readJsonArray(path: string, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
+async function* readJsonArray(source: TableFile, maxField: number, onBytes?: (bytes: Buffer) => void): AsyncGenerator<RecordItem[]> {
+  const path = source.path;
   const file = basename(path);
-  const bytes = await readFile(path);
+  const bytes = await source.bytes();
   onBytes?.(bytes);
   const decoder = textDecoder(textEncoding(bytes));
   const text = stripBom(decoder.write(bytes) + decoder.end());

@@ -3,6 +3,7 @@ import { copyFile, readFile } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
 import { LexichronError, usageError } from '../errors.js';
 import { readEntryBatches } from '../ingest/read-entries.js';
+import { tableFile } from './table-file.js';
 import { auditEntryFeeder, DEFAULT_SEED, finishStudy, prepareStudy, readStudy, SHARD_MANIFEST, studyAuditors, type PreparedStudy, type RunStudyOptions, type RunStudyResult } from '../pipeline.js';
 import type { Manifest } from '../report/manifest.js';
 import type { ScoreColumn } from '../score/score-entry.js';
@@ -167,7 +168,7 @@ async function auditInputs(p: PreparedStudy, recorded: readonly InputRecord[], f
       ? (async function* () {
           for await (const item of await (input.items as NonNullable<typeof input.items>)()) yield [item];
         })()
-      : readEntryBatches(input.path, { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: p.zones, time: p.time, onBytes: (bytes) => hash.update(bytes) });
+      : readEntryBatches(tableFile(input.path), { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: p.zones, time: p.time, onBytes: (bytes) => hash.update(bytes) });
     for await (const batch of items) {
       for (const item of batch) {
         if (item.kind !== 'entry') continue;

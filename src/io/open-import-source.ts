@@ -3,6 +3,7 @@ import { inputError, usageError } from '../errors.js';
 import { DEFAULT_TIME_OPTIONS, type TimeOptions } from '../ingest/parse-instant.js';
 import type { TimeWindow } from '../ingest/time-window.js';
 import { readRecords } from '../ingest/read-records.js';
+import { tableFile } from './table-file.js';
 import { isValidZone, type WallClockPolicy } from '../ingest/zone-offset.js';
 import type { ImportItem } from '../ingest/import/import-item.js';
 import { parseChatLine, type ChatStamp } from '../ingest/import/parse-chat-line.js';
@@ -99,7 +100,7 @@ export async function openImportSource(spec: ImportSourceSpec): Promise<OpenedIm
       const senders = requireSenders(spec);
       const time: TimeOptions = { ...DEFAULT_TIME_OPTIONS, gap: dst.gap, overlap: dst.overlap, ...(spec.timeFormat ? { format: spec.timeFormat } : {}), ...(spec.window ? { window: spec.window } : {}) };
       const options = { file, person: spec.person, zone: spec.zone, senders, time, senderField: spec.senderField, timeField: spec.timeField, textField: spec.textField };
-      return { items: readChatTable(readRecords(spec.path), options) };
+      return { items: readChatTable(readRecords(tableFile(spec.path)), options) };
     }
     case 'diary': {
       const heading = compileDiaryHeading(spec.heading ?? DEFAULT_DIARY_HEADING);

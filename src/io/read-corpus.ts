@@ -6,6 +6,7 @@ import { parseColumnMapping, type ColumnMapping } from '../ingest/column-mapping
 import { DEFAULT_TIME_OPTIONS, type TimeOptions } from '../ingest/parse-instant.js';
 import { readEntries } from '../ingest/read-entries.js';
 import { readRecords, type TableFormat } from '../ingest/read-records.js';
+import { tableFile } from './table-file.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import type { AuditEntry } from '../terms/term-auditor.js';
 import type { Diagnostic } from '../types.js';
@@ -52,7 +53,7 @@ export async function* readCorpus(path: string, options: ReadCorpusOptions = {})
   }
   const reader = { format: options.format, delimiter: options.delimiter };
   if (options.bins) {
-    for await (const item of readEntries(path, { ...reader, columns: mapping, zones: options.bins.zones, time: options.bins.time ?? DEFAULT_TIME_OPTIONS })) {
+    for await (const item of readEntries(tableFile(path), { ...reader, columns: mapping, zones: options.bins.zones, time: options.bins.time ?? DEFAULT_TIME_OPTIONS })) {
       if (item.kind === 'reject') yield item;
       else yield { kind: 'entry', entry: { id: item.entry.id, person: item.entry.person, text: item.entry.text, bin: localDate(item.entry.instant, item.entry.offsetMinutes) } };
     }
@@ -68,7 +69,7 @@ export async function* readCorpus(path: string, options: ReadCorpusOptions = {})
     idColumn = mapping.id ?? (header.includes('id') ? 'id' : undefined);
   };
   let checked = false;
-  for await (const item of readRecords(path, reader)) {
+  for await (const item of readRecords(tableFile(path), reader)) {
     if (item.kind === 'header') {
       if (item.columns.length > 0) {
         check(item.columns);

@@ -2,6 +2,7 @@ import { isCalendarDate } from '../ingest/is-calendar-date.js';
 import { basename } from 'node:path';
 import { usageError } from '../errors.js';
 import { readRecords } from '../ingest/read-records.js';
+import { tableFile } from './table-file.js';
 import { dayNumberOfDate } from '../series/local-day.js';
 
 /**
@@ -12,7 +13,7 @@ import { dayNumberOfDate } from '../series/local-day.js';
 export async function readWindowsFile(path: string): Promise<Map<string, { from: number; to: number }>> {
   const file = basename(path);
   const windows = new Map<string, { from: number; to: number }>();
-  for await (const item of readRecords(path)) {
+  for await (const item of readRecords(tableFile(path))) {
     if (item.kind === 'header') {
       const missing = ['person', 'from', 'to'].filter((c) => item.columns.length > 0 && !item.columns.includes(c));
       if (missing.length > 0) throw usageError(`Cannot read \`${file}\`: a windows file needs the columns person, from and to (local dates); it lacks ${missing.join(', ')}.`);

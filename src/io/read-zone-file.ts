@@ -1,6 +1,7 @@
 import { basename } from 'node:path';
 import { usageError } from '../errors.js';
 import { readRecords } from '../ingest/read-records.js';
+import { tableFile } from './table-file.js';
 import { buildZoneTable, type ZoneTable } from '../ingest/zone-table.js';
 import { describeColumns } from '../privacy/describe-columns.js';
 
@@ -12,7 +13,7 @@ export async function readZoneFile(path: string | undefined, fallback?: string):
   if (!path) return buildZoneTable([], '', fallback);
   const rows: Array<{ person: string; zone: string; from?: string; line: number }> = [];
   const file = basename(path);
-  for await (const item of readRecords(path)) {
+  for await (const item of readRecords(tableFile(path))) {
     if (item.kind === 'header') {
       if (item.columns.length > 0 && (!item.columns.includes('person') || !item.columns.includes('zone'))) {
         throw usageError(`Cannot read \`${file}\`: a zone file needs the columns \`person\` and \`zone\` (and optionally \`from\`); the header has ${describeColumns(item.columns)}`);

@@ -6,6 +6,7 @@ import type { ColumnMapping } from '../ingest/column-mapping.js';
 import type { TimeOptions } from '../ingest/parse-instant.js';
 import { readEntryBatches } from '../ingest/read-entries.js';
 import type { TableFormat } from '../ingest/read-records.js';
+import { tableFile } from './table-file.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import type { Pseudonymizer } from '../privacy/create-pseudonymizer.js';
@@ -246,7 +247,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
             digest.bytes += bytes.length;
           }
         : undefined;
-      const batches = input.items ? oneByOne(await input.items()) : readEntryBatches(input.path, { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: options.zones, time: options.time, onBytes });
+      const batches = input.items ? oneByOne(await input.items()) : readEntryBatches(tableFile(input.path), { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: options.zones, time: options.time, onBytes });
       for await (const items of batches) {
         for (const item of items) {
           rows++;

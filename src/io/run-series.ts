@@ -3,6 +3,7 @@ import { readFile } from 'node:fs/promises';
 import { basename, dirname } from 'node:path';
 import { inputError, usageError } from '../errors.js';
 import { readRecords } from '../ingest/read-records.js';
+import { tableFile } from './table-file.js';
 import { formatLocal } from '../ingest/parse-instant.js';
 import { isValidZone, zoneOffset } from '../ingest/zone-offset.js';
 import { csvRow, restoreCell } from '../report/csv.js';
@@ -146,7 +147,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
   };
   try {
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
-    for await (const item of readRecords(options.scores)) {
+    for await (const item of readRecords(tableFile(options.scores))) {
       if (item.kind === 'header') {
         header = item.columns;
         const missing = ['person', 'time_utc', 'zone', 'words'].filter((c) => !header?.includes(c));

@@ -6,6 +6,7 @@ import { parseColumnMapping, resolveColumns, type ColumnMapping } from '../inges
 import { DEFAULT_TIME_OPTIONS, formatLocal, type TimeOptions } from '../ingest/parse-instant.js';
 import { recordToEntry } from '../ingest/read-entries.js';
 import { readRecords, type TableFormat } from '../ingest/read-records.js';
+import { tableFile } from './table-file.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import { csvDocument } from '../report/csv.js';
 import type { TableResource } from '../report/data-dictionary.js';
@@ -104,7 +105,7 @@ export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 
     ratingCols = selectRatingColumns(header, [columns.person, columns.time, columns.zone ?? 'zone', columns.id ?? 'id'], options.ratingColumns, scales, file);
   };
   const named = options.ratingsName;
-  for await (const raw of readRecords(options.ratings, { format: options.format, delimiter: options.delimiter })) {
+  for await (const raw of readRecords(tableFile(options.ratings), { format: options.format, delimiter: options.delimiter })) {
     let item = raw;
     if (item.kind === 'header') {
       if (item.columns.length > 0) resolve(item.columns);
@@ -137,7 +138,7 @@ async function readSeriesBins(path: string): Promise<{ bins: SeriesBin[]; column
   const bins: SeriesBin[] = [];
   const diagnostics: Diagnostic[] = [];
   let columns: string[] | undefined;
-  for await (const item of readRecords(path, { format: 'csv' })) {
+  for await (const item of readRecords(tableFile(path), { format: 'csv' })) {
     if (item.kind === 'header') {
       for (const required of ['person', 'bin_start', 'bin_end', 'missing']) {
         if (!item.columns.includes(required)) throw usageError(`Cannot read \`${basename(path)}\` as a long series: no column \`${required}\`. Pass the long series CSV written by \`lexichron series\`.`);
@@ -161,7 +162,7 @@ async function readEntryScores(path: string): Promise<{ entries: EntryScore[]; c
   const entries: EntryScore[] = [];
   const diagnostics: Diagnostic[] = [];
   let columns: string[] | undefined;
-  for await (const item of readRecords(path)) {
+  for await (const item of readRecords(tableFile(path))) {
     if (item.kind === 'header') {
       for (const required of ['person', 'time_utc', 'words']) {
         if (!item.columns.includes(required)) throw usageError(`Cannot read \`${basename(path)}\` as entry scores: no column \`${required}\`. Pass the event file written by \`lexichron series\` (…events.csv) or a scores file written by \`lexichron score\`.`);

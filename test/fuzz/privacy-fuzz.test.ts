@@ -20,6 +20,7 @@ import { runImport } from '../../src/io/run-import.js';
 import type { ImportSourceSpec } from '../../src/io/open-import-source.js';
 import { collect, tempFolder } from '../support/temp-files.js';
 import { chatLinesCase, chatTableCase, diaryCase, entriesCase, mboxCase, numericTableCase, type FuzzCase } from './privacy-fuzz-generator.js';
+import { tableFile } from '../../src/io/table-file.js';
 
 const CASES = Number(process.env.LEXICHRON_FUZZ_CASES ?? 20);
 /** Time allowed per test: generous, growing with the case count (a slow shared machine runs an mbox case in about 25 ms). */
@@ -97,7 +98,7 @@ describe(`privacy fuzz: ${CASES} damaged tables per entries reader`, () => {
         const path = tmp.write(`entries-${seed}.${format}`, c.bytes);
         let items;
         try {
-          items = await collect(readEntries(path, { zones }));
+          items = await collect(readEntries(tableFile(path), { zones }));
         } catch (error) {
           expect(error, describeCase(c)).toBeInstanceOf(LexichronError);
           expect((error as Error).message, describeCase(c)).not.toMatch(/secret/i);
@@ -121,7 +122,7 @@ describe(`privacy fuzz: ${CASES} damaged self-report and series tables`, () => {
       const c = numericTableCase(seed, 'ratings');
       const path = tmp.write(`ratings-${seed}.csv`, c.bytes);
       try {
-        for await (const item of readRecords(path)) {
+        for await (const item of readRecords(tableFile(path))) {
           if (item.kind === 'reject') expect(item.diagnostic.message, describeCase(c)).not.toMatch(/secret/i);
           if (item.kind !== 'record') continue;
           const { diagnostics } = ratingValues(item.record, ['mood', 'stress'], new Map(), item.source);

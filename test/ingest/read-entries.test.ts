@@ -4,12 +4,13 @@ import { readEntries } from '../../src/ingest/read-entries.js';
 import { buildZoneTable } from '../../src/ingest/zone-table.js';
 import type { ReadItem } from '../../src/types.js';
 import { collect, tempFolder } from '../support/temp-files.js';
+import { tableFile } from '../../src/io/table-file.js';
 
 const tmp = tempFolder();
 const brussels = buildZoneTable([], '', 'Europe/Brussels');
 
 async function read(name: string, content: string, options: Partial<Parameters<typeof readEntries>[1]> = {}): Promise<ReadItem[]> {
-  return collect(readEntries(tmp.write(name, content), { zones: brussels, ...options }));
+  return collect(readEntries(tableFile(tmp.write(name, content)), { zones: brussels, ...options }));
 }
 
 const entries = (items: ReadItem[]) => items.flatMap((i) => (i.kind === 'entry' ? [i.entry] : []));

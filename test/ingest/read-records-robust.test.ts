@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { lineBreakState, normalizeLineBreaks } from '../../src/ingest/normalize-line-breaks.js';
 import { readRecords, type RecordItem } from '../../src/ingest/read-records.js';
 import { collect, tempFolder } from '../support/temp-files.js';
+import { tableFile } from '../../src/io/table-file.js';
 
 // Sources: RFC 4180 section 2 (CSV records end with a line break; rule 3: the first record may be
 // a header, and names its fields); the Unicode Standard's byte order mark table (section 23.8,
@@ -10,7 +11,7 @@ import { collect, tempFolder } from '../support/temp-files.js';
 const tmp = tempFolder();
 
 async function read(name: string, content: string | Buffer): Promise<RecordItem[]> {
-  return collect(readRecords(tmp.write(name, content)));
+  return collect(readRecords(tableFile(tmp.write(name, content))));
 }
 
 const records = (items: RecordItem[]) => items.flatMap((i) => (i.kind === 'record' ? [{ ...i.record, '@line': i.source.line }] : []));

