@@ -2,6 +2,7 @@ import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { runSeries, type RunSeriesOptions } from '../../src/io/run-series.js';
 import { parseBinSpec } from '../../src/series/bin-spec.js';
+import { parseCsv } from '../support/csv.js';
 import { runCli } from '../support/run-cli.js';
 import { writeScoresSidecar } from '../support/scores-sidecar.js';
 import { tempFolder } from '../support/temp-files.js';
@@ -50,5 +51,62 @@ describe('a scores file is read with its sidecar, never without', () => {
     expect(code).toBe(2);
     expect(stderr).toMatch(/no sidecar `cli-alone\.csv\.meta\.json`/);
     expect(existsSync(`${tmp.dir}/cli-out/series.csv`)).toBe(false);
+  });
+});
+
+describe('several scores files are binned into one series', () => {
+  const XH = 'entry_id,person,time_utc,zone,time_local,words,x.valence,x.valence.n';
+  const X = [{ name: 'x.valence', aggregation: 'count' as const }];
+  // Invented: `ana` writes in both exports on 1 May; `ben` only in the first, `cleo` only in the second.
+  const first = `${XH}\na1,ana,2026-05-01T08:00:00.000Z,UTC,,5,1,1\na2,ben,2026-05-01T09:00:00.000Z,UTC,,4,2,1\n`;
+  const second = `${XH}\nb1,ana,2026-05-01T20:00:00.000Z,UTC,,5,3,1\nb2,cleo,2026-05-02T09:00:00.000Z,UTC,,2,4,1\nb3,cleo,2026-05-02T10:00:00.000Z,UTC,,five,4,1\n`;
+
+  it('combines persons across files, bins one person\'s entries from both files together, and records rows read = binned + rejected per file', async () => {
+    const a = writeScoresSidecar(tmp.write('diary-a.csv', first), X);
+    const b = writeScoresSidecar(tmp.write('chat-b.csv', second), X);
+    const result = await runSeries(options([a, b], `${tmp.dir}/two-out/series.csv`));
+    expect(result.persons).toBe(3);
+    expect(result.entries).toBe(4);
+    expect(result.rejected).toEqual({ bad_score_row: 1 });
+    // ana's day: word-weighted mean of 1 (5 words) and 3 (5 words) = 2 (hand arithmetic).
+    const ana = parseCsv(readFileSync(result.longPath, 'utf8')).filter((r) => r.person === 'ana');
+    expect(ana.map((r) => r['x.valence'])).toEqual(['2']);
+    const meta = JSON.parse(readFileSync(`${result.longPath}.meta.json`, 'utf8')) as { sources: Array<{ path: string; rows: number; entries: number; rejected: Record<string, number> }>; scores: Array<{ path: string }> };
+    expect(meta.sources.map(({ path, rows, entries, rejected }) => ({ path, rows, entries, rejected }))).toEqual([
+      { path: 'diary-a.csv', rows: 2, entries: 2, rejected: {} },
+      { path: 'chat-b.csv', rows: 3, entries: 2, rejected: { bad_score_row: 1 } },
+    ]);
+    for (const s of meta.sources) expect(s.rows).toBe(s.entries + Object.values(s.rejected).reduce((x, n) => x + n, 0));
+    expect(meta.scores.map((s) => s.path)).toEqual(['diary-a.csv', 'chat-b.csv']);
+    // The rejects file names the file each rejected row came from.
+    expect(readFileSync(result.rejectsPath, 'utf8')).toContain('chat-b.csv,4,series,bad_score_row');
+  });
+
+  it('refuses files scored with different lexicons, naming both files, and writes nothing', async () => {
+    const a = writeScoresSidecar(tmp.write('lex-a.csv', first), X, [{ name: 'x', version: '1' }]);
+    const b = writeScoresSidecar(tmp.write('lex-b.csv', second), X, [{ name: 'x', version: '2' }]);
+    const outDir = `${tmp.dir}/lex-out`;
+    await expect(runSeries(options([a, b], `${outDir}/series.csv`))).rejects.toThrow(/Cannot bin `lex-a\.csv` and `lex-b\.csv` together: the lexicons differ \(x 1 .* against x 2 .*\).*Score every file with the same lexicons/);
+    expect(existsSync(outDir)).toBe(false);
+  });
+
+  it('refuses files whose score columns differ (name or aggregation), naming both files', async () => {
+    const a = writeScoresSidecar(tmp.write('col-a.csv', first), X);
+    const b = writeScoresSidecar(tmp.write('col-b.csv', second), [{ name: 'x.valence', aggregation: 'sum' }]);
+    await expect(runSeries(options([a, b], `${tmp.dir}/col-out/series.csv`))).rejects.toThrow(/Cannot bin `col-a\.csv` and `col-b\.csv` together: the score columns differ \(x\.valence \(count\) against x\.valence \(sum\)\)/);
+  });
+
+  it('refuses a file named twice', async () => {
+    const a = writeScoresSidecar(tmp.write('twice.csv', first), X);
+    await expect(runSeries(options([a, a], `${tmp.dir}/twice-out/series.csv`))).rejects.toThrow(/`twice\.csv` is named twice; name each scores file once/);
+  });
+
+  it('on the command line, `series a.csv b.csv --out` bins both and reports each file\'s rows', async () => {
+    const a = writeScoresSidecar(tmp.write('cli-a.csv', first), X);
+    const b = writeScoresSidecar(tmp.write('cli-b.csv', second), X);
+    const { code, stderr } = await runCli('series', a, b, '--bin', '1d', '--out', `${tmp.dir}/cli-two/series.csv`);
+    expect(code).toBe(0);
+    expect(stderr).toContain('cli-b.csv: 3 rows read, 2 binned, 1 rejected');
+    expect(stderr).toMatch(/^3 persons/m);
   });
 });
