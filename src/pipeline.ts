@@ -349,7 +349,7 @@ function seriesSummary(series: RunSeriesResult): Record<string, unknown> {
 function noSeries(outDir: string): RunSeriesResult {
   const longPath = join(outDir, 'series-long.csv');
   const stem = join(outDir, 'series-long');
-  return { longPath, widePath: `${stem}.wide.csv`, eventsPath: `${stem}.events.csv`, rejectsPath: `${stem}.rejects.csv`, persons: 0, bins: 0, observed: 0, missing: {}, entries: 0, excludedEntries: 0, rejected: {}, columns: [], resources: [], warnings: [] };
+  return { longPath, widePath: `${stem}.wide.csv`, eventsPath: `${stem}.events.csv`, rejectsPath: `${stem}.rejects.csv`, persons: 0, bins: 0, observed: 0, missing: {}, entries: 0, excludedEntries: 0, rejected: {}, columns: [], resources: [], warnings: [], sources: [] };
 }
 
 /** File name of a shard's manifest. */

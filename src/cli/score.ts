@@ -10,6 +10,7 @@ import { createPseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { restoreJitBudget } from './jit-budget.js';
 import { SHARD_HELP, shardFrom } from './shard-option.js';
+import { FILE_COLUMNS_HELP, fileColumnsFrom } from './file-columns-option.js';
 import { addTimeOptions, delimiterFrom, parseMaxRejects, parseWorkers, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
@@ -29,6 +30,7 @@ export function registerScore(program: Command): void {
     .option('--workers <n>', 'scoring threads besides the one that reads and writes: a number (0 = none) or auto (by input size and cores)', 'auto')
     .option('--max-rejects <limit>', 'exit with code 3 when more rows than this are rejected: a count, a percentage, or none', '5%')
     .option('--shard <spec>', SHARD_HELP)
+    .option('--file-columns <file=map>', FILE_COLUMNS_HELP, collect)
     .option('--parquet', 'also write the scores as Parquet (scores.parquet beside the CSV: UTC instant, local wall-clock time and IANA zone as separate typed columns)');
   addTimeOptions(command);
   command.addOption(new Option('--count-rate <unit>', 'unit of count categories, also written at the end of their column names: per100w (matched words per 100 words), per1000w or prop (share of words, 0–1)').choices(['per100w', 'per1000w', 'prop']).default('per100w'));
@@ -42,7 +44,8 @@ export function registerScore(program: Command): void {
     const redact = createRedactor({ names: await readNamesFile(opts.redactNames as string | undefined) });
     const shard = shardFrom(opts.shard);
     const limit = opts.strict ? { count: 0 } : parseMaxRejects(String(opts.maxRejects));
-    const scoreInputs = inputs.map((path) => ({ path, columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) }));
+    const fileColumns = fileColumnsFrom(opts.fileColumns as string[] | undefined, inputs);
+    const scoreInputs = inputs.map((path) => ({ path, columns: fileColumns.get(path) ?? (opts.columns as string | undefined), format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) }));
     // The scoring threads start now (one may have started already: see main.ts) and load
     // wink-nlp's model while this thread loads the code that reads and scores (imported only
     // now, for that reason) and the lexicons; V8 optimizes less eagerly until the first scores

@@ -7,17 +7,17 @@ import { zoneOnDay } from '../series/zone-on-day.js';
 import { SHARD_HELP, shardFrom } from './shard-option.js';
 import { addSeriesOptions, parseReducers, seriesOptionsFrom } from './series-options.js';
 
-/** `lexichron series SCORES --bin DURATION --out FILE` */
+/** `lexichron series SCORES... --bin DURATION --out FILE` */
 export function registerSeries(program: Command): void {
   const command = program
     .command('series')
     .description('bin per-entry scores into regular per-person series in local time, with gaps explicit')
-    .argument('<scores>', 'scores CSV written by `lexichron score`')
+    .argument('<scores...>', 'scores CSV(s) written by `lexichron score`, each with its .meta.json beside it; several files (same lexicons) are binned into one series')
     .requiredOption('-o, --out <file>', 'long series CSV (wide, event-level and rejects files and datapackage.json go beside it)')
     .option('--shard <spec>', SHARD_HELP)
     .option('--parquet', 'also write the long series as Parquet (series-long.parquet beside the CSV: bin starts and ends as wall-clock times and as UTC instants)');
   addSeriesOptions(command);
-  command.action(async (scores: string, opts: Record<string, unknown>) => {
+  command.action(async (scores: string[], opts: Record<string, unknown>) => {
     const reducers = parseReducers(opts.aggregate as string | undefined);
     const shard = shardFrom(opts.shard);
     const zones = opts.zones ? await readZoneFile(String(opts.zones)) : undefined;
@@ -37,6 +37,7 @@ export function registerSeries(program: Command): void {
     const missing = Object.entries(result.missing).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
     const rejected = Object.entries(result.rejected);
     if (rejected.length > 0) process.stderr.write(`${rejected.reduce((a, [, n]) => a + n, 0)} scores rows not used (${rejected.map(([k, n]) => `${k} ${n}`).join(', ')}): see ${result.rejectsPath}\n`);
+    if (result.sources.length > 1) for (const s of result.sources) process.stderr.write(`${s.path}: ${s.rows} rows read, ${s.entries} binned, ${Object.values(s.rejected).reduce((a, n) => a + n, 0)} rejected${s.otherShard !== undefined ? `, ${s.otherShard} of other shards` : ''}\n`);
     if (result.otherShard !== undefined) process.stderr.write(`${result.otherShard} scores rows belong to other shards\n`);
     process.stderr.write(`${result.persons} persons, ${result.bins} bins (${result.observed} observed; missing: ${missing}); ${result.entries} entries, ${result.excludedEntries} in excluded hours\nlong:   ${result.longPath}\nwide:   ${result.widePath}\nevents: ${result.eventsPath}\n`);
   });

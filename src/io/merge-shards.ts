@@ -235,7 +235,20 @@ export async function mergeShards(options: MergeShardsOptions): Promise<RunStudy
 
 async function mergeInto(outDir: string, shards: readonly ShardFolder[], p: PreparedStudy, seed: number, options: MergeShardsOptions): Promise<RunStudyResult> {
   const metas: ScoresMeta[] = [];
-  for (const s of shards) metas.push(JSON.parse(await readFile(join(s.dir, 'scores.csv.meta.json'), 'utf8')) as ScoresMeta);
+  for (const s of shards) {
+    // The sidecar holds the shard's lexicons, score columns and reconciliation: without it the scores cannot be merged.
+    let text: string;
+    try {
+      text = await readFile(join(s.dir, 'scores.csv.meta.json'), 'utf8');
+    } catch {
+      throw usageError(`\`${s.dir}\` has no \`scores.csv.meta.json\` beside its scores file, so its lexicons, score columns and row counts are unknown; keep the files of the shard's folder together, or run that shard again with \`lexichron run STUDY --shard I/N\`.`);
+    }
+    try {
+      metas.push(JSON.parse(text) as ScoresMeta);
+    } catch {
+      throw usageError(`\`${s.dir}/scores.csv.meta.json\` is not valid JSON; run that shard again with \`lexichron run STUDY --shard I/N\`.`);
+    }
+  }
   const meta0 = metas[0] as ScoresMeta;
   // Shard 0 alone records rejects and drops; the others count them as rows of another shard.
   const reconciliation: Reconciliation = { read: meta0.reconciliation.read, scored: 0, rejected: {}, dropped: {} };

@@ -10,7 +10,6 @@ import { csvRow, restoreCell } from '../report/csv.js';
 import { tableResource, type TableResource } from '../report/data-dictionary.js';
 import { formatNumber } from '../report/format-number.js';
 import { seriesHeader, seriesRow, type SeriesLayout } from '../report/series-rows.js';
-import { SCORE_ID_COLUMNS } from '../report/score-rows.js';
 import type { BinReducer } from '../series/bin-accumulator.js';
 import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesOptions } from '../series/build-series.js';
 import { dateOfDayNumber } from '../series/local-day.js';
@@ -30,7 +29,11 @@ export interface ScoreColumnMeta {
 }
 
 export interface RunSeriesOptions extends Omit<SeriesOptions, 'reducers'> {
-  scores: string;
+  /**
+   * The scores file(s) written by `lexichron score`, each with its `.meta.json` sidecar beside it.
+   * Several files must have the same lexicons and score columns; their persons are combined.
+   */
+  scores: string | readonly string[];
   /** The long series CSV; the wide and event files go beside it. */
   out: string;
   /** Reducer per score column name, overriding the defaults. */
@@ -72,6 +75,23 @@ export interface RunSeriesResult {
   otherShard?: number;
   /** Warnings for the user: persons whose entries span more than warnSpanDays (positions and counts only). */
   warnings: string[];
+  /** Per scores file: rows read = entries binned + rows rejected (+ rows of other shards). */
+  sources: SeriesSource[];
+}
+
+/** What the series stage did with one scores file (recorded in the series sidecar). */
+export interface SeriesSource {
+  path: string;
+  sha256: string;
+  bytes: number;
+  /** Data rows read (excluding the header). */
+  rows: number;
+  /** Entries binned. */
+  entries: number;
+  /** Rows rejected, by reason. */
+  rejected: Record<string, number>;
+  /** Only with a shard: rows of persons of other shards. */
+  otherShard?: number;
 }
 
 /** An entry at one end of a person's series: its id and the line of the scores file. */
@@ -79,11 +99,12 @@ interface EntryEnd {
   instant: number;
   id: string;
   line: number;
+  file: string;
 }
 
 /** How an entry at an end is named in a message: its entry id and scores line (never text). */
-function endName(end: EntryEnd, file: string): string {
-  return `\`${end.id}\` (${formatUtcDate(end.instant)}, line ${end.line} of ${file})`;
+function endName(end: EntryEnd): string {
+  return `\`${end.id}\` (${formatUtcDate(end.instant)}, line ${end.line} of ${end.file})`;
 }
 
 function formatUtcDate(instant: number): string {
@@ -108,16 +129,56 @@ export function seriesSidecars(out: string): { wide: string; events: string; rej
   return { wide: `${stem}.wide.csv`, events: `${stem}.events.csv`, rejects: `${stem}.rejects.csv` };
 }
 
-async function readScoreMeta(scores: string, header: readonly string[]): Promise<ScoreColumnMeta[]> {
+/** The parts of a scores sidecar (`<scores>.meta.json`, written by `lexichron score`) the series stage uses. */
+interface ScoresSidecar {
+  lexicons: unknown[];
+  columns: ScoreColumnMeta[];
+}
+
+const AGGREGATIONS: ReadonlyArray<ScoreColumnMeta['aggregation']> = ['count', 'rating', 'sum', 'vader'];
+
+/**
+ * Reads the sidecar of a scores file. Without it the score columns' aggregations are unknown
+ * (a VADER compound binned as a count changes its value), so a missing or unreadable sidecar is
+ * refused, saying how to proceed.
+ */
+async function readScoresSidecar(scores: string): Promise<ScoresSidecar> {
+  const file = basename(scores);
+  let text: string;
   try {
-    const meta = JSON.parse(await readFile(`${scores}.meta.json`, 'utf8')) as { columns?: ScoreColumnMeta[] };
-    if (Array.isArray(meta.columns)) return meta.columns.filter((c) => header.includes(c.name));
+    text = await readFile(`${scores}.meta.json`, 'utf8');
   } catch {
-    // No sidecar: infer the score columns from the header.
+    throw usageError(
+      `\`${file}\` has no sidecar \`${file}.meta.json\`, which says how each score column was scored (counts and ratings are binned word-weighted, sums and VADER by the entry mean). Keep the \`.meta.json\` written by \`lexichron score\` beside the scores file, or score the text again.`,
+    );
   }
-  return header
-    .filter((h) => !(SCORE_ID_COLUMNS as readonly string[]).includes(h) && h !== 'text' && !h.endsWith('.n') && !h.endsWith('.negated'))
-    .map((name) => ({ name, aggregation: 'count' as const }));
+  const refuse = (): never => {
+    throw usageError(`\`${file}.meta.json\` is not the sidecar written by \`lexichron score\` (it needs \`lexicons\` and \`columns\` with a name and an aggregation each); restore it from the score run, or score the text again.`);
+  };
+  let meta: { lexicons?: unknown; columns?: unknown };
+  try {
+    meta = JSON.parse(text) as typeof meta;
+  } catch {
+    return refuse();
+  }
+  if (!meta || !Array.isArray(meta.lexicons) || !Array.isArray(meta.columns)) return refuse();
+  const columns = (meta.columns as Array<Partial<ScoreColumnMeta>>).map((c) => (c && typeof c.name === 'string' && AGGREGATIONS.includes(c.aggregation as ScoreColumnMeta['aggregation']) ? { name: c.name, aggregation: c.aggregation as ScoreColumnMeta['aggregation'] } : refuse()));
+  return { lexicons: meta.lexicons as unknown[], columns };
+}
+
+/** What two scores sidecars disagree on (lexicons or score columns), or undefined when they agree. */
+function sidecarDifference(a: ScoresSidecar, b: ScoresSidecar): string | undefined {
+  const lexicon = (l: unknown): string => {
+    const x = (l ?? {}) as { name?: unknown; version?: unknown; sha256?: unknown };
+    return `${String(x.name)} ${String(x.version)} (${String(x.sha256).slice(0, 12)})`;
+  };
+  const la = a.lexicons.map(lexicon).join(', ');
+  const lb = b.lexicons.map(lexicon).join(', ');
+  if (la !== lb) return `the lexicons differ (${la || 'none'} against ${lb || 'none'})`;
+  const ca = a.columns.map((c) => `${c.name} (${c.aggregation})`).join(', ');
+  const cb = b.columns.map((c) => `${c.name} (${c.aggregation})`).join(', ');
+  if (ca !== cb) return `the score columns differ (${ca} against ${cb})`;
+  return undefined;
 }
 
 /**
@@ -127,11 +188,23 @@ async function readScoreMeta(scores: string, header: readonly string[]): Promise
  * time and bin) and a rejects file. Memory grows with bins, not entries.
  */
 export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesResult> {
-  const file = basename(options.scores);
-  let header: string[] | undefined;
-  let metas: ScoreColumnMeta[] = [];
-  let idx: number[] = [];
-  let nIdx: number[] = [];
+  const paths = typeof options.scores === 'string' ? [options.scores] : [...options.scores];
+  if (paths.length === 0) throw usageError('Name at least one scores file written by `lexichron score`.');
+  const names = paths.map((p) => basename(p));
+  const twice = paths.find((p, k) => paths.indexOf(p) !== k);
+  if (twice !== undefined) throw usageError(`The scores file \`${basename(twice)}\` is named twice; name each scores file once.`);
+  // Every sidecar is read, and compared with the first, before any output is opened.
+  const scoresMetas: ScoresSidecar[] = [];
+  for (let k = 0; k < paths.length; k++) {
+    const sidecar = await readScoresSidecar(paths[k] as string);
+    const difference = k > 0 ? sidecarDifference(scoresMetas[0] as ScoresSidecar, sidecar) : undefined;
+    if (difference) {
+      throw usageError(`Cannot bin \`${names[0]}\` and \`${names[k]}\` together: ${difference}, per their .meta.json sidecars. Score every file with the same lexicons to bin them into one series, or bin each file on its own.`);
+    }
+    scoresMetas.push(sidecar);
+  }
+  let metas: ScoreColumnMeta[] | undefined;
+  let matchedLayout: boolean[] = [];
   const sidecars = seriesSidecars(options.out);
   const events = await openAtomicLineWriter(sidecars.events);
   const rejects = await openAtomicLineWriter(sidecars.rejects);
@@ -141,89 +214,114 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
   const inShard = options.shard ? shardFilter(options.shard) : undefined;
   let otherShard = 0;
   const ends = new Map<string, { first: EntryEnd; last: EntryEnd }>();
-  const reject = async (d: Diagnostic): Promise<void> => {
-    rejected[d.code] = (rejected[d.code] ?? 0) + 1;
-    await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
-  };
+  const sources: SeriesSource[] = [];
   try {
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
-    for await (const item of readRecords(tableFile(options.scores))) {
-      if (item.kind === 'header') {
-        header = item.columns;
-        const missing = ['person', 'time_utc', 'zone', 'words'].filter((c) => !header?.includes(c));
-        if (missing.length > 0) {
-          throw usageError(`Cannot read \`${file}\` as scores: no column ${missing.map((m) => `\`${m}\``).join(', ')}. The series stage reads the output of \`lexichron score\`; score the text first.`);
+    for (let k = 0; k < paths.length; k++) {
+      const path = paths[k] as string;
+      const file = names[k] as string;
+      const source = { rows: 0, entries: 0, rejected: {} as Record<string, number>, otherShard: 0 };
+      const reject = async (d: Diagnostic): Promise<void> => {
+        rejected[d.code] = (rejected[d.code] ?? 0) + 1;
+        source.rejected[d.code] = (source.rejected[d.code] ?? 0) + 1;
+        await rejects.write(csvRow([d.source?.file ?? file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
+      };
+      let header: string[] | undefined;
+      let idx: number[] = [];
+      let nIdx: number[] = [];
+      for await (const item of readRecords(tableFile(path))) {
+        if (item.kind === 'header') {
+          header = item.columns;
+          const missing = ['person', 'time_utc', 'zone', 'words'].filter((c) => !header?.includes(c));
+          if (missing.length > 0) {
+            throw usageError(`Cannot read \`${file}\` as scores: no column ${missing.map((m) => `\`${m}\``).join(', ')}. The series stage reads the output of \`lexichron score\`; score the text first.`);
+          }
+          if (!metas) {
+            metas = (scoresMetas[k] as ScoresSidecar).columns.filter((c) => header?.includes(c.name));
+            if (options.columns) {
+              const known = metas;
+              const unknown = options.columns.filter((c) => !known.some((m) => m.name === c));
+              if (unknown.length > 0) throw usageError(`Unknown score column ${unknown.map((u) => `\`${u}\``).join(', ')}; the scores file has ${metas.map((m) => m.name).join(', ')}.`);
+              metas = metas.filter((m) => options.columns?.includes(m.name));
+            }
+            if (metas.length === 0) throw usageError(`\`${file}\` has no score columns; score it with at least one lexicon.`);
+            for (const name of Object.keys(options.reducers ?? {})) {
+              if (!metas.some((m) => m.name === name)) throw usageError(`--aggregate names \`${name}\`, which is not a score column; choose from ${metas.map((m) => m.name).join(', ')}.`);
+            }
+            matchedLayout = metas.map((m) => header?.includes(`${m.name}.n`) ?? false);
+            const chosen = metas;
+            const reducers = chosen.map((m) => options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation));
+            state = createSeriesState({ ...options, reducers }, chosen.length);
+            await events.write(csvRow(['entry_id', 'person', 'time_utc', 'time_local', 'zone', 'bin_start', 'local_date', 'excluded', 'words', ...chosen.map((m) => m.name)]));
+          } else {
+            const absent = metas.filter((m) => !header?.includes(m.name)).map((m) => `\`${m.name}\``);
+            if (absent.length > 0) throw usageError(`\`${file}\` has no column ${absent.join(', ')}, which \`${names[0]}\` has; bin scores files written with the same lexicons together, or bin each on its own.`);
+          }
+          idx = metas.map((m) => (header as string[]).indexOf(m.name));
+          nIdx = metas.map((m) => (header as string[]).indexOf(`${m.name}.n`));
+          continue;
         }
-        metas = await readScoreMeta(options.scores, header);
-        if (options.columns) {
-          const unknown = options.columns.filter((c) => !metas.some((m) => m.name === c));
-          if (unknown.length > 0) throw usageError(`Unknown score column ${unknown.map((u) => `\`${u}\``).join(', ')}; the scores file has ${metas.map((m) => m.name).join(', ')}.`);
-          metas = metas.filter((m) => options.columns?.includes(m.name));
+        source.rows++;
+        if (item.kind === 'reject') {
+          await reject({ ...item.diagnostic, stage: 'series' });
+          continue;
         }
-        if (metas.length === 0) throw usageError(`\`${file}\` has no score columns; score it with at least one lexicon.`);
-        for (const name of Object.keys(options.reducers ?? {})) {
-          if (!metas.some((m) => m.name === name)) throw usageError(`--aggregate names \`${name}\`, which is not a score column; choose from ${metas.map((m) => m.name).join(', ')}.`);
+        const r = item.record;
+        const instant = Date.parse(r.time_utc ?? '');
+        const zone = r.zone ?? '';
+        const words = Number(r.words);
+        if (!isValidZone(zone)) {
+          await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone ${describeValue(zone, /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/)}; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
+          continue;
         }
-        idx = metas.map((m) => (header as string[]).indexOf(m.name));
-        nIdx = metas.map((m) => (header as string[]).indexOf(`${m.name}.n`));
-        const reducers = metas.map((m) => options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation));
-        state = createSeriesState({ ...options, reducers }, metas.length);
-        await events.write(csvRow(['entry_id', 'person', 'time_utc', 'time_local', 'zone', 'bin_start', 'local_date', 'excluded', 'words', ...metas.map((m) => m.name)]));
-        continue;
+        if (!(r.person ?? '').trim() || !inTimeWindow(instant, undefined) || !Number.isInteger(words) || words < 0) {
+          const what = !(r.person ?? '').trim() ? 'no person' : !inTimeWindow(instant, undefined) ? `time_utc (${describeValue(r.time_utc ?? '')}) is not an RFC 3339 instant with a year 0000–9999` : `words (${describeValue(r.words ?? '')}) is not a whole number ≥ 0`;
+          await reject({ code: 'bad_score_row', message: `${what}; the series stage reads rows written by lexichron score`, source: item.source, stage: 'series' });
+          continue;
+        }
+        if (inShard && !inShard(restoreCell((r.person as string).trim()))) {
+          otherShard++;
+          source.otherShard++;
+          continue;
+        }
+        const values = idx.map((i) => {
+          const text = r[(header as string[])[i] as string] ?? '';
+          return text === '' ? undefined : Number(text);
+        });
+        const matched = nIdx.map((i) => (i >= 0 ? Number(r[(header as string[])[i] as string] ?? 0) || 0 : 0));
+        entries++;
+        source.entries++;
+        const person = restoreCell((r.person as string).trim());
+        const here: EntryEnd = { instant, id: restoreCell(r.entry_id ?? ''), line: item.source.line, file };
+        const end = ends.get(person);
+        if (!end) ends.set(person, { first: here, last: here });
+        else if (instant < end.first.instant) end.first = here;
+        else if (instant > end.last.instant) end.last = here;
+        const placed = addSeriesEntry(state as NonNullable<typeof state>, { person, instant, zone, words, values, matched });
+        await events.write(
+          csvRow([
+            restoreCell(r.entry_id ?? ''),
+            person,
+            r.time_utc as string,
+            formatLocal(instant, zoneOffset(zone, instant)),
+            zone,
+            formatLocal(placed.binStart, zoneOffset(zone, placed.binStart)).replace('.000', ''),
+            dateOfDayNumber(placed.day),
+            placed.excluded ? '1' : '0',
+            String(words),
+            ...values.map((v) => formatNumber(v)),
+          ]),
+        );
       }
-      if (item.kind === 'reject') {
-        await reject({ ...item.diagnostic, stage: 'series' });
-        continue;
-      }
-      const r = item.record;
-      const instant = Date.parse(r.time_utc ?? '');
-      const zone = r.zone ?? '';
-      const words = Number(r.words);
-      if (!isValidZone(zone)) {
-        await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone ${describeValue(zone, /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/)}; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
-        continue;
-      }
-      if (!(r.person ?? '').trim() || !inTimeWindow(instant, undefined) || !Number.isInteger(words) || words < 0) {
-        const what = !(r.person ?? '').trim() ? 'no person' : !inTimeWindow(instant, undefined) ? `time_utc (${describeValue(r.time_utc ?? '')}) is not an RFC 3339 instant with a year 0000–9999` : `words (${describeValue(r.words ?? '')}) is not a whole number ≥ 0`;
-        await reject({ code: 'bad_score_row', message: `${what}; the series stage reads rows written by lexichron score`, source: item.source, stage: 'series' });
-        continue;
-      }
-      if (inShard && !inShard(restoreCell((r.person as string).trim()))) {
-        otherShard++;
-        continue;
-      }
-      const values = idx.map((i) => {
-        const text = r[(header as string[])[i] as string] ?? '';
-        return text === '' ? undefined : Number(text);
-      });
-      const matched = nIdx.map((i) => (i >= 0 ? Number(r[(header as string[])[i] as string] ?? 0) || 0 : 0));
-      entries++;
-      const person = restoreCell((r.person as string).trim());
-      const here: EntryEnd = { instant, id: restoreCell(r.entry_id ?? ''), line: item.source.line };
-      const end = ends.get(person);
-      if (!end) ends.set(person, { first: here, last: here });
-      else if (instant < end.first.instant) end.first = here;
-      else if (instant > end.last.instant) end.last = here;
-      const placed = addSeriesEntry(state as NonNullable<typeof state>, { person, instant, zone, words, values, matched });
-      await events.write(
-        csvRow([
-          restoreCell(r.entry_id ?? ''),
-          person,
-          r.time_utc as string,
-          formatLocal(instant, zoneOffset(zone, instant)),
-          zone,
-          formatLocal(placed.binStart, zoneOffset(zone, placed.binStart)).replace('.000', ''),
-          dateOfDayNumber(placed.day),
-          placed.excluded ? '1' : '0',
-          String(words),
-          ...values.map((v) => formatNumber(v)),
-        ]),
-      );
+      if (!header) throw inputError(`\`${file}\` holds no rows, so there is nothing to bin; check that it is the scores file written by \`lexichron score\` and that scoring kept some entries (see its rejects file).`);
+      const digest = await fileDigest(path);
+      sources.push({ path: file, sha256: digest.sha256, bytes: digest.bytes, rows: source.rows, entries: source.entries, rejected: source.rejected, ...(options.shard ? { otherShard: source.otherShard } : {}) });
     }
-    if (!state) throw inputError(`\`${file}\` holds no rows, so there is nothing to bin; check that it is the scores file written by \`lexichron score\` and that scoring kept some entries (see its rejects file).`);
-    if (entries === 0) throw inputError(`\`${file}\` holds no scored entries; check the rejects of the score stage.`);
-    const warnings = checkSeriesBounds(state, ends, options, file);
-    const layout: SeriesLayout = { scores: metas.map((m) => m.name), matched: nIdx.map((i) => i >= 0), fill: options.fill !== 'none', detrend: options.detrend };
+    if (!state || !metas) throw inputError(`\`${names[0]}\` holds no rows, so there is nothing to bin; check that it is the scores file written by \`lexichron score\`.`);
+    if (entries === 0) throw inputError(`${names.length === 1 ? `\`${names[0]}\` holds` : `${names.map((n) => `\`${n}\``).join(', ')} hold`} no scored entries; check the rejects of the score stage.`);
+    const warnings = checkSeriesBounds(state, ends, options);
+    const chosen = metas;
+    const layout: SeriesLayout = { scores: chosen.map((m) => m.name), matched: matchedLayout, fill: options.fill !== 'none', detrend: options.detrend };
     const long = await openAtomicLineWriter(options.out);
     const wide = await openAtomicLineWriter(sidecars.wide);
     const staged: Array<Awaited<ReturnType<typeof openAtomicLineWriter>>> = [];
@@ -271,21 +369,21 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       }
       // A sidecar naming what made the series: the scores file (with its hash) and the lexicons
       // (name, version, content hash) recorded by the score stage.
-      const scoresDigest = await fileDigest(options.scores);
-      const lexicons = await readFile(`${options.scores}.meta.json`, 'utf8').then((t) => (JSON.parse(t) as { lexicons?: unknown }).lexicons, () => undefined);
       const metaText =
         JSON.stringify({
           tool: { name: 'lexichron', version: TOOL_VERSION },
-          scores: { path: basename(options.scores), sha256: scoresDigest.sha256, bytes: scoresDigest.bytes },
-          lexicons: lexicons ?? 'unknown: the scores file has no .meta.json sidecar',
+          scores: sources.length === 1 ? { path: sources[0]?.path, sha256: sources[0]?.sha256, bytes: sources[0]?.bytes } : sources.map((x) => ({ path: x.path, sha256: x.sha256, bytes: x.bytes })),
+          lexicons: (scoresMetas[0] as ScoresSidecar).lexicons,
           options: { bin: options.bin.text, dayStart: options.dayStart, minWords: options.minWords, excludeHours: options.excludeHours, fill: options.fill, maxFill: options.maxFill, detrend: options.detrend, span: options.span, windows: options.windows ? options.windows.size : 0 },
-          columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
+          columns: chosen.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
           counts: { persons: persons.length, bins, observed, missing, entries, excludedEntries: state.excludedEntries, rejected, ...(options.shard ? { otherShard } : {}) },
+          // Per scores file: rows read = entries binned + rows rejected (+ rows of other shards).
+          sources: sources.map((x) => ({ path: x.path, rows: x.rows, entries: x.entries, rejected: x.rejected, ...(x.otherShard !== undefined ? { otherShard: x.otherShard } : {}) })),
           ...(options.shard ? { shard: options.shard } : {}),
         }, null, 2) + '\n';
       const describe = (name: string): string | undefined => {
         const base = name.replace(/@\d+$/, '');
-        const m = metas.find((x) => x.name === base);
+        const m = chosen.find((x) => x.name === base);
         return m ? `${base}: ${options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation)} per bin of the ${m.aggregation} score${base !== name ? ` at t = ${name.split('@')[1]}` : ''}` : undefined;
       };
       const outDir = dirname(options.out);
@@ -325,10 +423,11 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
         entries,
         excludedEntries: state.excludedEntries,
         rejected,
-        columns: metas.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
+        columns: chosen.map((m) => ({ ...m, reducer: options.reducers?.[m.name] ?? options.allReducer ?? defaultReducer(m.aggregation) })),
         resources,
         ...(options.shard ? { otherShard } : {}),
         warnings,
+        sources,
       };
     } catch (error) {
       await long.abort();
@@ -349,7 +448,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
  * and the entries at the ends of their series; returns a warning for each person whose entries
  * span more than `warnSpanDays` days.
  */
-function checkSeriesBounds(state: ReturnType<typeof createSeriesState>, ends: ReadonlyMap<string, { first: EntryEnd; last: EntryEnd }>, options: RunSeriesOptions, file: string): string[] {
+function checkSeriesBounds(state: ReturnType<typeof createSeriesState>, ends: ReadonlyMap<string, { first: EntryEnd; last: EntryEnd }>, options: RunSeriesOptions): string[] {
   const maxBins = options.maxBins ?? DEFAULT_MAX_BINS;
   const warnSpan = options.warnSpanDays ?? DEFAULT_WARN_SPAN_DAYS;
   const warnings: string[] = [];
@@ -359,7 +458,7 @@ function checkSeriesBounds(state: ReturnType<typeof createSeriesState>, ends: Re
     const to = Math.max(options.span?.to ?? own?.to ?? bins.lastDay, bins.lastDay);
     const days = to - from + 1;
     const end = ends.get(person);
-    const at = end ? ` The entries at its ends are ${endName(end.first, file)} and ${endName(end.last, file)}.` : '';
+    const at = end ? ` The entries at its ends are ${endName(end.first)} and ${endName(end.last)}.` : '';
     const needed = binsOfDays(days, options.bin);
     if (needed > maxBins) {
       throw inputError(`Cannot build the series of person \`${person}\`: its grid spans ${days} days, up to ${needed} bins of ${options.bin.text}, more than --max-bins ${maxBins}.${at} Check those times for a stray timestamp (or a wrong --epoch), leave the entry out, or raise --max-bins. No series file was written.`);

@@ -1,4 +1,4 @@
-import { cpSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { cpSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { resolve } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -118,6 +118,14 @@ describe('mergeShards (lexichron merge)', () => {
     expect(manifest.reconciliation.scored).toBe(0);
     expect(manifest.reconciliation.otherShard).toBe(manifest.reconciliation.read);
     expect(manifest.outputs.map((o) => o.path)).toEqual(['scores.csv', 'scores.csv.seq', 'scores.rejects.csv', 'scores.csv.meta.json']);
+  });
+
+  it('refuses a shard whose scores file has lost its .meta.json sidecar, naming it and saying how to proceed', async () => {
+    // Issue 21: without the sidecar the lexicons and score columns of a scores file are unknown.
+    const dirs = [0, 1, 2].map((i) => tmp.path(`no-sidecar/${i}`));
+    dirs.forEach((d, i) => cpSync(tmp.path(`parts3/${i}`), d, { recursive: true }));
+    rmSync(join(dirs[1] as string, 'scores.csv.meta.json'));
+    await expect(mergeShards({ shardDirs: dirs, now: NOW, env, out: tmp.path('refused') })).rejects.toThrow(/`.*no-sidecar\/1` has no `scores\.csv\.meta\.json`.*run that shard again/);
   });
 
   it('refuses a folder that is not a shard\'s output, naming it', async () => {

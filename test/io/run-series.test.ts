@@ -4,10 +4,16 @@ import { buildZoneTable } from '../../src/ingest/zone-table.js';
 import { runSeries, type RunSeriesOptions } from '../../src/io/run-series.js';
 import { parseBinSpec, parseClockTime } from '../../src/series/bin-spec.js';
 import { parseStudy } from '../../src/study/parse-study.js';
+import { writeScoresSidecar } from '../support/scores-sidecar.js';
 import { tempFolder } from '../support/temp-files.js';
 
 const tmp = tempFolder('lexichron-series-');
 const HEADER = 'entry_id,person,time_utc,zone,time_local,words,x.valence,x.valence.n';
+
+/** A scores file with the sidecar `score` writes beside it (the series stage refuses one without). */
+function scoresFile(name: string, content: string): string {
+  return writeScoresSidecar(tmp.write(name, content), [{ name: 'x.valence', aggregation: 'count' }]);
+}
 
 function options(scores: string, out: string): RunSeriesOptions {
   return { scores, out, bin: parseBinSpec('1d'), dayStart: 0, minWords: 1, fill: 'none', maxFill: 1, detrend: false };
@@ -15,7 +21,7 @@ function options(scores: string, out: string): RunSeriesOptions {
 
 describe('bad input to the series stage gives clear errors naming the problem and the fix', () => {
   it('refuses a scores file not written by `score` (missing columns), naming the columns and the fix, and leaves no file behind', async () => {
-    const scores = tmp.write('not-scores.csv', 'person,time,text\np1,2026-05-01T10:00:00Z,hello\n');
+    const scores = scoresFile('not-scores.csv', 'person,time,text\np1,2026-05-01T10:00:00Z,hello\n');
     const outDir = `${tmp.dir}/fail`;
     await expect(runSeries(options(scores, `${outDir}/series.csv`))).rejects.toThrow(/Cannot read `not-scores\.csv` as scores: no column `time_utc`, `zone`, `words`\. The series stage reads the output of `lexichron score`; score the text first\./);
     // Atomic writes: a failing run leaves no file at any final path, and no temporary file.
@@ -23,7 +29,7 @@ describe('bad input to the series stage gives clear errors naming the problem an
   });
 
   it('rejects a row with an unknown zone as a diagnostic naming the zone and an example, and bins the rest', async () => {
-    const scores = tmp.write(
+    const scores = scoresFile(
       'zones.csv',
       `${HEADER}\ne1,p1,2026-05-01T10:00:00.000Z,Europe/Brussels,,5,1,1\ne2,p1,2026-05-01T11:00:00.000Z,Europe/Brusels,,5,2,1\ne3,p1,2026-05-01T12:00:00.000Z,Europe/Brussels,,5,3,1\n`,
     );
@@ -35,7 +41,7 @@ describe('bad input to the series stage gives clear errors naming the problem an
   });
 
   it('rejects a row whose words are not a whole number, saying which field is wrong', async () => {
-    const scores = tmp.write('words.csv', `${HEADER}\ne1,p1,2026-05-01T10:00:00.000Z,UTC,,five,1,1\ne2,p1,2026-05-01T10:00:00.000Z,UTC,,5,1,1\n`);
+    const scores = scoresFile('words.csv', `${HEADER}\ne1,p1,2026-05-01T10:00:00.000Z,UTC,,five,1,1\ne2,p1,2026-05-01T10:00:00.000Z,UTC,,5,1,1\n`);
     const result = await runSeries(options(scores, `${tmp.dir}/words-out/series.csv`));
     expect(result.rejected).toEqual({ bad_score_row: 1 });
     expect(readFileSync(result.rejectsPath, 'utf8')).toContain('words (a value of 4 characters shaped `aaaa`) is not a whole number ≥ 0');
