@@ -1,6 +1,6 @@
 import { cholesky } from './cholesky.js';
 import { fixedEffectsTable } from './fixed-effects-table.js';
-import { isNumber } from './is-number.js';
+import { modelRows } from './model-rows.js';
 import { minimizeScalar } from './minimize-scalar.js';
 import { notEstimable, type StatResult } from './stat-result.js';
 
@@ -94,29 +94,10 @@ export function linearMixedModel<T>(
 ): StatResult<LinearMixedModelFit> {
   const level = options.level ?? 0.95;
   const inference = options.inference ?? 'between-within-t';
-  // Collect complete rows.
-  const rows: { g: string; y: number; x: number[] }[] = [];
-  let q = -1;
-  let i = -1;
-  for (const d of values) {
-    ++i;
-    const y = yof(d, i);
-    const x = xof(d, i);
-    if (q < 0) q = x.length;
-    if (!isNumber(y) || x.length !== q || !x.every(isNumber)) continue;
-    rows.push({ g: groupof(d, i), y, x: x as number[] });
-  }
-  if (q < 0) q = options.names?.length ?? 0;
+  // Complete rows; y and the predictors are centred on their means below.
+  const { rows, q, names, xMeans, yMean } = modelRows(values, groupof, yof, xof, options.names);
   const p = q + 1;
-  const names = ['(Intercept)', ...Array.from({ length: q }, (_, j) => options.names?.[j] ?? `x${j + 1}`)];
   const n = rows.length;
-  // Centre y and predictors.
-  const xMeans = new Array<number>(q).fill(0);
-  let yMean = 0;
-  rows.forEach((row, r) => {
-    yMean += (row.y - yMean) / (r + 1);
-    for (let j = 0; j < q; j++) xMeans[j] = (xMeans[j] as number) + ((row.x[j] as number) - (xMeans[j] as number)) / (r + 1);
-  });
   const groups = new Map<string, GroupMoments>();
   const withinVaries = new Array<boolean>(q).fill(false);
   const firstInGroup = new Map<string, number[]>();

@@ -1,6 +1,6 @@
 import { cholesky } from './cholesky.js';
 import { fixedEffectsTable } from './fixed-effects-table.js';
-import { isNumber } from './is-number.js';
+import { modelRows } from './model-rows.js';
 import type { FixedEffect, FixedEffectInference } from './linear-mixed-model.js';
 import { minimizeNelderMead } from './minimize-nelder-mead.js';
 import { notEstimable, type StatResult } from './stat-result.js';
@@ -90,31 +90,13 @@ export function randomSlopeMixedModel<T>(
   const inference = options.inference ?? 'between-within-t';
   const method = options.method ?? 'REML';
   const slopeIndex = options.slope ?? 0;
-  const rows: { g: string; y: number; x: number[] }[] = [];
-  let q = -1;
-  let i = -1;
-  for (const d of values) {
-    ++i;
-    const y = yof(d, i);
-    const x = xof(d, i);
-    if (q < 0) q = x.length;
-    if (!isNumber(y) || x.length !== q || !x.every(isNumber)) continue;
-    rows.push({ g: groupof(d, i), y, x: x as number[] });
-  }
-  if (q < 0) q = options.names?.length ?? 0;
+  const { rows, q, names, xMeans, yMean } = modelRows(values, groupof, yof, xof, options.names);
   if (slopeIndex < 0 || slopeIndex >= q) return notEstimable('no_slope_predictor', `there is no predictor number ${slopeIndex + 1} to give a random slope`);
   const p = q + 1;
-  const names = ['(Intercept)', ...Array.from({ length: q }, (_, j) => options.names?.[j] ?? `x${j + 1}`)];
   const n = rows.length;
   // Centre the fixed-effect columns (the criterion is unchanged) but not the slope's Z column.
-  const xMeans = new Array<number>(q).fill(0);
-  let yMean = 0;
   let zSquares = 0;
-  rows.forEach((row, r) => {
-    yMean += (row.y - yMean) / (r + 1);
-    for (let j = 0; j < q; j++) xMeans[j] = (xMeans[j] as number) + ((row.x[j] as number) - (xMeans[j] as number)) / (r + 1);
-    zSquares += (row.x[slopeIndex] as number) ** 2;
-  });
+  for (const row of rows) zSquares += (row.x[slopeIndex] as number) ** 2;
   const zScale = Math.sqrt(zSquares / Math.max(1, n)) || 1;
   const groups = new Map<string, Moments>();
   const withinVaries = new Array<boolean>(q).fill(false);
