@@ -238,6 +238,8 @@ export interface PreparedStudy {
   lexicons: Awaited<ReturnType<typeof loadLexicons>>;
   zones: ZoneTable;
   time: TimeOptions;
+  /** Each input's time options: the study's `time` with the input's own `time` keys over it. */
+  inputTimes: TimeOptions[];
   key: Awaited<ReturnType<typeof readPseudonymKey>>;
   pseudonyms?: ReturnType<typeof createPseudonymizer>;
   person: (id: string) => string;
@@ -263,6 +265,17 @@ export async function prepareStudy(study: Study, studyPath: string, env: RunStud
   const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
   const window = timeWindow(Date.parse(now), study.time.window, `Study file \`${studyPath}\`, $.time.window`);
   const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap, window };
+  const inputTimes = study.inputs.map((input, n): TimeOptions => {
+    const own = input.time;
+    if (!own) return time;
+    return {
+      format: own.format ?? time.format,
+      epoch: own.epoch ?? time.epoch,
+      gap: own.dstGap ?? time.gap,
+      overlap: own.dstOverlap ?? time.overlap,
+      window: own.window !== undefined ? timeWindow(Date.parse(now), own.window, `Study file \`${studyPath}\`, $.inputs[${n}].time.window`) : window,
+    };
+  });
   const privacy = study.privacy ?? {};
   const keyEnv = privacy.keyEnv ?? PSEUDONYM_KEY_ENV;
   const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, env?.[keyEnv]);
@@ -280,7 +293,7 @@ export async function prepareStudy(study: Study, studyPath: string, env: RunStud
     throw usageError(`Study file \`${studyPath}\`, $.series: ${(error as Error).message.replace(/--([a-z-]+)/g, (_m, flag: string) => `"${flag.replace(/-([a-z])/g, (_x, c: string) => c.toUpperCase())}"`)}`);
   }
   const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && study.ratings ? await ratingsWindows(study.ratings, at, zones, time, person, seriesOptions.dayStart) : undefined;
-  return { study, studyPath, studyDir, at, lexicons, zones, time, key, ...(pseudonyms ? { pseudonyms } : {}), person, redact, seriesOptions, reducers, ...(windows ? { windows } : {}) };
+  return { study, studyPath, studyDir, at, lexicons, zones, time, inputTimes, key, ...(pseudonyms ? { pseudonyms } : {}), person, redact, seriesOptions, reducers, ...(windows ? { windows } : {}) };
 }
 
 /** The term auditors of a study (one per rules lexicon; none when `audit` is false), each with the run's seeded random source. */
@@ -391,7 +404,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
   // A shard runs no term audit: `lexichron merge` audits the whole study (see merge-shards.ts).
   const auditors = options.shard ? [] : studyAuditors(p, options.seed);
   const score = await runScore({
-    inputs: study.inputs.map((i, n) => studyInput(i, p.at(i.path), p.zones, p.time, `$.inputs[${n}]`)),
+    inputs: study.inputs.map((i, n) => studyInput(i, p.at(i.path), p.zones, p.inputTimes[n] ?? p.time, `$.inputs[${n}]`)),
     lexicons: p.lexicons,
     zones: p.zones,
     time: p.time,

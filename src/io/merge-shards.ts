@@ -161,7 +161,7 @@ async function mergeScores(shards: readonly ShardFolder[], out: string): Promise
 async function auditInputs(p: PreparedStudy, recorded: readonly InputRecord[], feed: (entry: RawEntry) => void): Promise<void> {
   const { study, pseudonyms } = p;
   for (const [index, studyIn] of study.inputs.entries()) {
-    const input = studyInput(studyIn, p.at(studyIn.path), p.zones, p.time, `$.inputs[${index}]`);
+    const input = studyInput(studyIn, p.at(studyIn.path), p.zones, p.inputTimes[index] ?? p.time, `$.inputs[${index}]`);
     const inputName = pseudonyms ? `input-${index + 1}` : basename(input.path);
     const hash = createHash('sha256');
     const items = input.items

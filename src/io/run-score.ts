@@ -27,6 +27,8 @@ export interface ScoreInput {
   columns?: ColumnMapping | string;
   format?: TableFormat;
   delimiter?: string;
+  /** This input's time options (default: the run's `time`). */
+  time?: TimeOptions;
   /**
    * A source of items other than a table (a donated export through an importer): entries,
    * rejects, and drops (third-party messages, duplicates) that are counted but never scored.
@@ -247,7 +249,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
             digest.bytes += bytes.length;
           }
         : undefined;
-      const batches = input.items ? oneByOne(await input.items()) : readEntryBatches(tableFile(input.path), { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: options.zones, time: options.time, onBytes });
+      const batches = input.items ? oneByOne(await input.items()) : readEntryBatches(tableFile(input.path), { columns: input.columns, format: input.format, delimiter: input.delimiter, zones: options.zones, time: input.time ?? options.time, onBytes });
       for await (const items of batches) {
         for (const item of items) {
           rows++;

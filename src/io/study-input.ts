@@ -11,7 +11,8 @@ import type { ScoreInput } from './run-score.js';
  * Turns one input of a study file into what the score stage reads: a table (CSV, TSV, JSON Lines,
  * JSON) with its column mapping, or a donated export (mbox, diary, chat-lines, chat-table) read
  * through its importer, with duplicates and bursts handled and third parties' messages dropped
- * before scoring. `path` is already resolved against the study folder.
+ * before scoring. `path` is already resolved against the study folder; `time` is this input's
+ * time options (the study's, with the input's own `time` over them).
  */
 export function studyInput(input: StudyInput, path: string, zones: ZoneTable, time: TimeOptions, where: string): ScoreInput {
   const format = input.format;
@@ -22,6 +23,7 @@ export function studyInput(input: StudyInput, path: string, zones: ZoneTable, ti
       format: format as TableFormat | undefined,
       delimiter: input.delimiter,
       columns: c ? { person: c.person ?? 'person', time: c.time ?? 'time', text: c.text ?? 'text', id: c.id, zone: c.zone } : undefined,
+      time,
     };
   }
   const person = input.person as string;
@@ -46,7 +48,7 @@ export function studyInput(input: StudyInput, path: string, zones: ZoneTable, ti
         senderField: input.senderField,
         timeField: input.timeField,
         textField: input.textField,
-        timeFormat: input.timeFormat,
+        timeFormat: input.timeFormat ?? input.time?.format,
         dstGap: time.gap,
         dstOverlap: time.overlap,
         ...(time.window ? { window: time.window } : {}),

@@ -24,6 +24,8 @@ export interface StudyInput extends ImportFields {
   dedupe?: boolean;
   /** Merge messages within this many minutes into one entry. */
   mergeBurstMinutes?: number;
+  /** This input's own time options, each overriding the study's `time`. */
+  time?: Partial<Study['time']>;
 }
 
 export interface StudySeries {
@@ -83,7 +85,16 @@ export interface StudyProblem {
 }
 
 const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'countRate', 'names', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
-const INPUT_KEYS = ['path', 'format', 'columns', 'delimiter', 'person', 'addresses', 'senders', 'dateOrder', 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat', 'senderField', 'timeField', 'textField', 'timeFormat', 'dedupe', 'mergeBurstMinutes'];
+/** The keys each kind of input uses; any other key is an error (nothing is accepted and ignored). */
+const TABLE_KEYS = ['path', 'format', 'columns', 'delimiter', 'time'];
+const IMPORT_KEYS = ['path', 'format', 'person', 'dedupe', 'mergeBurstMinutes', 'time'];
+const INPUT_KEYS: Record<string, readonly string[]> = {
+  table: TABLE_KEYS,
+  mbox: [...IMPORT_KEYS, 'addresses'],
+  diary: [...IMPORT_KEYS, 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat'],
+  'chat-lines': [...IMPORT_KEYS, 'senders', 'dateOrder'],
+  'chat-table': [...IMPORT_KEYS, 'senders', 'senderField', 'timeField', 'textField', 'timeFormat'],
+};
 const TIME_KEYS = ['format', 'epoch', 'window', 'dstGap', 'dstOverlap'];
 const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'window', 'windows', 'maxBins', 'warnSpanDays'];
 const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names', 'aggregatesOnly'];
@@ -109,6 +120,31 @@ function unknownKeys(value: Record<string, unknown>, known: readonly string[], p
     const hint = near && distance(key, near) <= 3 ? `; did you mean \`${near}\`?` : `; known keys are ${known.join(', ')}`;
     problems.push({ path: `${path}.${key}`, message: `unknown key \`${key}\`${hint}` });
   }
+}
+
+/** An input's key its kind does not use: named with its JSON path and the keys that kind accepts. */
+function kindKeys(value: Record<string, unknown>, kind: string, path: string, problems: StudyProblem[]): void {
+  const known = INPUT_KEYS[(STUDY_IMPORT_FORMATS as readonly string[]).includes(kind) ? kind : 'table'] ?? TABLE_KEYS;
+  for (const key of Object.keys(value)) {
+    if (known.includes(key)) continue;
+    const user = Object.entries(INPUT_KEYS).filter(([, keys]) => keys.includes(key)).map(([k]) => (k === 'table' ? 'table' : k));
+    const where = user.length > 0 ? `; it belongs to ${user.join(', ')} inputs` : '';
+    problems.push({ path: `${path}.${key}`, message: `a ${kind} input does not use \`${key}\`${where}; its keys are ${known.join(', ')}` });
+  }
+}
+
+/** Checks a `time` object (the study's or one input's); problems carry `path`. */
+function checkTime(time: Record<string, unknown>, path: string, problems: StudyProblem[]): void {
+  const need = (ok: boolean, p: string, message: string): void => {
+    if (!ok) problems.push({ path: p, message });
+  };
+  unknownKeys(time, TIME_KEYS, path, problems);
+  const policies = ['reject', 'earlier', 'later'];
+  need(time.format === undefined || (typeof time.format === 'string' && time.format.trim() !== ''), `${path}.format`, 'expected a luxon format such as "MM/dd/yyyy h:mm a"');
+  need(time.epoch === undefined || (EPOCH_UNITS as readonly unknown[]).includes(time.epoch), `${path}.epoch`, `expected ${EPOCH_UNITS.join(', ')}`);
+  need(time.window === undefined || typeof time.window === 'string', `${path}.window`, 'expected a string FROM/TO such as "1990-01-01/2030-12-31" (a side left empty keeps its default)');
+  need(time.dstGap === undefined || policies.includes(time.dstGap as string), `${path}.dstGap`, 'expected reject, earlier or later');
+  need(time.dstOverlap === undefined || policies.includes(time.dstOverlap as string), `${path}.dstOverlap`, 'expected reject, earlier or later');
 }
 
 function isObject(value: unknown): value is Record<string, unknown> {
@@ -142,7 +178,15 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
         problems.push({ path: p, message: 'expected a path string or an object {"path": …, "columns": {…}}' });
         return;
       }
-      unknownKeys(input, INPUT_KEYS, p, problems);
+      kindKeys(input, typeof input.format === 'string' ? input.format : 'csv', p, problems);
+      if (input.time !== undefined) {
+        if (isObject(input.time)) {
+          checkTime(input.time, `${p}.time`, problems);
+          const own = ['mbox', 'diary', 'chat-lines'].includes(input.format as string);
+          for (const key of ['format', 'epoch']) need(!(own && input.time[key] !== undefined), `${p}.time.${key}`, `a ${String(input.format)} export writes its times its own way and does not use \`time.${key}\`; its time keys are window, dstGap, dstOverlap`);
+        }
+        else problems.push({ path: `${p}.time`, message: 'expected an object {"format": …, "epoch": …, "dstGap": …, "dstOverlap": …, "window": …} overriding the study\'s time for this input' });
+      }
       need(str(input.path), `${p}.path`, 'expected the path of a CSV, TSV, JSON Lines or JSON file');
       const formats = ['csv', 'tsv', 'jsonl', 'json', ...STUDY_IMPORT_FORMATS];
       need(input.format === undefined || formats.includes(input.format as string), `${p}.format`, `expected one of ${formats.join(', ')}`);
@@ -172,12 +216,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   need(json.zones !== undefined || json.timeZone !== undefined, '$', 'name the persons\' time zones with "zones" (a file) or "timeZone" (one IANA zone for everyone)');
   const time = isObject(json.time) ? json.time : {};
   if (json.time !== undefined && !isObject(json.time)) problems.push({ path: '$.time', message: 'expected an object {"format": …, "epoch": …, "dstGap": …, "dstOverlap": …}' });
-  unknownKeys(time, TIME_KEYS, '$.time', problems);
-  const policies = ['reject', 'earlier', 'later'];
-  need(time.epoch === undefined || (EPOCH_UNITS as readonly unknown[]).includes(time.epoch), '$.time.epoch', `expected ${EPOCH_UNITS.join(', ')}`);
-  need(time.window === undefined || typeof time.window === 'string', '$.time.window', 'expected a string FROM/TO such as "1990-01-01/2030-12-31" (a side left empty keeps its default)');
-  need(time.dstGap === undefined || policies.includes(time.dstGap as string), '$.time.dstGap', 'expected reject, earlier or later');
-  need(time.dstOverlap === undefined || policies.includes(time.dstOverlap as string), '$.time.dstOverlap', 'expected reject, earlier or later');
+  checkTime(time, '$.time', problems);
   const lexicons = json.lexicons ?? ['afinn-165', 'vader'];
   need(Array.isArray(lexicons) && lexicons.length > 0 && lexicons.every(str), '$.lexicons', 'expected a non-empty array of bundled lexicon names or .lex.tsv paths');
   need(json.keepText === undefined || typeof json.keepText === 'boolean', '$.keepText', 'expected true or false');
