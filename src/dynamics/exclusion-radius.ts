@@ -1,3 +1,4 @@
+import { addCoMoment, emptyCoMoments } from '../stats/co-moments.js';
 import { spanValid } from './span-valid.js';
 import type { BinnedSeries } from './types.js';
 
@@ -10,27 +11,12 @@ import type { BinnedSeries } from './types.js';
  */
 export function decorrelationTime(series: BinnedSeries, maxLag: number): number {
   for (let k = 1; k <= maxLag; k++) {
-    let n = 0;
-    let mx = 0;
-    let my = 0;
-    let sxx = 0;
-    let syy = 0;
-    let sxy = 0;
+    const m = emptyCoMoments();
     for (let t = k; t < series.values.length; t++) {
-      if (!spanValid(series, t - k, t)) continue;
-      const x = series.values[t - k] as number;
-      const y = series.values[t] as number;
-      n++;
-      const dx = x - mx;
-      mx += dx / n;
-      const dy = y - my;
-      my += dy / n;
-      sxx += dx * (x - mx);
-      syy += dy * (y - my);
-      sxy += dx * (y - my);
+      if (spanValid(series, t - k, t)) addCoMoment(m, series.values[t - k] as number, series.values[t] as number);
     }
-    if (n < 3) return k;
-    if (!(sxx > 0 && syy > 0) || sxy / Math.sqrt(sxx * syy) < 1 / Math.E) return k;
+    if (m.n < 3) return k;
+    if (!(m.sxx > 0 && m.syy > 0) || m.sxy / Math.sqrt(m.sxx * m.syy) < 1 / Math.E) return k;
   }
   return maxLag;
 }
