@@ -5,7 +5,7 @@ import { DEFAULT_TIME_OPTIONS, parseInstant, type TimeOptions } from './parse-in
 import { readRecordBatches, type ReadRecordsOptions, type TableFile } from './read-records.js';
 import { isValidZone, zoneOffset } from './zone-offset.js';
 import { zoneAtInstant, zoneOnLocalDate, type ZoneTable } from './zone-table.js';
-import { describeValue } from '../privacy/describe-value.js';
+import { describeValue, ID_LIKE, ZONE_LIKE } from '../privacy/describe-value.js';
 
 export interface ReadEntriesOptions extends ReadRecordsOptions {
   columns?: ColumnMapping | string;
@@ -13,9 +13,6 @@ export interface ReadEntriesOptions extends ReadRecordsOptions {
   time?: TimeOptions;
 }
 
-/** Values shown as they are in a diagnostic: what looks like an IANA zone name or a person id (see describeValue). */
-const ZONE_LIKE = /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/;
-const ID_LIKE = /^[\p{L}\p{N}_.:@#-]+$/u;
 /** Column of entries pseudonymized at import that holds the key's check value (see entryLine). */
 export const PSEUDONYM_KEY_COLUMN = 'pseudonym_key';
 

@@ -19,7 +19,7 @@ import { mergedDataPackage } from './merge-data-package.js';
 import { fileDigest } from './run-score.js';
 import { TOOL_VERSION } from '../version.js';
 import { shardFilter, type ShardSpec } from '../shard/shard-of-person.js';
-import { describeValue } from '../privacy/describe-value.js';
+import { describeValue, ZONE_LIKE } from '../privacy/describe-value.js';
 import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 /** Score column metadata from a scores sidecar (`scores.csv.meta.json`). */
@@ -271,7 +271,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
         const zone = r.zone ?? '';
         const words = Number(r.words);
         if (!isValidZone(zone)) {
-          await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone ${describeValue(zone, /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/)}; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
+          await reject({ code: 'unknown_zone', message: zone === '' ? 'the zone is empty; every scores row needs the person\'s IANA zone (score again with --zones or --time-zone)' : `unknown time zone ${describeValue(zone, ZONE_LIKE)}; expected an IANA name such as \`Europe/Brussels\` (fix the zone file and score again)`, source: item.source, stage: 'series' });
           continue;
         }
         if (!(r.person ?? '').trim() || !inTimeWindow(instant, undefined) || !Number.isInteger(words) || words < 0) {

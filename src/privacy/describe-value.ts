@@ -3,6 +3,11 @@ const SHOWN_MAX = 40;
 /** Longest shape shown. */
 const SHAPE_MAX = 32;
 
+/** Values describeValue may quote as they are: what looks like an IANA zone name. */
+export const ZONE_LIKE = /^[A-Za-z][A-Za-z0-9_+-]*(?:\/[A-Za-z0-9_+-]+)*$/;
+/** Values describeValue may quote as they are: what looks like a person or entry id. */
+export const ID_LIKE = /^[\p{L}\p{N}_.:@#-]+$/u;
+
 /**
  * How a value from a participant's file is described in a diagnostic: never the value itself, but
  * its length and its shape, with every digit written `9`, every lower-case letter `a`, every

@@ -1,7 +1,7 @@
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { runStudy } from '../../src/pipeline.js';
 import { parseStudy } from '../../src/study/parse-study.js';
+import { readCsv } from '../support/csv.js';
 import { tempFolder } from '../support/temp-files.js';
 
 const tmp = tempFolder();
@@ -49,10 +49,9 @@ describe('each input reads its times with its own time options', () => {
     }));
     const result = await runStudy(tmp.path('study.json'), { now: '2026-12-01T00:00:00.000Z', seed: 1 });
     expect(result.score.reconciliation.scored).toBe(4);
-    const [header, ...rows] = readFileSync(tmp.path('out/scores.csv'), 'utf8').trim().split('\n');
-    const time = (header ?? '').split(',').findIndex((c) => c.startsWith('time'));
+    const rows = readCsv(tmp.path('out/scores.csv'));
     // Both persons' entries land on the same instants (ECMA-262 Date.parse of the RFC 3339 forms).
-    const instants = rows.map((r) => Date.parse(r.split(',')[time] ?? ''));
+    const instants = rows.map((r) => Date.parse(r.time_utc ?? ''));
     expect(instants.sort()).toEqual([Date.parse('2026-03-02T09:30:00Z'), Date.parse('2026-03-02T09:30:00Z'), Date.parse('2026-03-03T21:30:00Z'), Date.parse('2026-03-03T21:30:00Z')]);
   });
 });
