@@ -7,9 +7,13 @@
 function startsFormula(value: string): boolean {
   let i = 0;
   while (value.charCodeAt(i) === 0x27) i++;
-  const c = value.charCodeAt(i);
-  if (!(c === 0x3d || c === 0x2b || c === 0x2d || c === 0x40 || c === 0x09 || c === 0x0d || c === 0x00)) return false;
+  if (!isFormulaStart(value.charCodeAt(i))) return false;
   return i > 0 || !NUMBER.test(value);
+}
+
+/** True for the code units that open a formula in a spreadsheet cell (see startsFormula): `=`, `+`, `-`, `@`, tab, CR, NUL. */
+export function isFormulaStart(code: number): boolean {
+  return code === 0x3d || code === 0x2b || code === 0x2d || code === 0x40 || code === 0x09 || code === 0x0d || code === 0x00;
 }
 
 const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;

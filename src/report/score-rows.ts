@@ -4,7 +4,7 @@ import { writeAscii } from '../text/ascii-bytes.js';
 import type { ScoreColumn } from '../score/score-entry.js';
 import type { BatchScores } from '../score/score-text.js';
 import type { RawEntry } from '../types.js';
-import { csvField } from './csv.js';
+import { csvField, isFormulaStart } from './csv.js';
 import { formatNumber, integerText } from './format-number.js';
 
 /** Fixed leading columns of a scores file (docs/architecture.md). */
@@ -119,7 +119,7 @@ function textBytes(value: string): number {
 function writeTextField(buffer: Buffer, at: number, value: string): number {
   const start = at;
   const first = value.charCodeAt(0);
-  if (first === 0x3d || first === 0x2b || first === 0x2d || first === 0x40 || first === 0x09 || first === 0x00 || first === 0x27) {
+  if (first === 0x27 || isFormulaStart(first)) {
     return start + buffer.write(csvField(value), start, 'utf8');
   }
   for (let k = 0; k < value.length; k++) {
