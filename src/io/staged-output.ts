@@ -12,14 +12,16 @@ export interface StagedOutput {
    * The `descriptions` (files that describe the others, such as `manifest.json`) are removed from
    * the output folder first and put in place last, in the order given: a process killed during
    * the commit leaves a folder without them, never one whose manifest describes another run's files.
+   * `beforeStep`, if given, is called before each change to the output folder with its number
+   * (0, 1, …): a test throws there to stop the commit at that exact step, as a killed process would.
    */
-  commit(): Promise<void>;
+  commit(beforeStep?: (step: number) => void): Promise<void>;
   /** Removes the staging folder and everything in it; the output folder is unchanged. */
   abort(): Promise<void>;
 }
 
 /** Moves the entries of `from` into `to`, recursively for folders that exist in both; `skip` names are left in `from`. */
-async function moveInto(from: string, to: string, skip: ReadonlySet<string>): Promise<void> {
+async function moveInto(from: string, to: string, skip: ReadonlySet<string>, step: () => void): Promise<void> {
   await mkdir(to, { recursive: true });
   const entries = await readdir(from, { withFileTypes: true });
   entries.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
@@ -29,11 +31,15 @@ async function moveInto(from: string, to: string, skip: ReadonlySet<string>): Pr
     const target = join(to, entry.name);
     const existing = await lstat(target).catch(() => undefined);
     if (entry.isDirectory() && existing?.isDirectory()) {
-      await moveInto(source, target, new Set());
+      await moveInto(source, target, new Set(), step);
       continue;
     }
     // A folder over a file, a file over a folder, or anything over a symbolic link: the old one goes.
-    if (existing && (existing.isDirectory() || entry.isDirectory() || existing.isSymbolicLink())) await rm(target, { recursive: true, force: true });
+    if (existing && (existing.isDirectory() || entry.isDirectory() || existing.isSymbolicLink())) {
+      step();
+      await rm(target, { recursive: true, force: true });
+    }
+    step();
     await rename(source, target);
   }
 }
@@ -50,11 +56,18 @@ export async function openStagedOutput(outDir: string, descriptions: readonly st
   const tracked = trackTemporary(dir);
   return {
     dir,
-    async commit() {
-      for (const name of descriptions) await rm(join(outDir, name), { force: true });
-      await moveInto(dir, outDir, new Set(descriptions));
+    async commit(beforeStep) {
+      let steps = 0;
+      const step = (): void => beforeStep?.(steps++);
       for (const name of descriptions) {
-        if (await lstat(join(dir, name)).catch(() => undefined)) await rename(join(dir, name), join(outDir, name));
+        step();
+        await rm(join(outDir, name), { force: true });
+      }
+      await moveInto(dir, outDir, new Set(descriptions), step);
+      for (const name of descriptions) {
+        if (!(await lstat(join(dir, name)).catch(() => undefined))) continue;
+        step();
+        await rename(join(dir, name), join(outDir, name));
       }
       await rm(dir, { recursive: true, force: true });
       tracked.forget();

@@ -1,4 +1,5 @@
 import { spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readdirSync, readFileSync, utimesSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -42,6 +43,48 @@ describe('openStagedOutput', () => {
     await staged.abort();
     expect(readdirSync(dir)).toEqual(['scores.csv']);
     expect(readFileSync(join(dir, 'scores.csv'), 'utf8')).toBe('old');
+  });
+});
+
+/** A manifest listing each file with its SHA-256, as the study runner writes one. */
+function manifestOf(files: Record<string, string>): string {
+  return JSON.stringify({ outputs: Object.entries(files).map(([path, text]) => ({ path, sha256: createHash('sha256').update(text).digest('hex') })) });
+}
+
+/** Files the folder's manifest lists whose content is not what it records (none when there is no manifest). */
+function mismatches(dir: string): string[] {
+  if (!existsSync(join(dir, 'manifest.json'))) return [];
+  const manifest = JSON.parse(readFileSync(join(dir, 'manifest.json'), 'utf8')) as { outputs: Array<{ path: string; sha256: string }> };
+  return manifest.outputs.filter((o) => !existsSync(join(dir, o.path)) || createHash('sha256').update(readFileSync(join(dir, o.path))).digest('hex') !== o.sha256).map((o) => o.path);
+}
+
+describe('openStagedOutput stopped at any step of its commit', () => {
+  // A killed process stops between two file-system calls; the commit's step hook stops it at
+  // each of them in turn, so every interruption point is checked on every run (issue 18 item 8).
+  const old = { 'scores.csv': 'old scores', 'series-long.csv': 'old series', 'validation/a.csv': 'old a', 'sub/x.csv': 'old x' };
+  const fresh = { 'scores.csv': 'new scores', 'series-long.csv': 'new series', 'validation/a.csv': 'new a', 'dynamics/d.csv': 'new d', sub: 'now a file' };
+
+  it('never leaves a manifest that describes files of another run, whichever step it stops at', async () => {
+    let completed = false;
+    for (let stopAt = 0; !completed && stopAt < 50; stopAt++) {
+      const dir = folder(`stop-${stopAt}`, { ...old, 'manifest.json': manifestOf(old), 'report.html': 'old report' });
+      const staged = await openStagedOutput(dir, ['report.html', 'manifest.json']);
+      for (const [file, text] of Object.entries({ ...fresh, 'manifest.json': manifestOf(fresh), 'report.html': 'new report' })) {
+        mkdirSync(join(staged.dir, file, '..'), { recursive: true });
+        writeFileSync(join(staged.dir, file), text);
+      }
+      const stopped = await staged.commit((step) => {
+        if (step === stopAt) throw new Error(`stopped at step ${step}`);
+      }).then(() => false, () => true);
+      expect(mismatches(dir), `stopped at step ${stopAt}`).toEqual([]);
+      if (!stopped) {
+        completed = true;
+        // The commit has 2 removals of describing files, 6 moves/replacements and 2 describing files put last.
+        expect(stopAt).toBe(10);
+        expect(JSON.parse(readFileSync(join(dir, 'manifest.json'), 'utf8'))).toEqual(JSON.parse(manifestOf(fresh)));
+      }
+    }
+    expect(completed).toBe(true);
   });
 });
 
