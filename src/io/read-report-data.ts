@@ -87,6 +87,7 @@ export async function readReportData(outDir: string, options: ReportOptions = {}
     const meta = await readJson(at(found.scoresMeta));
     const r = (meta.value as { reconciliation?: Reconciliation } | undefined)?.reconciliation;
     if (r) inputs.reconciliation = r;
+    if (meta.value && typeof meta.value === 'object' && !Array.isArray(meta.value)) inputs.scoresMeta = meta.value as Record<string, unknown>;
   }
   if (found.validationJson) {
     const v = await readJson(at(found.validationJson));

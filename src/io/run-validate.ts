@@ -279,8 +279,9 @@ export async function runValidate(options: RunValidateOptions): Promise<RunValid
     binsPerPerson: result.binsPerPerson.length > 0 ? await write('validation-bins-per-person.csv', binsPerPersonTable(result), 'Observed bins behind each person mean and the reliability of that mean.') : undefined,
     json: join(out, 'validation.json'),
   };
-  await writeFileAtomic(files.json as string, validationJson(result));
   const rejected: Record<string, number> = {};
   for (const d of ratings.diagnostics) rejected[d.code] = (rejected[d.code] ?? 0) + 1;
-  return { result, scoreColumns, ratingColumns: ratings.columns, files, resources, reconciliation: { read: ratings.read, kept: ratings.ratings.length, rejected } };
+  const reconciliation = { read: ratings.read, kept: ratings.ratings.length, rejected };
+  await writeFileAtomic(files.json as string, validationJson(result, reconciliation));
+  return { result, scoreColumns, ratingColumns: ratings.columns, files, resources, reconciliation };
 }
