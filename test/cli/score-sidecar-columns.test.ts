@@ -32,6 +32,16 @@ describe('the scores sidecar records each input\'s column map', () => {
     expect(inputs[2]?.columns).toBeUndefined(); // read by the default names
   });
 
+  it('shows each file\'s column map in the provenance of `lexichron report` on the scores folder (from the sidecar, as there is no manifest)', async () => {
+    const { code, stderr } = await runCli('report', tmp.path('named'));
+    expect(code, stderr).toBe(0);
+    const html = readFileSync(tmp.path('named/report.html'), 'utf8');
+    const provenance = html.slice(html.indexOf('id="provenance"'));
+    expect(provenance).toContain('<code>wren-diary.csv</code></td><td><code>columns person=who,time=when,text=note</code>');
+    expect(provenance).toContain('<code>olan-chat.csv</code></td><td><code>columns person=sender,time=sent_at,text=body,id=msg</code>');
+    expect(provenance).toContain('<code>plain.csv</code></td><td><span class="muted">default column names</span>');
+  });
+
   it('records a shared --columns map on every input it applies to', async () => {
     const out = tmp.path('shared/scores.csv');
     const { code, stderr } = await runCli('score', diary, '--time-zone', 'UTC', '-l', 'afinn-165', '--workers', '0', '-o', out, '--columns', 'person=who,time=when,text=note');
