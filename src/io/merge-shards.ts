@@ -271,9 +271,11 @@ async function mergeInto(outDir: string, shards: readonly ShardFolder[], p: Prep
   const { shard: _shard, ...meta } = { ...meta0, reconciliation, options: { ...meta0.options, pseudonymized } };
   const metaPath = join(outDir, 'scores.csv.meta.json');
   await writeFileAtomic(metaPath, JSON.stringify(meta, null, 2) + '\n');
-  const score: RunScoreResult = { reconciliation, pseudonymized, columns: meta0.columns, lexicons: meta0.lexicons, inputs: meta0.inputs, scoresPath, rejectsPath, metaPath };
+  // The sidecar's inputs may carry their column maps; the run's result (and so the manifest) records path, size, digest and rows.
+  const inputs = meta0.inputs.map(({ path, bytes, sha256, rows }) => ({ path, bytes, sha256, rows }));
+  const score: RunScoreResult = { reconciliation, pseudonymized, columns: meta0.columns, lexicons: meta0.lexicons, inputs, scoresPath, rejectsPath, metaPath };
   const auditors = studyAuditors(p, seed);
   const feed = auditEntryFeeder(p, auditors);
-  if (feed) await auditInputs(p, meta0.inputs, feed);
+  if (feed) await auditInputs(p, inputs, feed);
   return finishStudy(outDir, p, score, auditors.map((a) => a.finish()), { now: options.now, seed, ...(options.stages ? { stages: options.stages } : {}) });
 }

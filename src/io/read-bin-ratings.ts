@@ -1,6 +1,6 @@
-import { readFile } from 'node:fs/promises';
 import Papa from 'papaparse';
 import { usageError } from '../errors.js';
+import { ownTableFile } from './own-table-file.js';
 import type { RatingsByBin } from './run-dynamics.js';
 import { describeColumns } from '../privacy/describe-columns.js';
 
@@ -12,7 +12,7 @@ import { describeColumns } from '../privacy/describe-columns.js';
 export async function readBinRatings(path: string, ratingColumns: readonly string[]): Promise<RatingsByBin> {
   let text: string;
   try {
-    text = await readFile(path, 'utf8');
+    text = (await (await ownTableFile(path)).bytes()).toString('utf8');
   } catch {
     throw usageError(`Cannot read \`${path}\`: no such file; give the validation-pairs.csv that \`lexichron validate --align bins\` wrote.`);
   }

@@ -5,6 +5,7 @@ import { buildReportData, type ReportInputs, type ReportOptions } from '../repor
 import type { ReportData } from '../report/report-data.js';
 import type { Reconciliation } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
+import { ownTableFile } from './own-table-file.js';
 
 /** Files of the folder (and its subfolders, two levels deep), as paths relative to it, sorted. */
 async function listFiles(dir: string, depth = 2, prefix = ''): Promise<string[]> {
@@ -49,6 +50,11 @@ export function locateReportFiles(files: readonly string[]): {
   };
 }
 
+/** Text of one of lexichron's own CSV outputs, its header in lexichron's default names (see ownTableFile). */
+async function readOwnTable(path: string): Promise<string> {
+  return (await (await ownTableFile(path)).bytes()).toString('utf8');
+}
+
 async function readJson(path: string): Promise<{ value?: unknown; reason?: string }> {
   try {
     return { value: JSON.parse(await readFile(path, 'utf8')) };
@@ -71,7 +77,7 @@ export async function readReportData(outDir: string, options: ReportOptions = {}
   const at = (rel: string): string => join(dir, rel);
   const inputs: ReportInputs = { source: source ?? basename(dir), tool: { name: 'lexichron', version: TOOL_VERSION }, reasons: {} };
   const reasons = inputs.reasons as NonNullable<ReportInputs['reasons']>;
-  if (found.series) inputs.seriesCsv = await readFile(at(found.series), 'utf8');
+  if (found.series) inputs.seriesCsv = await readOwnTable(at(found.series));
   if (found.manifest) {
     const m = await readJson(at(found.manifest));
     if (m.value && typeof m.value === 'object') inputs.manifest = m.value as Record<string, unknown>;
@@ -81,20 +87,21 @@ export async function readReportData(outDir: string, options: ReportOptions = {}
     const meta = await readJson(at(found.scoresMeta));
     const r = (meta.value as { reconciliation?: Reconciliation } | undefined)?.reconciliation;
     if (r) inputs.reconciliation = r;
+    if (meta.value && typeof meta.value === 'object' && !Array.isArray(meta.value)) inputs.scoresMeta = meta.value as Record<string, unknown>;
   }
   if (found.validationJson) {
     const v = await readJson(at(found.validationJson));
     if (v.value !== undefined) inputs.validationJson = v.value;
     else if (v.reason) reasons.validation = v.reason;
   }
-  if (found.alignedCsv) inputs.alignedCsv = await readFile(at(found.alignedCsv), 'utf8');
-  if (found.topTermsCsv) inputs.topTermsCsv = await readFile(at(found.topTermsCsv), 'utf8');
+  if (found.alignedCsv) inputs.alignedCsv = await readOwnTable(at(found.alignedCsv));
+  if (found.topTermsCsv) inputs.topTermsCsv = await readOwnTable(at(found.topTermsCsv));
   if (found.termsJson && !found.topTermsCsv) {
     const t = await readJson(at(found.termsJson));
     if (t.value !== undefined) inputs.termsJson = t.value;
     else if (t.reason) reasons.lexicons = t.reason;
   }
-  if (found.termHits.length) inputs.termHitsFiles = await Promise.all(found.termHits.map(async (f) => ({ lexicon: f.split('/').slice(-2, -1)[0] as string, text: await readFile(at(f), 'utf8') })));
-  if (found.dynamics.length) inputs.dynamicsFiles = await Promise.all(found.dynamics.map(async (f) => ({ name: relative(dir, at(f)), text: await readFile(at(f), 'utf8') })));
+  if (found.termHits.length) inputs.termHitsFiles = await Promise.all(found.termHits.map(async (f) => ({ lexicon: f.split('/').slice(-2, -1)[0] as string, text: await readOwnTable(at(f)) })));
+  if (found.dynamics.length) inputs.dynamicsFiles = await Promise.all(found.dynamics.map(async (f) => ({ name: relative(dir, at(f)), text: await readOwnTable(at(f)) })));
   return buildReportData(inputs, options);
 }

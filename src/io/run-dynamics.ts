@@ -1,4 +1,3 @@
-import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { availableParallelism } from 'node:os';
 import { analyseDynamics, crossMapSettings, type DynamicsOptions, type DynamicsResult } from '../dynamics/analyse-dynamics.js';
@@ -15,6 +14,7 @@ import type { Diagnostic } from '../types.js';
 import { writeFileAtomic } from './atomic-write.js';
 import { diagnosticText } from '../privacy/diagnostic-text.js';
 import { autoCrossMapWorkers, crossMapPersons, crossMapWorkersAvailable } from './ccm-pool.js';
+import { ownTableFile } from './own-table-file.js';
 
 /** Self-reports aggregated into the series' bins, keyed `person + '\u0000' + bin_start`. */
 export interface RatingsByBin {
@@ -70,7 +70,7 @@ export async function runDynamics(
 ): Promise<RunDynamicsResult> {
   let text: string;
   try {
-    text = await readFile(seriesPath, 'utf8');
+    text = (await (await ownTableFile(seriesPath)).bytes()).toString('utf8');
   } catch {
     throw inputError(`Cannot read \`${seriesPath}\`: no such file or it is not readable; give the long series CSV written by \`lexichron series\``);
   }

@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import { basename } from 'node:path';
-import type { ColumnMapping } from '../ingest/column-mapping.js';
+import { parseColumnMapping, type ColumnMapping } from '../ingest/column-mapping.js';
 import type { TimeOptions } from '../ingest/parse-instant.js';
 import { readEntryBatches } from '../ingest/read-entries.js';
 import type { TableFormat } from '../ingest/read-records.js';
@@ -120,6 +120,12 @@ const VADER_HERE_AFTER = 2;
 /** An importer's items as batches of one, for the loop that reads table files in batches. */
 async function* oneByOne<T>(items: AsyncIterable<T>): AsyncGenerator<T[]> {
   for await (const item of items) yield [item];
+}
+
+/** An input's record for the sidecar: with its column map as read (absent: the default column names). */
+function withColumnMap(record: InputRecord, columns: ColumnMapping | string | undefined): InputRecord & { columns?: ColumnMapping } {
+  if (columns === undefined) return record;
+  return { ...record, columns: typeof columns === 'string' ? parseColumnMapping(columns) : { ...columns } };
 }
 
 /** Where the rejects and the sidecar of a scores file go. */
@@ -305,7 +311,8 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       tool: { name: 'lexichron', version: TOOL_VERSION },
       lexicons: options.lexicons.map((l) => l.ref),
       columns,
-      inputs,
+      // Each input as read: its column map too (study file, --columns or --file-columns), when one was given.
+      inputs: inputs.map((record, k) => withColumnMap(record, options.inputs[k]?.columns)),
       reconciliation,
       options: { keepText, time: options.time, pseudonymized: options.person !== undefined || pseudonyms !== undefined || markedEntries },
       ...(shard ? { shard } : {}),

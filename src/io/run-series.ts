@@ -3,7 +3,7 @@ import { readFile } from 'node:fs/promises';
 import { basename, dirname } from 'node:path';
 import { inputError, usageError } from '../errors.js';
 import { readRecords } from '../ingest/read-records.js';
-import { tableFile } from './table-file.js';
+import { ownTableFile } from './own-table-file.js';
 import { formatLocal } from '../ingest/parse-instant.js';
 import { isValidZone, zoneOffset } from '../ingest/zone-offset.js';
 import { csvRow, restoreCell } from '../report/csv.js';
@@ -229,7 +229,7 @@ export async function runSeries(options: RunSeriesOptions): Promise<RunSeriesRes
       let header: string[] | undefined;
       let idx: number[] = [];
       let nIdx: number[] = [];
-      for await (const item of readRecords(tableFile(path))) {
+      for await (const item of readRecords(await ownTableFile(path))) {
         if (item.kind === 'header') {
           header = item.columns;
           const missing = ['person', 'time_utc', 'zone', 'words'].filter((c) => !header?.includes(c));

@@ -6,6 +6,7 @@ import { parseColumnMapping, resolveColumns, type ColumnMapping } from '../inges
 import { DEFAULT_TIME_OPTIONS, formatLocal, parseInstant, type TimeOptions } from '../ingest/parse-instant.js';
 import { recordToEntry } from '../ingest/read-entries.js';
 import { readRecords, type TableFormat } from '../ingest/read-records.js';
+import { ownTableFile } from './own-table-file.js';
 import { tableFile } from './table-file.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import { csvDocument } from '../report/csv.js';
@@ -139,7 +140,7 @@ async function readSeriesBins(path: string): Promise<{ bins: SeriesBin[]; column
   const bins: SeriesBin[] = [];
   const diagnostics: Diagnostic[] = [];
   let columns: string[] | undefined;
-  for await (const item of readRecords(tableFile(path), { format: 'csv' })) {
+  for await (const item of readRecords(await ownTableFile(path), { format: 'csv' })) {
     if (item.kind === 'header') {
       for (const required of ['person', 'bin_start', 'bin_end', 'missing']) {
         if (!item.columns.includes(required)) throw usageError(`Cannot read \`${basename(path)}\` as a long series: no column \`${required}\`. Pass the long series CSV written by \`lexichron series\`.`);
@@ -163,7 +164,7 @@ async function readEntryScores(path: string): Promise<{ entries: EntryScore[]; c
   const entries: EntryScore[] = [];
   const diagnostics: Diagnostic[] = [];
   let columns: string[] | undefined;
-  for await (const item of readRecords(tableFile(path))) {
+  for await (const item of readRecords(await ownTableFile(path))) {
     if (item.kind === 'header') {
       for (const required of ['person', 'time_utc', 'words']) {
         if (!item.columns.includes(required)) throw usageError(`Cannot read \`${basename(path)}\` as entry scores: no column \`${required}\`. Pass the event file written by \`lexichron series\` (…events.csv) or a scores file written by \`lexichron score\`.`);
@@ -278,8 +279,9 @@ export async function runValidate(options: RunValidateOptions): Promise<RunValid
     binsPerPerson: result.binsPerPerson.length > 0 ? await write('validation-bins-per-person.csv', binsPerPersonTable(result), 'Observed bins behind each person mean and the reliability of that mean.') : undefined,
     json: join(out, 'validation.json'),
   };
-  await writeFileAtomic(files.json as string, validationJson(result));
   const rejected: Record<string, number> = {};
   for (const d of ratings.diagnostics) rejected[d.code] = (rejected[d.code] ?? 0) + 1;
-  return { result, scoreColumns, ratingColumns: ratings.columns, files, resources, reconciliation: { read: ratings.read, kept: ratings.ratings.length, rejected } };
+  const reconciliation = { read: ratings.read, kept: ratings.ratings.length, rejected };
+  await writeFileAtomic(files.json as string, validationJson(result, reconciliation));
+  return { result, scoreColumns, ratingColumns: ratings.columns, files, resources, reconciliation };
 }

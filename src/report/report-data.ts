@@ -200,6 +200,33 @@ export interface DynamicsData {
   tables: ResultTable[];
 }
 
+/**
+ * How the self-reports were read and matched to the text (the validate stage's record): rows read
+ * and kept, what was left out with its reason (whole rows, single ratings, self-reports that found
+ * no text), and what was paired. Counts not known to this version of the report are kept in
+ * `more`, by the name the stage gave them, so nothing the stage counted goes unshown.
+ */
+export interface RatingsReconciliation {
+  /** Self-report rows read from the ratings file (absent when the output does not record it). */
+  read?: number;
+  /** Rows with a usable person and time. */
+  kept?: number;
+  /** Whole rows left out, by reason code. */
+  rowsLeftOut: Record<string, number>;
+  /** Single ratings left out while the row was kept (not a number, outside the scale), by code. */
+  valuesLeftOut: Record<string, number>;
+  /** Self-reports that found no text to pair with, by code. */
+  notPaired: Record<string, number>;
+  /** Other problems of the validate stage (e.g. unreadable rows of the series file), by code. */
+  other: Record<string, number>;
+  /** Aligned occasions (bins, or windows before each self-report), those with text, and persons. */
+  occasions?: number;
+  occasionsWithText?: number;
+  persons?: number;
+  /** Further counts the stage recorded: label (its own name) and either a number or counts by code. */
+  more: Array<{ name: string; value: number | Record<string, number> }>;
+}
+
 /** Data of the provenance section: the manifest as written. */
 export interface ProvenanceData {
   manifest: Record<string, unknown>;
@@ -215,6 +242,8 @@ export interface ReportData {
   reconciliation: Part<Reconciliation>;
   series: Part<SeriesData>;
   validation: Part<ValidationData>;
+  /** How the self-reports were read and paired (shown in the validation section); absent without a validate stage. */
+  ratingsReconciliation?: RatingsReconciliation;
   lexicons: Part<LexiconAuditData>;
   readiness: Part<ReadinessData>;
   dynamics: Part<DynamicsData>;

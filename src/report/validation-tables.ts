@@ -119,10 +119,12 @@ export function validationDiagnosticsTable(result: ValidationResult): Table {
 }
 
 /**
- * The JSON summary: options, counts, each pair's statistics and verdict, reliability and
- * bins-per-person summaries, and diagnostic counts by code. Non-finite numbers never appear.
+ * The JSON summary: options, the ratings reconciliation when given (self-report rows read, kept,
+ * and left out by reason: what the report's reconciliation table shows), counts, each pair's
+ * statistics and verdict, reliability and bins-per-person summaries, and diagnostic counts by
+ * code. Non-finite numbers never appear.
  */
-export function validationJson(result: ValidationResult): string {
+export function validationJson(result: ValidationResult, reconciliation?: Readonly<Record<string, unknown>>): string {
   const diagnostics: Record<string, number> = {};
   for (const d of result.diagnostics) diagnostics[d.code] = (diagnostics[d.code] ?? 0) + 1;
   const clean = (value: unknown): unknown => {
@@ -133,6 +135,7 @@ export function validationJson(result: ValidationResult): string {
   };
   const body = {
     options: result.options,
+    ...(reconciliation ? { reconciliation } : {}),
     counts: result.counts,
     diagnostics,
     pairs: result.pairs.map(({ score, rating, analysis }) => {

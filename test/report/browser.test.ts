@@ -37,6 +37,9 @@ if (inCi && !haveBrowser) {
     let marks: { chart: string; marks: number }[] = [];
     let clipped: string[] = [];
     let screenshot = '';
+    let ratingsRows: string[][] = [];
+    let pageText = '';
+    let preBlocks = 0;
 
     beforeAll(async () => {
       // the demo study, run end to end into a temporary folder
@@ -80,6 +83,9 @@ if (inCi && !haveBrowser) {
           return inside ? [] : [`${svg.getAttribute('data-chart') ?? '?'}: ${t.textContent ?? ''}`];
         }),
       );
+      ratingsRows = await page.evaluate(() => [...document.querySelectorAll('#validation table.ratings-reconciliation tbody tr')].map((tr) => [...tr.querySelectorAll('th,td')].map((c) => (c.textContent ?? '').trim())));
+      pageText = await page.evaluate(() => document.body.innerText);
+      preBlocks = await page.evaluate(() => document.querySelectorAll('pre').length);
       screenshot = join(work, 'report.png');
       await page.screenshot({ path: screenshot, fullPage: true });
     }, 180_000);
@@ -98,6 +104,26 @@ if (inCi && !haveBrowser) {
 
     it('draws every axis title inside its chart, unclipped (the reliability axis among them)', () => {
       expect(clipped).toEqual([]);
+    });
+
+    it('shows how the self-reports were read and paired as a table: rows read (as counted by wc -l), kept, values left out by reason, persons', () => {
+      // rows read: data lines of demo-data/ratings.csv (its line count less the header, as `wc -l` counts them)
+      const ratingsLines = readFileSync(join(root, 'demo-data/ratings.csv'), 'utf8').trimEnd().split('\n').length - 1;
+      const count = (label: string): string | undefined => ratingsRows.find((r) => r[0] === label)?.[1];
+      expect(count('Rows read')).toBe(ratingsLines.toLocaleString('en-US'));
+      expect(count('Rows kept (usable person and time)')).toBe(ratingsLines.toLocaleString('en-US'));
+      expect(count('Rows left out')).toBe('0');
+      // the demo generator writes two mood values outside 0-100 (scripts/generate-demo.mjs)
+      expect(count('Single ratings left out (the rest of the row kept)')).toBe('2');
+      expect(count('outside the declared scale')).toBe('2');
+      expect(count('Persons')).toBe('36');
+    });
+
+    it('shows no raw JSON anywhere on the page: no <pre> block, no quoted keys, no key: value; key: value dumps', () => {
+      expect(preBlocks).toBe(0);
+      expect(pageText).not.toMatch(/[{[]\s*"|"[A-Za-z_]+"\s*:/);
+      expect(pageText).not.toMatch(/\bread: \d+; kept: \d+/);
+      expect(pageText).not.toMatch(/\b(rowsWithText|excludedEntries)/);
     });
 
     it('logs no console error', () => {

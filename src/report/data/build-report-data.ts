@@ -8,6 +8,7 @@ import { dynamicsResultTables } from './dynamics-result-tables.js';
 import { parseCsvTable } from './parse-csv-table.js';
 import { parseSeriesLong } from './parse-series-long.js';
 import { personTracks, type BinRatings } from './person-tracks.js';
+import { ratingsReconciliationFrom } from './ratings-reconciliation-from.js';
 import { readinessFromRows } from './readiness-from-rows.js';
 import { withNeverMatched } from './never-matched-terms.js';
 import { termsFromJson } from './terms-from-json.js';
@@ -32,6 +33,8 @@ export interface ReportInputs {
   manifest?: Record<string, unknown>;
   /** Reconciliation from the scores sidecar, used when the manifest has none. */
   reconciliation?: Reconciliation;
+  /** Parsed scores sidecar (`scores.csv.meta.json`): the provenance when there is no manifest (output of `lexichron score` alone). */
+  scoresMeta?: Record<string, unknown>;
   /** Parsed validation JSON of the validate stage (see validationFromJson). */
   validationJson?: unknown;
   /** Text of the validate stage's aligned pairs CSV (see alignedFromCsv). */
@@ -146,6 +149,7 @@ export function buildReportData(inputs: ReportInputs, options: ReportOptions = {
       readiness = present(readinessFromRows(rows, score, options.minLagPairs));
     }
   }
+  const ratingsReconciliation = ratingsReconciliationFrom(inputs.validationJson, (inputs.manifest?.stages as Record<string, unknown> | undefined)?.validation);
   const manifestReconciliation = inputs.manifest?.reconciliation as Reconciliation | undefined;
   const reconciliation = manifestReconciliation ?? inputs.reconciliation;
   const studyName = ((inputs.manifest?.parameters as Record<string, unknown> | undefined)?.study as Record<string, unknown> | undefined)?.name;
@@ -160,9 +164,10 @@ export function buildReportData(inputs: ReportInputs, options: ReportOptions = {
     reconciliation: reconciliation ? present(reconciliation) : absent('neither manifest.json nor scores.csv.meta.json holds a reconciliation.'),
     series,
     validation,
+    ...(ratingsReconciliation ? { ratingsReconciliation } : {}),
     lexicons: terms ? present(terms) : absent(why.lexicons ?? 'the folder has no term audit; run `lexichron terms audit` or add the audit to the study file.'),
     readiness,
     dynamics: dynamics ? present(dynamics) : absent(why.dynamics ?? 'the dynamics stage did not run; run `lexichron dynamics` or add it to the study file.'),
-    provenance: inputs.manifest ? present({ manifest: inputs.manifest }) : absent(why.manifest ?? 'the folder has no manifest.json.'),
+    provenance: inputs.manifest ? present({ manifest: inputs.manifest }) : inputs.scoresMeta ? present({ manifest: inputs.scoresMeta }) : absent(why.manifest ?? 'the folder has no manifest.json.'),
   };
 }

@@ -28,7 +28,7 @@ export function renderReport(data: ReportData): string {
   const body = [
     coverageSection(data.coverage, data.reconciliation),
     seriesSection(data.series),
-    validationSection(data.validation),
+    validationSection(data.validation, data.ratingsReconciliation),
     lexiconSection(data.lexicons),
     readinessSection(data.readiness, data.dynamics),
     provenanceSection(data.provenance),

@@ -53,6 +53,7 @@ th,td{padding:3px 10px;border-bottom:1px solid var(--rule);text-align:left;verti
 th{font-weight:600;background:#f1f2f0}
 td.num,th.num{text-align:right}
 tr.sub th{font-weight:400;padding-left:28px}
+tr.group th{background:none;border-bottom:2px solid var(--rule);padding-top:10px;font-size:12px;text-transform:uppercase;letter-spacing:.04em;color:var(--muted)}
 tr.total th,tr.total td{font-weight:700}
 tr.mismatch td{background:#fde7d9;color:#7a2e00}
 tr.not-ready td:last-child{color:#8a5a00;font-weight:600}
@@ -67,11 +68,9 @@ dl.flags dt{color:#8a5a00;font-weight:600}
 dl.flags dd{margin:0}
 ul.never-matched{font-size:14px;padding-left:20px}
 ul.never-matched li{margin:2px 0}
-.manifest{overflow-x:auto;font-size:13px}
-dl.json{display:grid;grid-template-columns:max-content 1fr;gap:2px 14px;margin:0}
-dl.json dt{font-weight:600;color:var(--muted)}
-dl.json dd{margin:0;min-width:0}
-table.json{margin:2px 0;font-size:12px}
+table.provenance{max-width:100%}
+table.provenance th[scope=row]{font-weight:600;background:none;white-space:nowrap}
+table.provenance td{overflow-wrap:anywhere}
 code{font-family:ui-monospace,"DejaVu Sans Mono",Menlo,Consolas,monospace;font-size:.92em;overflow-wrap:anywhere}
 .muted{color:var(--muted)}
 details.results{margin:6px 0;overflow-x:auto}

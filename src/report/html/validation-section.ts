@@ -1,5 +1,5 @@
 import { centrePoints } from '../data/centre-points.js';
-import type { Part, ValidationData, ValidationPair } from '../report-data.js';
+import type { Part, RatingsReconciliation, ValidationData, ValidationPair } from '../report-data.js';
 import { absentNote } from './absent-note.js';
 import { correlationText } from './correlation-text.js';
 import { escapeHtml } from './escape-html.js';
@@ -7,6 +7,7 @@ import { formatValue, groupThousands } from './format-value.js';
 import { htmlTable } from './html-table.js';
 import { levelWarning } from './level-warning.js';
 import { PALETTE } from './palette.js';
+import { ratingsReconciliationTable } from './ratings-reconciliation-table.js';
 import { reliabilityChart } from './reliability-chart.js';
 import { scatterChart } from './scatter-chart.js';
 import { sectionFrame } from './section-frame.js';
@@ -55,12 +56,13 @@ function scatters(pair: ValidationPair): string {
 /**
  * Section 3: for the shown score × rating pair, the within-person scatter (centred values) beside
  * the between-person scatter (person means), each with its r and interval; the pooled r; the
- * verdict and plain-words warnings; a table of every pair; and the reliability-by-word-count
+ * verdict and plain-words warnings; a table of every pair; how the self-reports were read and paired (the ratings reconciliation); and the reliability-by-word-count
  * curves.
  */
-export function validationSection(validation: Part<ValidationData>): string {
+export function validationSection(validation: Part<ValidationData>, ratings?: RatingsReconciliation): string {
   const purpose = 'Does the text score track what the same people report, within a person over time and between people?';
-  if (!validation.ok) return sectionFrame('validation', 3, 'Validation against self-reports', purpose, absentNote('Validation is', validation.reason));
+  const matched = ratings ? `<h3>How the self-reports were read and paired</h3>${ratingsReconciliationTable(ratings)}` : '';
+  if (!validation.ok) return sectionFrame('validation', 3, 'Validation against self-reports', purpose, absentNote('Validation is', validation.reason) + matched);
   const v = validation.value;
   const parts: string[] = [];
   const pair = v.pairs[v.shown];
@@ -81,6 +83,7 @@ export function validationSection(validation: Part<ValidationData>): string {
       ),
     );
   } else parts.push(absentNote('Correlations are', 'the validation output lists no score × rating pair.'));
+  if (matched) parts.push(matched);
   if (v.reliability.length) {
     parts.push('<h3>How many words make a reliable score?</h3>');
     parts.push(`<div class="multiples wide">${v.reliability.map(reliabilityChart).join('')}</div>`);
