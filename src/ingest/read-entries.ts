@@ -62,7 +62,7 @@ export function recordToEntry(record: Record<string, string>, source: SourceRef,
   // The mark of entries pseudonymized at import (entryLine): they are not pseudonymized again.
   const pseudonymKey = (record[PSEUDONYM_KEY_COLUMN] ?? '').trim();
   if (pseudonymKey !== '') entry.pseudonymKey = pseudonymKey;
-  return { kind: 'entry', entry };
+  return parsed.fallback ? { kind: 'entry', entry, notes: ['time_iso_fallback'] } : { kind: 'entry', entry };
 }
 
 /**

@@ -168,6 +168,8 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
   /** Rows a shard leaves to another shard; only rejects and drops of shard 0 are its own. */
   const rowsElsewhere = shard !== undefined && shard.index !== 0;
   if (shard) reconciliation.otherShard = 0;
+  /** Scored rows with a note, by note (reconciliation.notes, set only when there are any). */
+  const notes: Record<string, number> = {};
   let seqWriter: AtomicLineWriter | undefined;
   try {
     if (shard) seqWriter = await openAtomicLineWriter(`${options.out}.seq`);
@@ -287,6 +289,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
             continue;
           }
           options.onRawEntry?.(entry);
+          for (const note of item.notes ?? []) notes[note] = (notes[note] ?? 0) + 1;
           batch.push(entry);
           if (seqWriter) batchSeqs.push(reconciliation.read);
           if (batch.length >= BATCH_SIZE) {
@@ -301,6 +304,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       inputs.push({ path: inputName, bytes: read.bytes, sha256: read.sha256, rows });
     }
     options.onProgress?.(reconciliation.read);
+    if (Object.keys(notes).length > 0) reconciliation.notes = Object.fromEntries(Object.entries(notes).sort(([a], [b]) => (a < b ? -1 : 1)));
     const meta = {
       tool: { name: 'lexichron', version: TOOL_VERSION },
       lexicons: options.lexicons.map((l) => l.ref),
