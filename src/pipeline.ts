@@ -77,6 +77,8 @@ export interface StudyContext {
   at: (path: string) => string;
   zones: ZoneTable;
   time: TimeOptions;
+  /** The self-reports' time options (the study's `time` with `ratings.time` over it); default `time`. */
+  ratingsTime?: TimeOptions;
   /** Maps raw person ids to the ids written in outputs (pseudonyms when a key is given). */
   person: (id: string) => string;
   /** Whether a key was given: files are then named by role in outputs, never by file name. */
@@ -240,6 +242,8 @@ export interface PreparedStudy {
   time: TimeOptions;
   /** Each input's time options: the study's `time` with the input's own `time` keys over it. */
   inputTimes: TimeOptions[];
+  /** The self-reports' time options: the study's `time` with `ratings.time` over it. */
+  ratingsTime: TimeOptions;
   key: Awaited<ReturnType<typeof readPseudonymKey>>;
   pseudonyms?: ReturnType<typeof createPseudonymizer>;
   person: (id: string) => string;
@@ -265,17 +269,19 @@ export async function prepareStudy(study: Study, studyPath: string, env: RunStud
   const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
   const window = timeWindow(Date.parse(now), study.time.window, `Study file \`${studyPath}\`, $.time.window`);
   const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap, window };
-  const inputTimes = study.inputs.map((input, n): TimeOptions => {
-    const own = input.time;
+  // An input's (or the ratings') own `time` keys over the study's.
+  const ownTime = (own: Partial<Study['time']> | undefined, where: string): TimeOptions => {
     if (!own) return time;
     return {
       format: own.format ?? time.format,
       epoch: own.epoch ?? time.epoch,
       gap: own.dstGap ?? time.gap,
       overlap: own.dstOverlap ?? time.overlap,
-      window: own.window !== undefined ? timeWindow(Date.parse(now), own.window, `Study file \`${studyPath}\`, $.inputs[${n}].time.window`) : window,
+      window: own.window !== undefined ? timeWindow(Date.parse(now), own.window, `Study file \`${studyPath}\`, ${where}.time.window`) : window,
     };
-  });
+  };
+  const inputTimes = study.inputs.map((input, n): TimeOptions => ownTime(input.time, `$.inputs[${n}]`));
+  const ratingsTime = ownTime(study.ratings?.time, '$.ratings');
   const privacy = study.privacy ?? {};
   const keyEnv = privacy.keyEnv ?? PSEUDONYM_KEY_ENV;
   const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, env?.[keyEnv]);
@@ -292,8 +298,8 @@ export async function prepareStudy(study: Study, studyPath: string, env: RunStud
   } catch (error) {
     throw usageError(`Study file \`${studyPath}\`, $.series: ${(error as Error).message.replace(/--([a-z-]+)/g, (_m, flag: string) => `"${flag.replace(/-([a-z])/g, (_x, c: string) => c.toUpperCase())}"`)}`);
   }
-  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && study.ratings ? await ratingsWindows(study.ratings, at, zones, time, person, seriesOptions.dayStart) : undefined;
-  return { study, studyPath, studyDir, at, lexicons, zones, time, inputTimes, key, ...(pseudonyms ? { pseudonyms } : {}), person, redact, seriesOptions, reducers, ...(windows ? { windows } : {}) };
+  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && study.ratings ? await ratingsWindows(study.ratings, at, zones, ratingsTime, person, seriesOptions.dayStart) : undefined;
+  return { study, studyPath, studyDir, at, lexicons, zones, time, inputTimes, ratingsTime, key, ...(pseudonyms ? { pseudonyms } : {}), person, redact, seriesOptions, reducers, ...(windows ? { windows } : {}) };
 }
 
 /** The term auditors of a study (one per rules lexicon; none when `audit` is false), each with the run's seeded random source. */
@@ -433,12 +439,12 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
  * on merged shard outputs, by `lexichron merge`, so both write the same files.
  */
 export async function finishStudy(outDir: string, p: PreparedStudy, score: RunScoreResult, audits: TermAudit[], options: RunStudyOptions): Promise<RunStudyResult> {
-  const { study, studyPath, studyDir, at, lexicons, zones, time, person, pseudonyms } = p;
+  const { study, studyPath, studyDir, at, lexicons, zones, time, ratingsTime, person, pseudonyms } = p;
   const series = await studySeries(p, outDir, score.scoresPath);
   const seed = options.seed ?? DEFAULT_SEED;
   const stages: Record<string, StageOutput> = {};
   if (audits.length > 0) stages.audit = await writeStudyAudit(outDir, audits, (study.audit as AuditSettings).top, study.keepText);
-  const context: StudyContext = { study, studyDir, outDir, at, zones, time, person, pseudonymized: pseudonyms !== undefined, score, series, seed, shared: {} };
+  const context: StudyContext = { study, studyDir, outDir, at, zones, time, ratingsTime, person, pseudonymized: pseudonyms !== undefined, score, series, seed, shared: {} };
   for (const [name, stage] of options.stages ?? []) {
     const out = await stage(context);
     if (out) stages[name] = out;
