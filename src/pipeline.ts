@@ -54,7 +54,7 @@ import { zoneOnDay } from './series/zone-on-day.js';
 import { TOOL_VERSION } from './version.js';
 import type { ShardSpec } from './shard/shard-of-person.js';
 import type { TermAudit } from './terms/term-auditor.js';
-import type { RawEntry } from './types.js';
+import type { Diagnostic, RawEntry } from './types.js';
 
 /** Reads and validates a study file (src/io/read-study.ts); exported here for its callers. */
 export { readStudy };
@@ -214,8 +214,8 @@ export async function runStudy(studyPath: string, options: RunStudyOptions): Pro
  * Each person's study window from the self-reports (first to last prompt, local days), read with
  * the validation stage's settings; person ids are mapped like the text's so both sides join.
  */
-async function ratingsWindows(settings: RatingsSettings, at: (p: string) => string, zones: ZoneTable, time: TimeOptions, person: (id: string) => string, dayStart: number): Promise<Map<string, { from: number; to: number }>> {
-  const { ratings } = await readRatings({
+async function studyRatings(settings: RatingsSettings, at: (p: string) => string, zones: ZoneTable, time: TimeOptions, person: (id: string) => string): Promise<Awaited<ReturnType<typeof readRatings>>> {
+  return readRatings({
     ratings: at(settings.path),
     columns: settings.columns ? { person: settings.columns.person ?? 'person', time: settings.columns.time ?? 'time', text: 'text', id: settings.columns.id, zone: settings.columns.zone } : undefined,
     format: settings.format,
@@ -227,7 +227,15 @@ async function ratingsWindows(settings: RatingsSettings, at: (p: string) => stri
     scales: new Map(Object.entries(settings.scales).map(([k, [min, max]]) => [k, { min, max }])),
     person,
   });
-  return promptWindows(ratings, dayStart);
+}
+
+/**
+ * The error of a study that names no time zones when a row's time has no UTC offset (or is an
+ * epoch number): such a time cannot be placed without its person's zone (RFC 3339 section 4.2).
+ */
+function noZonesError(studyPath: string, diagnostic: Diagnostic, what: string): Error {
+  const where = diagnostic.source ? `\`${diagnostic.source.file}\` line ${diagnostic.source.line}` : 'a row';
+  return usageError(`Study file \`${studyPath}\`: ${what} ${where} has a time with no UTC offset (or an epoch number), and the study names no time zones; add "timeZone": "Europe/Brussels" (one IANA zone for everyone) or "zones": "zones.csv" (columns person, zone[, from]) to the study file, or write every time with its offset (2026-03-29T08:15:00+02:00).`);
 }
 
 /** A study file read and checked, with everything its stages need (lexicons, zones, key, series options). */
@@ -298,7 +306,13 @@ export async function prepareStudy(study: Study, studyPath: string, env: RunStud
   } catch (error) {
     throw usageError(`Study file \`${studyPath}\`, $.series: ${(error as Error).message.replace(/--([a-z-]+)/g, (_m, flag: string) => `"${flag.replace(/-([a-z])/g, (_x, c: string) => c.toUpperCase())}"`)}`);
   }
-  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && study.ratings ? await ratingsWindows(study.ratings, at, zones, ratingsTime, person, seriesOptions.dayStart) : undefined;
+  // The self-reports are read here when they set the window, or when no zones are named (a time
+  // without an offset then stops the run before anything is scored).
+  const noZones = !study.zones && !study.timeZone;
+  const ratings = study.ratings && ((!study.series.windows && study.series.window === 'ratings') || noZones) ? await studyRatings(study.ratings, at, zones, ratingsTime, person) : undefined;
+  const unplaced = noZones ? ratings?.diagnostics.find((d) => d.code === 'no_zone') : undefined;
+  if (unplaced) throw noZonesError(studyPath, unplaced, 'the self-report on');
+  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && ratings ? promptWindows(ratings.ratings, seriesOptions.dayStart) : undefined;
   return { study, studyPath, studyDir, at, lexicons, zones, time, inputTimes, ratingsTime, key, ...(pseudonyms ? { pseudonyms } : {}), person, redact, seriesOptions, reducers, ...(windows ? { windows } : {}) };
 }
 
@@ -423,6 +437,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     onProgress: options.onProgress,
     onFirstRows: options.onFirstRows,
     onRawEntry: auditEntryFeeder(p, auditors),
+    ...(!study.zones && !study.timeZone ? { onReject: (d: Diagnostic) => { if (d.code === 'no_zone') throw noZonesError(studyPath, d, 'the entry on'); } } : {}),
   });
   if (options.shard) {
     // A shard may hold no person at all (more shards than persons): it then writes no series.

@@ -69,6 +69,8 @@ export interface RunScoreOptions {
   pool?: ScorePool;
   /** Called once, when the first scored batch is back and about to be written (the start-up is over: lexicons compiled, tokenizer loaded). */
   onFirstRows?: () => void;
+  /** Called with each rejected row before it is written; may throw to stop the run (the outputs are then discarded). */
+  onReject?: (diagnostic: Diagnostic) => void;
   /** Also receives each scored entry. */
   onEntry?: (entry: ScoredEntry) => void;
   /** Also receives each entry with its text, after pseudonymization and before scoring (for the term audit of `run`). */
@@ -176,6 +178,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
     await scores.write(csvRow(scoresHeader(columns, options.lexicons, keepText)));
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
     const addReject = async (d: Diagnostic): Promise<void> => {
+      options.onReject?.(d);
       reconciliation.rejected[d.code] = (reconciliation.rejected[d.code] ?? 0) + 1;
       const file = pseudonyms && d.source ? inputName : (d.source?.file ?? '');
       await rejects.write(csvRow([file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));

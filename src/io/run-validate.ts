@@ -3,7 +3,7 @@ import { basename, join } from 'node:path';
 import type { BinReducer } from '../series/bin-accumulator.js';
 import { inputError, usageError } from '../errors.js';
 import { parseColumnMapping, resolveColumns, type ColumnMapping } from '../ingest/column-mapping.js';
-import { DEFAULT_TIME_OPTIONS, formatLocal, parseInstant, type TimeOptions } from '../ingest/parse-instant.js';
+import { DEFAULT_TIME_OPTIONS, formatLocal, type TimeOptions } from '../ingest/parse-instant.js';
 import { recordToEntry } from '../ingest/read-entries.js';
 import { readRecords, type TableFormat } from '../ingest/read-records.js';
 import { tableFile } from './table-file.js';
@@ -131,8 +131,8 @@ export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 
     if (!columns) resolve(Object.keys(item.record));
     const c = columns as ColumnMapping;
     // The text readers' person, time and zone handling, with the person column standing in for text.
-    let parsed: ReturnType<typeof recordToEntry> | NonNullable<ReturnType<typeof offsetRating>> = recordToEntry(item.record, item.source, { ...c, text: c.person }, options.zones, time);
-    if (parsed.kind === 'reject' && parsed.diagnostic.code === 'no_zone') parsed = offsetRating(item.record, c, time) ?? parsed;
+    // A person without a zone whose time carries its offset keeps that offset (recordToEntry).
+    const parsed = recordToEntry(item.record, item.source, { ...c, text: c.person }, options.zones, time);
     if (parsed.kind === 'reject') {
       diagnostics.push({ ...parsed.diagnostic, stage: 'validate' });
       continue;
@@ -140,7 +140,7 @@ export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 
     const { values, diagnostics: valueProblems, missing: absent } = ratingValues(item.record, ratingCols, scales, item.source, missing);
     diagnostics.push(...valueProblems);
     for (const column of absent) missingCount[column] = (missingCount[column] ?? 0) + 1;
-    if (parsed.kind === 'entry' && 'notes' in parsed) for (const note of parsed.notes ?? []) notes[note] = (notes[note] ?? 0) + 1;
+    for (const note of parsed.notes ?? []) notes[note] = (notes[note] ?? 0) + 1;
     const e = parsed.entry;
     ratings.push({ person: options.person ? options.person(e.person) : e.person, instant: e.instant, zone: e.zone, offsetMinutes: e.offsetMinutes, values, source: item.source });
   }
@@ -195,22 +195,6 @@ async function readEntryScores(path: string): Promise<{ entries: EntryScore[]; c
     else entries.push(entry);
   }
   return { entries, columns: columns ?? [], diagnostics };
-}
-
-/**
- * A self-report of a person with no known zone whose time carries its own offset (RFC 3339
- * `Z` or `+01:00`, or a format with an offset token): its instant and local time are known
- * without a zone file, so it is read with a fixed-offset zone label (`UTC+01:00`). Epoch numbers
- * and wall-clock times still need the person's zone (undefined here).
- */
-function offsetRating(record: Record<string, string>, c: ColumnMapping, time: TimeOptions): { kind: 'entry'; entry: { person: string; instant: number; zone: string; offsetMinutes: number } } | undefined {
-  const text = (record[c.time] ?? '').trim();
-  if (/^[+-]?\d+(\.\d+)?$/.test(text)) return undefined;
-  const parsed = parseInstant(text, 'UTC', time);
-  if (!parsed.ok || !parsed.hadOffset) return undefined;
-  const m = Math.abs(parsed.offsetMinutes);
-  const label = `UTC${parsed.offsetMinutes < 0 ? '-' : '+'}${String(Math.floor(m / 60)).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}`;
-  return { kind: 'entry', entry: { person: (record[c.person] ?? '').trim(), instant: parsed.instant, zone: label, offsetMinutes: parsed.offsetMinutes } };
 }
 
 /**

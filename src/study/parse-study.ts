@@ -163,7 +163,8 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   }
   need(json.zones === undefined || str(json.zones), '$.zones', 'expected the path of a zone file (person, zone[, from])');
   need(json.timeZone === undefined || str(json.timeZone), '$.timeZone', 'expected an IANA zone name such as Europe/Brussels');
-  need(json.zones !== undefined || json.timeZone !== undefined, '$', 'name the persons\' time zones with "zones" (a file) or "timeZone" (one IANA zone for everyone)');
+  // No zones at all is allowed: a study whose every time carries its UTC offset needs none (a time
+  // without one then stops the run with a message naming "zones" and "timeZone", see runStudy).
   const time = isObject(json.time) ? json.time : {};
   if (json.time !== undefined && !isObject(json.time)) problems.push({ path: '$.time', message: 'expected an object {"format": …, "epoch": …, "dstGap": …, "dstOverlap": …}' });
   checkTime(time, '$.time', problems);
