@@ -12,7 +12,7 @@ export interface RatingsSettings {
   scales: Record<string, [number, number]>;
   /** Rating columns (default: every column but person, time, zone, id). */
   ratings?: string[];
-  /** Missing-value codes of the rating columns, e.g. ["NA", "-99"]. */
+  /** Missing-value codes of the rating columns, e.g. ["NA", "-99"]; default ["NA"] (DEFAULT_MISSING_CODES); [] leaves only empty cells missing. */
   missing?: string[];
   /** Score columns to validate (default: all). */
   scores?: string[];
@@ -106,7 +106,7 @@ const RATINGS_RULES: Record<string, Rule> = {
     expected: 'the declared scale of each rating, e.g. {"mood": [0, 100], "calm": [1, 7]}',
   },
   ratings: { check: isStrings, expected: 'an array of rating column names' },
-  missing: { check: isStrings, expected: 'an array of missing-value codes such as ["NA", "-99"]' },
+  missing: { check: (v) => Array.isArray(v) && v.every(isString), expected: 'an array of missing-value codes such as ["NA", "-99"] (default ["NA"]; [] leaves only empty cells missing)' },
   scores: { check: isStrings, expected: 'an array of score column names' },
   align: { check: (v) => v === 'bins' || v === 'window', expected: 'bins or window' },
   window: { check: (v) => typeof v === 'string' && /^\s*\d+\s*(m|min|h|d)\s*$/i.test(v), expected: 'a duration such as "3h" or "90m"' },

@@ -2,6 +2,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { main } from '../../src/cli/main.js';
 import { buildZoneTable } from '../../src/ingest/zone-table.js';
 import { readRatings } from '../../src/io/run-validate.js';
+import { parseStudy } from '../../src/study/parse-study.js';
 import { DEFAULT_MISSING_CODES } from '../../src/validate/rating-values.js';
 import { tempFolder } from '../support/temp-files.js';
 
@@ -48,5 +49,12 @@ describe('missing-value codes of self-reports', () => {
     }
     expect(code).toBe(0);
     expect(stderr).toMatch(/missing ratings \(empty cells only\): mood 1, calm 1/);
+  });
+
+  it('a study file declares the codes per ratings source, [] for none, and names a wrong value by its path', () => {
+    const base = { inputs: ['texts.csv'], timeZone: 'UTC', out: 'out' };
+    expect(parseStudy({ ...base, ratings: { path: 'r.csv', scales: { mood: [0, 100] }, missing: [] } }).study?.ratings?.missing).toEqual([]);
+    expect(parseStudy({ ...base, ratings: { path: 'r.csv', scales: { mood: [0, 100] }, missing: ['-99', 'NA'] } }).study?.ratings?.missing).toEqual(['-99', 'NA']);
+    expect(parseStudy({ ...base, ratings: { path: 'r.csv', scales: { mood: [0, 100] }, missing: [99] } }).problems.map((p) => p.path)).toEqual(['$.ratings.missing']);
   });
 });
