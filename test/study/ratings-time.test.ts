@@ -62,6 +62,13 @@ describe('the ratings of a study take their own time options and column map', ()
     expect(diagnostics).not.toMatch(/time_in_gap/);
   });
 
+  it('counts the text rows read by the RFC 3339 fallback of a study\'s time.format in the manifest', async () => {
+    tmp.write('us.csv', 'person,time,text\nann,03/02/2026 9:30 AM,good day\nann,2026-03-03T21:30:00Z,bad night\n');
+    tmp.write('us.json', JSON.stringify({ inputs: ['us.csv'], timeZone: 'UTC', time: { format: 'MM/dd/yyyy h:mm a' }, lexicons: ['afinn-165'], series: { window: 'entries' }, dynamics: false, audit: false, report: false, out: 'out-us' }));
+    const result = await runStudy(tmp.path('us.json'), { now: '2026-12-01T00:00:00.000Z', seed: 1 });
+    expect(result.manifest.reconciliation).toMatchObject({ read: 2, scored: 2, notes: { time_iso_fallback: 1 } });
+  });
+
   it('names a key the ratings do not use with its JSON path and where it belongs', () => {
     const base = { inputs: [{ path: 'texts.csv' }], timeZone: 'UTC', out: 'out' };
     const ratings = (extra: Record<string, unknown>) => ({ ...base, ratings: { path: 'r.csv', scales: { mood: [0, 100] }, ...extra } });
