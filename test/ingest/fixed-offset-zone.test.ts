@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { recordToEntry } from '../../src/ingest/read-entries.js';
 import { fixedOffsetMinutes, fixedOffsetZone, isValidZone, zoneOffset } from '../../src/ingest/zone-offset.js';
 import { buildZoneTable } from '../../src/ingest/zone-table.js';
-import { DEFAULT_TIME_OPTIONS } from '../../src/ingest/parse-instant.js';
+import { DEFAULT_TIME_OPTIONS, formatLocal } from '../../src/ingest/parse-instant.js';
+import { random, randomInteger } from '../../src/stats/random.js';
 
 // Fixed offsets are labelled with the RFC 3339 time-numoffset form after `UTC` (RFC 3339 section 5.6).
 const columns = { person: 'person', time: 'time', text: 'text' };
@@ -31,6 +32,20 @@ describe('fixed-offset zones for persons without a zone', () => {
     for (const time of ['2026-03-29 08:15', '1774764900']) {
       const item = recordToEntry({ person: 'ann', time, text: 'hi' }, source, columns, noZones, DEFAULT_TIME_OPTIONS);
       expect(item).toMatchObject({ kind: 'reject', diagnostic: { code: 'no_zone', message: expect.stringContaining('"timeZone"') } });
+    }
+  });
+
+  it('reads random RFC 3339 times with offsets without any zone: the instant of ECMA-262 Date.parse, the written local time back (fuzz)', () => {
+    const rng = random('fixed-offset-entries');
+    for (let k = 0; k < 300; k++) {
+      const instant = Date.UTC(1980, 0, 1) + randomInteger(rng, 50 * 365 * 1440) * 60000;
+      const offset = (randomInteger(rng, 105) - 48) * 15; // −12:00 … +14:00 in quarter hours
+      const written = formatLocal(instant, offset);
+      const item = recordToEntry({ person: 'ann', time: written, text: 'hi' }, source, columns, noZones, DEFAULT_TIME_OPTIONS);
+      if (item.kind !== 'entry') throw new Error(`rejected ${written}: ${item.diagnostic.message}`);
+      expect(item.entry.instant).toBe(Date.parse(written));
+      expect(item.entry.zone).toBe(fixedOffsetZone(offset));
+      expect(formatLocal(item.entry.instant, item.entry.offsetMinutes)).toBe(written);
     }
   });
 });

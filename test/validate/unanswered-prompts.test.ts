@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { EntryScore } from '../../src/validate/entry-score.js';
 import type { Rating } from '../../src/validate/rating.js';
 import type { SeriesBin } from '../../src/validate/series-bin.js';
+import { random, randomInteger } from '../../src/stats/random.js';
 import { validateSeries } from '../../src/validate/validate-series.js';
 
 // A prompt that was sent but not answered (every rating empty or a missing code) is no
@@ -54,5 +55,28 @@ describe('prompts without a rating are not counted as paired', () => {
     expect(result.pairs.find((p) => p.rating === 'mood')?.analysis.pairs).toBe(5);
     expect(result.pairs.find((p) => p.rating === 'calm')?.analysis.pairs).toBe(4);
     expect(result.diagnostics.filter((d) => d.code === 'rating_unanswered')).toHaveLength(2);
+  });
+
+  it('for random prompts with random gaps, rows and pairs count only answered prompts (fuzz; counts recomputed by brute force)', () => {
+    const rng = random('unanswered-prompts');
+    for (let trial = 0; trial < 30; trial++) {
+      const prompts: Rating[] = [];
+      for (let k = 0; k < 20; k++) {
+        const day = randomInteger(rng, 6);
+        const mood = randomInteger(rng, 3) === 0 ? undefined : randomInteger(rng, 101);
+        const calm = randomInteger(rng, 3) === 0 ? undefined : 1 + randomInteger(rng, 7);
+        prompts.push(rating(day, randomInteger(rng, 24), mood, calm, k + 2));
+      }
+      const result = validateSeries({ bins, ratings: prompts, scoreColumns: ['s'], ratingColumns: ['mood', 'calm'] }, { replicates: 0, minPairs: 2 });
+      const dayOf = (r: Rating): number => Math.floor((r.instant - t0) / DAY);
+      const answered = prompts.filter((r) => r.values.mood !== undefined || r.values.calm !== undefined);
+      expect(result.counts.rows).toBe(new Set(answered.map(dayOf)).size);
+      expect(result.rows.reduce((n, r) => n + r.reports, 0)).toBe(answered.length);
+      for (const column of ['mood', 'calm']) {
+        const pairs = new Set(prompts.filter((r) => r.values[column] !== undefined).map(dayOf)).size;
+        expect(result.pairs.find((p) => p.rating === column)?.analysis.pairs).toBe(pairs);
+      }
+      expect(result.diagnostics.filter((d) => d.code === 'rating_unanswered')).toHaveLength(prompts.length - answered.length);
+    }
   });
 });
