@@ -211,8 +211,9 @@ export async function runStudy(studyPath: string, options: RunStudyOptions): Pro
 }
 
 /**
- * Each person's study window from the self-reports (first to last prompt, local days), read with
- * the validation stage's settings; person ids are mapped like the text's so both sides join.
+ * The study's self-reports, read with the validation stage's settings and the ratings' own time
+ * options (for the study window, first to last prompt, and to check their times before scoring);
+ * person ids are mapped like the text's so both sides join.
  */
 async function studyRatings(settings: RatingsSettings, at: (p: string) => string, zones: ZoneTable, time: TimeOptions, person: (id: string) => string): Promise<Awaited<ReturnType<typeof readRatings>>> {
   return readRatings({
