@@ -54,7 +54,7 @@ import { zoneOnDay } from './series/zone-on-day.js';
 import { TOOL_VERSION } from './version.js';
 import type { ShardSpec } from './shard/shard-of-person.js';
 import type { TermAudit } from './terms/term-auditor.js';
-import type { RawEntry } from './types.js';
+import type { Diagnostic, RawEntry } from './types.js';
 
 /** Reads and validates a study file (src/io/read-study.ts); exported here for its callers. */
 export { readStudy };
@@ -77,6 +77,8 @@ export interface StudyContext {
   at: (path: string) => string;
   zones: ZoneTable;
   time: TimeOptions;
+  /** The self-reports' time options (the study's `time` with `ratings.time` over it); default `time`. */
+  ratingsTime?: TimeOptions;
   /** Maps raw person ids to the ids written in outputs (pseudonyms when a key is given). */
   person: (id: string) => string;
   /** Whether a key was given: files are then named by role in outputs, never by file name. */
@@ -209,11 +211,12 @@ export async function runStudy(studyPath: string, options: RunStudyOptions): Pro
 }
 
 /**
- * Each person's study window from the self-reports (first to last prompt, local days), read with
- * the validation stage's settings; person ids are mapped like the text's so both sides join.
+ * The study's self-reports, read with the validation stage's settings and the ratings' own time
+ * options (for the study window, first to last prompt, and to check their times before scoring);
+ * person ids are mapped like the text's so both sides join.
  */
-async function ratingsWindows(settings: RatingsSettings, at: (p: string) => string, zones: ZoneTable, time: TimeOptions, person: (id: string) => string, dayStart: number): Promise<Map<string, { from: number; to: number }>> {
-  const { ratings } = await readRatings({
+async function studyRatings(settings: RatingsSettings, at: (p: string) => string, zones: ZoneTable, time: TimeOptions, person: (id: string) => string): Promise<Awaited<ReturnType<typeof readRatings>>> {
+  return readRatings({
     ratings: at(settings.path),
     columns: settings.columns ? { person: settings.columns.person ?? 'person', time: settings.columns.time ?? 'time', text: 'text', id: settings.columns.id, zone: settings.columns.zone } : undefined,
     format: settings.format,
@@ -225,7 +228,15 @@ async function ratingsWindows(settings: RatingsSettings, at: (p: string) => stri
     scales: new Map(Object.entries(settings.scales).map(([k, [min, max]]) => [k, { min, max }])),
     person,
   });
-  return promptWindows(ratings, dayStart);
+}
+
+/**
+ * The error of a study that names no time zones when a row's time has no UTC offset (or is an
+ * epoch number): such a time cannot be placed without its person's zone (RFC 3339 section 4.2).
+ */
+function noZonesError(studyPath: string, diagnostic: Diagnostic, what: string): Error {
+  const where = diagnostic.source ? `\`${diagnostic.source.file}\` line ${diagnostic.source.line}` : 'a row';
+  return usageError(`Study file \`${studyPath}\`: ${what} ${where} has a time with no UTC offset (or an epoch number), and the study names no time zones; add "timeZone": "Europe/Brussels" (one IANA zone for everyone) or "zones": "zones.csv" (columns person, zone[, from]) to the study file, or write every time with its offset (2026-03-29T08:15:00+02:00).`);
 }
 
 /** A study file read and checked, with everything its stages need (lexicons, zones, key, series options). */
@@ -240,6 +251,8 @@ export interface PreparedStudy {
   time: TimeOptions;
   /** Each input's time options: the study's `time` with the input's own `time` keys over it. */
   inputTimes: TimeOptions[];
+  /** The self-reports' time options: the study's `time` with `ratings.time` over it. */
+  ratingsTime: TimeOptions;
   key: Awaited<ReturnType<typeof readPseudonymKey>>;
   pseudonyms?: ReturnType<typeof createPseudonymizer>;
   person: (id: string) => string;
@@ -265,17 +278,19 @@ export async function prepareStudy(study: Study, studyPath: string, env: RunStud
   const zones = await readZoneFile(study.zones ? at(study.zones) : undefined, study.timeZone);
   const window = timeWindow(Date.parse(now), study.time.window, `Study file \`${studyPath}\`, $.time.window`);
   const time: TimeOptions = { format: study.time.format, epoch: study.time.epoch, gap: study.time.dstGap, overlap: study.time.dstOverlap, window };
-  const inputTimes = study.inputs.map((input, n): TimeOptions => {
-    const own = input.time;
+  // An input's (or the ratings') own `time` keys over the study's.
+  const ownTime = (own: Partial<Study['time']> | undefined, where: string): TimeOptions => {
     if (!own) return time;
     return {
       format: own.format ?? time.format,
       epoch: own.epoch ?? time.epoch,
       gap: own.dstGap ?? time.gap,
       overlap: own.dstOverlap ?? time.overlap,
-      window: own.window !== undefined ? timeWindow(Date.parse(now), own.window, `Study file \`${studyPath}\`, $.inputs[${n}].time.window`) : window,
+      window: own.window !== undefined ? timeWindow(Date.parse(now), own.window, `Study file \`${studyPath}\`, ${where}.time.window`) : window,
     };
-  });
+  };
+  const inputTimes = study.inputs.map((input, n): TimeOptions => ownTime(input.time, `$.inputs[${n}]`));
+  const ratingsTime = ownTime(study.ratings?.time, '$.ratings');
   const privacy = study.privacy ?? {};
   const keyEnv = privacy.keyEnv ?? PSEUDONYM_KEY_ENV;
   const key = await readPseudonymKey(privacy.keyFile ? at(privacy.keyFile) : undefined, env?.[keyEnv]);
@@ -292,8 +307,14 @@ export async function prepareStudy(study: Study, studyPath: string, env: RunStud
   } catch (error) {
     throw usageError(`Study file \`${studyPath}\`, $.series: ${(error as Error).message.replace(/--([a-z-]+)/g, (_m, flag: string) => `"${flag.replace(/-([a-z])/g, (_x, c: string) => c.toUpperCase())}"`)}`);
   }
-  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && study.ratings ? await ratingsWindows(study.ratings, at, zones, time, person, seriesOptions.dayStart) : undefined;
-  return { study, studyPath, studyDir, at, lexicons, zones, time, inputTimes, key, ...(pseudonyms ? { pseudonyms } : {}), person, redact, seriesOptions, reducers, ...(windows ? { windows } : {}) };
+  // The self-reports are read here when they set the window, or when no zones are named (a time
+  // without an offset then stops the run before anything is scored).
+  const noZones = !study.zones && !study.timeZone;
+  const ratings = study.ratings && ((!study.series.windows && study.series.window === 'ratings') || noZones) ? await studyRatings(study.ratings, at, zones, ratingsTime, person) : undefined;
+  const unplaced = noZones ? ratings?.diagnostics.find((d) => d.code === 'no_zone') : undefined;
+  if (unplaced) throw noZonesError(studyPath, unplaced, 'the self-report on');
+  const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && ratings ? promptWindows(ratings.ratings, seriesOptions.dayStart) : undefined;
+  return { study, studyPath, studyDir, at, lexicons, zones, time, inputTimes, ratingsTime, key, ...(pseudonyms ? { pseudonyms } : {}), person, redact, seriesOptions, reducers, ...(windows ? { windows } : {}) };
 }
 
 /** The term auditors of a study (one per rules lexicon; none when `audit` is false), each with the run's seeded random source. */
@@ -417,6 +438,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     onProgress: options.onProgress,
     onFirstRows: options.onFirstRows,
     onRawEntry: auditEntryFeeder(p, auditors),
+    ...(!study.zones && !study.timeZone ? { onReject: (d: Diagnostic) => { if (d.code === 'no_zone') throw noZonesError(studyPath, d, 'the entry on'); } } : {}),
   });
   if (options.shard) {
     // A shard may hold no person at all (more shards than persons): it then writes no series.
@@ -433,12 +455,12 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
  * on merged shard outputs, by `lexichron merge`, so both write the same files.
  */
 export async function finishStudy(outDir: string, p: PreparedStudy, score: RunScoreResult, audits: TermAudit[], options: RunStudyOptions): Promise<RunStudyResult> {
-  const { study, studyPath, studyDir, at, lexicons, zones, time, person, pseudonyms } = p;
+  const { study, studyPath, studyDir, at, lexicons, zones, time, ratingsTime, person, pseudonyms } = p;
   const series = await studySeries(p, outDir, score.scoresPath);
   const seed = options.seed ?? DEFAULT_SEED;
   const stages: Record<string, StageOutput> = {};
   if (audits.length > 0) stages.audit = await writeStudyAudit(outDir, audits, (study.audit as AuditSettings).top, study.keepText);
-  const context: StudyContext = { study, studyDir, outDir, at, zones, time, person, pseudonymized: pseudonyms !== undefined, score, series, seed, shared: {} };
+  const context: StudyContext = { study, studyDir, outDir, at, zones, time, ratingsTime, person, pseudonymized: pseudonyms !== undefined, score, series, seed, shared: {} };
   for (const [name, stage] of options.stages ?? []) {
     const out = await stage(context);
     if (out) stages[name] = out;

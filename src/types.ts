@@ -45,8 +45,12 @@ export interface RawEntry {
   pseudonymKey?: string;
 }
 
-/** What a reader yields: either an entry or a diagnostic for a rejected row. */
-export type ReadItem<T = RawEntry> = { kind: 'entry'; entry: T } | { kind: 'reject'; diagnostic: Diagnostic };
+/**
+ * What a reader yields: either an entry or a diagnostic for a rejected row. An entry may carry
+ * notes, remarks on how it was read that are counted but change nothing (`time_iso_fallback`:
+ * its time did not match the given time format and was read as RFC 3339 / ISO 8601).
+ */
+export type ReadItem<T = RawEntry> = { kind: 'entry'; entry: T; notes?: string[] } | { kind: 'reject'; diagnostic: Diagnostic };
 
 /** The result of scoring one entry. */
 export interface ScoredEntry {
@@ -87,6 +91,12 @@ export interface Reconciliation {
   rejected: Record<string, number>;
   /** Rows removed on purpose, e.g. third-party messages or duplicates, by reason. */
   dropped: Record<string, number>;
+  /**
+   * Scored rows with a note, by note (`time_iso_fallback`: the time did not match the time format
+   * and was read as RFC 3339 / ISO 8601; an importer's `mojibake`, …). Not part of the identity
+   * read = scored + rejected + dropped: a noted row is also a scored one. Absent when none.
+   */
+  notes?: Record<string, number>;
   /** Only in one shard of a sharded run: rows of persons scored by another shard (and, outside shard 0, rejects and drops, which shard 0 counts). */
   otherShard?: number;
 }

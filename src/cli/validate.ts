@@ -25,7 +25,7 @@ export function registerValidate(program: Command): void {
     .requiredOption('-r, --ratings <file>', 'self-reports: CSV, TSV, JSON Lines or JSON with person, time and rating columns')
     .requiredOption('-o, --out <dir>', 'folder for the validation tables, validation.json and datapackage.json')
     .option('--rating <column>', 'a rating column to validate (repeatable or comma-separated; default: every column but person, time, zone, id)', collect)
-    .option('--missing <codes>', 'missing-value codes of the rating columns, comma-separated (e.g. NA,-99): read as missing, not as errors')
+    .option('--missing <codes>', 'missing-value codes of the rating columns, comma-separated (e.g. NA,-99): read as missing, not as errors (default NA; none: only empty cells)')
     .option('--scale <scales>', 'declared scale of each rating, NAME=MIN:MAX, comma-separated (e.g. mood=0:100,calm=1:7; *=1:7 for all); values outside are rejected')
     .option('--score <column>', 'a text score column to validate (repeatable or comma-separated; default: all)', collect)
     .addOption(new Option('--align <how>', 'pair by the series\' bins, or by the text written in a window before each self-report').choices(['bins', 'window']).default('bins'))
@@ -54,7 +54,7 @@ export function registerValidate(program: Command): void {
       zones,
       time: timeOptionsFrom(opts),
       ratingColumns: opts.rating as string[] | undefined,
-      missing: opts.missing !== undefined ? String(opts.missing).split(',') : undefined,
+      missing: opts.missing === undefined ? undefined : String(opts.missing).trim() === 'none' ? [] : String(opts.missing).split(','),
       scales: String(opts.scale),
       scoreColumns: opts.score as string[] | undefined,
       out: String(opts.out),
@@ -77,6 +77,8 @@ export function registerValidate(program: Command): void {
     const problems = Object.entries(byCode).map(([k, v]) => `${k} ${v}`).join(', ') || 'none';
     const lines = [
       `${r.read} self-report rows read, ${r.kept} with a usable time and person (single values out of scale or not numeric are left out on their own); diagnostics (see validation-diagnostics.csv): ${problems}`,
+      `missing ratings (${r.codes.length > 0 ? `empty or a missing-value code: ${r.codes.join(', ')}` : 'empty cells only'}): ${result.ratingColumns.map((c) => `${c} ${r.missing[c] ?? 0}`).join(', ')}`,
+      ...(r.notes?.time_iso_fallback ? [`${r.notes.time_iso_fallback} read by the RFC 3339 / ISO 8601 fallback of --time-format`] : []),
       `${result.result.counts.rows} occasions paired (${result.result.counts.rowsWithText} with text) for ${result.result.counts.persons} persons`,
     ];
     for (const { score, rating, analysis } of result.result.pairs) {

@@ -33,9 +33,14 @@ export const EPOCH_UNITS: readonly EpochUnit[] = ['auto', 's', 'ms', 'us', 'ns']
 
 export const DEFAULT_TIME_OPTIONS: TimeOptions = { epoch: 'auto', gap: 'reject', overlap: 'reject' };
 
-/** A parsed instant, or the reason it could not be parsed. */
+/**
+ * A parsed instant, or the reason it could not be parsed. `fallback` is set when a format was
+ * given but the time did not match it and was read as RFC 3339 / ISO 8601 instead (readers count
+ * such rows as `time_iso_fallback`). `epoch` is set for a plain epoch number: its instant is
+ * known, but not the writer's local offset.
+ */
 export type InstantResult =
-  | { ok: true; instant: number; offsetMinutes: number; hadOffset: boolean }
+  | { ok: true; instant: number; offsetMinutes: number; hadOffset: boolean; fallback?: true; epoch?: true }
   | { ok: false; code: string; message: string };
 
 const RFC3339 = /^(\d{4})-(\d{2})-(\d{2})(?:[Tt ](\d{2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?)?\s*(Z|z|[+-]\d{2}(?::?\d{2})?)?$/;
@@ -144,6 +149,8 @@ function bad(value: string, what: string): InstantResult {
  * Accepted, in order: epoch seconds or milliseconds (a plain number of 9–16 digits); RFC 3339 /
  * ISO 8601 calendar date-times, with `T` or a space, optional seconds and fraction, and an
  * optional `Z` or `±hh:mm` offset; other ISO 8601 forms through luxon; or `options.format`.
+ * With `options.format`, a time that does not match it but is an RFC 3339 / ISO 8601 time is
+ * read as such and marked `fallback` (RFC 3339 section 5.6; ISO 8601-1:2019 section 5.4).
  * A time with an offset is taken as written (`hadOffset`); a time without one is a wall-clock
  * time in `zone`, and a daylight-saving gap or overlap is resolved by `options.gap`/`overlap`.
  * A leap second (`:60`, RFC 3339 section 5.7) is read as the first instant of the next minute,
@@ -159,7 +166,7 @@ export function parseInstant(raw: string, zone: string, options: TimeOptions = D
     return { ok: false, code: 'time_outside_window', message: 'the time lies outside the plausible window (by default 1970-01-01 to ten years from today); check the value and its epoch unit (--epoch), or widen the window with --time-window FROM/TO' };
   }
   const offsetMinutes = result.offsetMinutes ?? zoneOffset(zone, result.instant);
-  return { ok: true, instant: result.instant, offsetMinutes, hadOffset: result.hadOffset };
+  return { ok: true, instant: result.instant, offsetMinutes, hadOffset: result.hadOffset, ...(result.fallback ? { fallback: true as const } : {}), ...(result.offsetMinutes === undefined ? { epoch: true as const } : {}) };
 }
 
 /** The epoch milliseconds of a plain number in `unit` (`auto`: by magnitude, see TimeOptions.epoch). */
@@ -179,16 +186,35 @@ export function epochMillis(value: string, unit: EpochUnit): number {
   return sign * (ms + (rest >= 0.5 ? 1 : 0));
 }
 
-type ReadResult = { ok: true; instant: number; offsetMinutes: number | undefined; hadOffset: boolean } | { ok: false; code: string; message: string };
+type ReadResult = { ok: true; instant: number; offsetMinutes: number | undefined; hadOffset: boolean; fallback?: true } | { ok: false; code: string; message: string };
 
-/** parseInstant before the range checks; an epoch number's offset is left undefined (looked up after the checks). */
+/**
+ * parseInstant before the range checks; an epoch number's offset is left undefined (looked up after the checks).
+ *
+ * With a format, a time that does not match it is read as RFC 3339 / ISO 8601 (with or without
+ * an offset, by the same rules as without a format) and marked `fallback`; an epoch number is not
+ * (with a format given, a bare number is more likely a mistake than a time).
+ */
 function readInstant(raw: string, zone: string, options: TimeOptions): ReadResult {
   const value = raw.trim();
   if (value === '') return { ok: false, code: 'missing_time', message: 'the time is empty; every row needs a time' };
-  if (options.format) return parseWithFormat(value, zone, options);
+  if (options.format) {
+    const formatted = parseWithFormat(value, zone, options);
+    if (formatted.ok || EPOCH.test(value)) return formatted;
+    const general = readIsoInstant(value, zone, options);
+    if (general.ok) return { ...general, fallback: true };
+    // An RFC 3339 time that falls in a clock change keeps that reason; anything else is named by the format.
+    if (general.code !== 'bad_time') return general;
+    return { ...formatted, message: `${formatted.message}, nor is it an RFC 3339 / ISO 8601 time such as 2026-03-29T08:15:00+02:00 (read as a fallback)` };
+  }
   if (EPOCH.test(value)) {
     return { ok: true, instant: epochMillis(value, options.epoch), offsetMinutes: undefined, hadOffset: true };
   }
+  return readIsoInstant(value, zone, options);
+}
+
+/** An RFC 3339 / ISO 8601 date-time (trimmed, not empty, not an epoch number), with or without an offset. */
+function readIsoInstant(value: string, zone: string, options: TimeOptions): ReadResult {
   const f = commonFields(value) ?? regexFields(value);
   if (f) {
     const { year, month, day, hour, minute, second } = f;

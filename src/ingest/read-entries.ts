@@ -3,7 +3,7 @@ import type { Diagnostic, RawEntry, ReadItem, SourceRef } from '../types.js';
 import { parseColumnMapping, resolveColumns, type ColumnMapping } from './column-mapping.js';
 import { DEFAULT_TIME_OPTIONS, parseInstant, type TimeOptions } from './parse-instant.js';
 import { readRecordBatches, type ReadRecordsOptions, type TableFile } from './read-records.js';
-import { isValidZone, zoneOffset } from './zone-offset.js';
+import { fixedOffsetZone, isValidZone, zoneOffset } from './zone-offset.js';
 import { zoneAtInstant, zoneOnLocalDate, type ZoneTable } from './zone-table.js';
 import { describeValue, ID_LIKE, ZONE_LIKE } from '../privacy/describe-value.js';
 
@@ -25,7 +25,8 @@ function reject(code: string, message: string, source: SourceRef): ReadItem {
  * Turns one record into an entry, or a reject with its reason.
  *
  * The zone is the record's own `zone` column when present, otherwise the person's zone from
- * the zone table (for a wall-clock time, the zone in force on that local date). Times with an
+ * the zone table (for a wall-clock time, the zone in force on that local date), otherwise, for a
+ * time written with its offset, that fixed offset (`UTC+01:00`); else the row is `no_zone`. Times with an
  * offset keep their instant; the entry's offset is always the person's zone offset at that instant.
  * A `pseudonym_key` column marks an entry pseudonymized at import (RawEntry.pseudonymKey).
  */
@@ -41,7 +42,7 @@ export function recordToEntry(record: Record<string, string>, source: SourceRef,
   } else {
     const date = /^\d{4}-\d{2}-\d{2}/.test(timeText) ? timeText.slice(0, 10) : undefined;
     zone = (date ? zoneOnLocalDate(zones, person, date) : undefined) ?? zoneAtInstant(zones, person, 0) ?? '';
-    if (zone === '') return reject('no_zone', `person ${describeValue(person, ID_LIKE)} has no time zone; list them in --zones or pass --time-zone`, source);
+    if (zone === '') return offsetEntry(record, source, columns, person, text, timeText, time);
   }
   const parsed = parseInstant(timeText, zone, time);
   if (!parsed.ok) return reject(parsed.code, parsed.message, source);
@@ -62,7 +63,26 @@ export function recordToEntry(record: Record<string, string>, source: SourceRef,
   // The mark of entries pseudonymized at import (entryLine): they are not pseudonymized again.
   const pseudonymKey = (record[PSEUDONYM_KEY_COLUMN] ?? '').trim();
   if (pseudonymKey !== '') entry.pseudonymKey = pseudonymKey;
-  return { kind: 'entry', entry };
+  return parsed.fallback ? { kind: 'entry', entry, notes: ['time_iso_fallback'] } : { kind: 'entry', entry };
+}
+
+/**
+ * The entry of a person without a known zone whose time carries its UTC offset (RFC 3339 `Z` or
+ * `+01:00`, or a format with an offset token): its instant and local time are known, so it keeps
+ * the written offset as a fixed-offset zone (`UTC+01:00`, fixedOffsetZone). A wall-clock time or
+ * an epoch number needs the person's zone: `no_zone`.
+ */
+function offsetEntry(record: Record<string, string>, source: SourceRef, columns: ColumnMapping, person: string, text: string, timeText: string, time: TimeOptions): ReadItem {
+  const parsed = parseInstant(timeText, 'UTC', time);
+  if (!parsed.ok) return reject(parsed.code, parsed.message, source);
+  if (!parsed.hadOffset || parsed.epoch) {
+    return reject('no_zone', `person ${describeValue(person, ID_LIKE)} has no time zone; list them in --zones or pass --time-zone (in a study file: "zones" or "timeZone"), or write the time with its UTC offset (${parsed.epoch ? 'an epoch number has none' : 'the time has none'})`, source);
+  }
+  const idText = columns.id ? (record[columns.id] ?? '').trim() : '';
+  const entry: RawEntry = { id: idText !== '' ? idText : `${source.file}:${source.line}`, person, instant: parsed.instant, zone: fixedOffsetZone(parsed.offsetMinutes), offsetMinutes: parsed.offsetMinutes, text, source };
+  const pseudonymKey = (record[PSEUDONYM_KEY_COLUMN] ?? '').trim();
+  if (pseudonymKey !== '') entry.pseudonymKey = pseudonymKey;
+  return parsed.fallback ? { kind: 'entry', entry, notes: ['time_iso_fallback'] } : { kind: 'entry', entry };
 }
 
 /**

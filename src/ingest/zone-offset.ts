@@ -1,20 +1,44 @@
-import { IANAZone } from 'luxon';
+import { FixedOffsetZone, IANAZone } from 'luxon';
 
-const zones = new Map<string, IANAZone>();
+const zones = new Map<string, IANAZone | FixedOffsetZone>();
 const offsetCache = new Map<string, Map<number, DaySpan>>();
 const QUARTER_HOUR = 15 * 60 * 1000;
 
 const validity = new Map<string, boolean>();
 
+const FIXED = /^UTC([+-])(\d{2}):(\d{2})$/;
+
 /**
- * True when `zone` names a zone of the IANA time zone database known to this Node build.
+ * The label of a fixed UTC offset in minutes, `UTC+01:00` (RFC 3339 `time-numoffset` after `UTC`):
+ * the zone of a person without a known zone whose time was written with its offset. Offsets are
+ * rounded to whole minutes.
+ */
+export function fixedOffsetZone(offsetMinutes: number): string {
+  const m = Math.round(Math.abs(offsetMinutes));
+  return `UTC${offsetMinutes < 0 ? '-' : '+'}${String(Math.floor(m / 60)).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}`;
+}
+
+/** The offset in minutes of a fixedOffsetZone label, or undefined for anything else (offsets below 24 h). */
+export function fixedOffsetMinutes(zone: string): number | undefined {
+  const m = FIXED.exec(zone);
+  if (!m) return undefined;
+  const hours = Number(m[2]);
+  const minutes = Number(m[3]);
+  if (hours > 23 || minutes > 59) return undefined;
+  const total = hours * 60 + minutes;
+  return m[1] === '-' ? -total : total;
+}
+
+/**
+ * True when `zone` names a zone of the IANA time zone database known to this Node build, or is a
+ * fixed offset written as fixedOffsetZone writes it (`UTC+01:00`).
  * Answers are memoized: luxon builds an `Intl.DateTimeFormat` per check, which made checking
  * every row of a scores file the slowest step of the series stage.
  */
 export function isValidZone(zone: string): boolean {
   let ok = validity.get(zone);
   if (ok === undefined) {
-    ok = IANAZone.isValidZone(zone);
+    ok = IANAZone.isValidZone(zone) || fixedOffsetMinutes(zone) !== undefined;
     if (validity.size > 10_000) validity.clear();
     validity.set(zone, ok);
   }
@@ -32,10 +56,11 @@ interface DaySpan {
 
 const IRREGULAR: DaySpan = { change: NaN, before: NaN, after: NaN };
 
-function ianaZone(zone: string): IANAZone {
+function ianaZone(zone: string): IANAZone | FixedOffsetZone {
   let z = zones.get(zone);
   if (!z) {
-    z = IANAZone.create(zone);
+    const fixed = fixedOffsetMinutes(zone);
+    z = fixed !== undefined ? FixedOffsetZone.instance(fixed) : IANAZone.create(zone);
     zones.set(zone, z);
   }
   return z;
@@ -46,7 +71,7 @@ function ianaZone(zone: string): IANAZone {
  * quarter hour; when they differ, the quarter hour of the change is found by bisection.
  * A day whose three samples all differ is marked irregular (per-quarter-hour lookups).
  */
-function daySpan(z: IANAZone, start: number): DaySpan {
+function daySpan(z: IANAZone | FixedOffsetZone, start: number): DaySpan {
   const before = z.offset(start);
   const mid = z.offset(start + DAY / 2);
   const after = z.offset(start + DAY - QUARTER_HOUR);

@@ -257,6 +257,7 @@ async function mergeInto(outDir: string, shards: readonly ShardFolder[], p: Prep
     reconciliation.scored += m.reconciliation.scored;
     addCounts(reconciliation.rejected, m.reconciliation.rejected);
     addCounts(reconciliation.dropped, m.reconciliation.dropped);
+    if (m.reconciliation.notes) addCounts((reconciliation.notes ??= {}), m.reconciliation.notes);
   }
   const sum = (r: Record<string, number>): number => Object.values(r).reduce((a, b) => a + b, 0);
   if (reconciliation.scored + sum(reconciliation.rejected) + sum(reconciliation.dropped) !== reconciliation.read) {

@@ -69,6 +69,8 @@ export interface RunScoreOptions {
   pool?: ScorePool;
   /** Called once, when the first scored batch is back and about to be written (the start-up is over: lexicons compiled, tokenizer loaded). */
   onFirstRows?: () => void;
+  /** Called with each rejected row before it is written; may throw to stop the run (the outputs are then discarded). */
+  onReject?: (diagnostic: Diagnostic) => void;
   /** Also receives each scored entry. */
   onEntry?: (entry: ScoredEntry) => void;
   /** Also receives each entry with its text, after pseudonymization and before scoring (for the term audit of `run`). */
@@ -174,12 +176,15 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
   /** Rows a shard leaves to another shard; only rejects and drops of shard 0 are its own. */
   const rowsElsewhere = shard !== undefined && shard.index !== 0;
   if (shard) reconciliation.otherShard = 0;
+  /** Scored rows with a note, by note (reconciliation.notes, set only when there are any). */
+  const notes: Record<string, number> = {};
   let seqWriter: AtomicLineWriter | undefined;
   try {
     if (shard) seqWriter = await openAtomicLineWriter(`${options.out}.seq`);
     await scores.write(csvRow(scoresHeader(columns, options.lexicons, keepText)));
     await rejects.write(csvRow(['file', 'line', 'stage', 'code', 'message']));
     const addReject = async (d: Diagnostic): Promise<void> => {
+      options.onReject?.(d);
       reconciliation.rejected[d.code] = (reconciliation.rejected[d.code] ?? 0) + 1;
       const file = pseudonyms && d.source ? inputName : (d.source?.file ?? '');
       await rejects.write(csvRow([file, String(d.source?.line ?? ''), d.stage, d.code, diagnosticText(d.message)]));
@@ -293,6 +298,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
             continue;
           }
           options.onRawEntry?.(entry);
+          for (const note of item.notes ?? []) notes[note] = (notes[note] ?? 0) + 1;
           batch.push(entry);
           if (seqWriter) batchSeqs.push(reconciliation.read);
           if (batch.length >= BATCH_SIZE) {
@@ -307,6 +313,7 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       inputs.push({ path: inputName, bytes: read.bytes, sha256: read.sha256, rows });
     }
     options.onProgress?.(reconciliation.read);
+    if (Object.keys(notes).length > 0) reconciliation.notes = Object.fromEntries(Object.entries(notes).sort(([a], [b]) => (a < b ? -1 : 1)));
     const meta = {
       tool: { name: 'lexichron', version: TOOL_VERSION },
       lexicons: options.lexicons.map((l) => l.ref),

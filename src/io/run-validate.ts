@@ -3,7 +3,7 @@ import { basename, join } from 'node:path';
 import type { BinReducer } from '../series/bin-accumulator.js';
 import { inputError, usageError } from '../errors.js';
 import { parseColumnMapping, resolveColumns, type ColumnMapping } from '../ingest/column-mapping.js';
-import { DEFAULT_TIME_OPTIONS, formatLocal, parseInstant, type TimeOptions } from '../ingest/parse-instant.js';
+import { DEFAULT_TIME_OPTIONS, formatLocal, type TimeOptions } from '../ingest/parse-instant.js';
 import { recordToEntry } from '../ingest/read-entries.js';
 import { readRecords, type TableFormat } from '../ingest/read-records.js';
 import { ownTableFile } from './own-table-file.js';
@@ -27,7 +27,7 @@ import { entryScoreColumns, entryScoreFromRecord, type EntryScore } from '../val
 import type { Rating } from '../validate/rating.js';
 import { ratingColumns as selectRatingColumns } from '../validate/rating-columns.js';
 import { parseRatingScales, type RatingScale } from '../validate/rating-scale.js';
-import { ratingValues } from '../validate/rating-values.js';
+import { DEFAULT_MISSING_CODES, ratingValues } from '../validate/rating-values.js';
 import { seriesBinFromRecord, seriesScoreColumns, type SeriesBin } from '../validate/series-bin.js';
 import { validateSeries, type ValidateOptions, type ValidationResult } from '../validate/validate-series.js';
 import { writeFileAtomic } from './atomic-write.js';
@@ -61,7 +61,10 @@ export interface RunValidateOptions {
   time?: TimeOptions;
   /** Rating columns (default: every column but person, time, zone and id). */
   ratingColumns?: string[];
-  /** Missing-value codes of the rating columns (`--missing NA,-99`): read as missing, not as errors. */
+  /**
+   * Missing-value codes of the rating columns (`--missing NA,-99`): read as missing, not as errors.
+   * Default DEFAULT_MISSING_CODES (`NA`); an empty list leaves only empty cells missing.
+   */
   missing?: readonly string[];
   /** Declared scales, as a map or the `--scale` text. */
   scales: ReadonlyMap<string, RatingScale> | string;
@@ -85,17 +88,25 @@ export interface RunValidateResult {
   files: Record<'statistics' | 'pairs' | 'persons' | 'json' | 'diagnostics' | 'reliability' | 'binsPerPerson', string | undefined>;
   /** Data-package resources of the tables written (paths relative to `out`). */
   resources: TableResource[];
-  /** Self-report rows read, and rejected by code (rows and values). */
-  reconciliation: { read: number; kept: number; rejected: Record<string, number> };
+  /**
+   * Self-report rows read, kept, and rejected by code (rows and values); `missing`: rating values
+   * read as missing (empty or a missing-value code) per rating column, with the `codes` in use;
+   * `notes`: kept rows by note (`time_iso_fallback`), absent when none.
+   */
+  reconciliation: { read: number; kept: number; rejected: Record<string, number>; missing: Record<string, number>; codes: string[]; notes?: Record<string, number> };
 }
 
 /** Reads the self-report file into ratings and diagnostics (row rejects and value rejects). */
-export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales' | 'person' | 'ratingsName' | 'missing'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number }> {
+export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 'columns' | 'format' | 'delimiter' | 'zones' | 'time' | 'ratingColumns' | 'scales' | 'person' | 'ratingsName' | 'missing'>): Promise<{ ratings: Rating[]; columns: string[]; diagnostics: Diagnostic[]; read: number; missing: Record<string, number>; codes: string[]; notes: Record<string, number> }> {
   const scales = typeof options.scales === 'string' ? parseRatingScales(options.scales) : options.scales;
   const mapping = typeof options.columns === 'string' || options.columns === undefined ? parseColumnMapping(options.columns) : options.columns;
   const time = options.time ?? DEFAULT_TIME_OPTIONS;
   const file = basename(options.ratings);
-  const missing = new Set((options.missing ?? []).map((m) => m.trim()).filter((m) => m !== ''));
+  const codes = [...new Set((options.missing ?? DEFAULT_MISSING_CODES).map((m) => m.trim()).filter((m) => m !== ''))];
+  const missing = new Set(codes);
+  /** Values read as missing, per rating column; kept rows with a note, by note. */
+  const missingCount: Record<string, number> = {};
+  const notes: Record<string, number> = {};
   const ratings: Rating[] = [];
   const diagnostics: Diagnostic[] = [];
   let columns: ColumnMapping | undefined;
@@ -121,19 +132,23 @@ export async function readRatings(options: Pick<RunValidateOptions, 'ratings' | 
     if (!columns) resolve(Object.keys(item.record));
     const c = columns as ColumnMapping;
     // The text readers' person, time and zone handling, with the person column standing in for text.
-    let parsed: ReturnType<typeof recordToEntry> | NonNullable<ReturnType<typeof offsetRating>> = recordToEntry(item.record, item.source, { ...c, text: c.person }, options.zones, time);
-    if (parsed.kind === 'reject' && parsed.diagnostic.code === 'no_zone') parsed = offsetRating(item.record, c, time) ?? parsed;
+    // A person without a zone whose time carries its offset keeps that offset (recordToEntry).
+    const parsed = recordToEntry(item.record, item.source, { ...c, text: c.person }, options.zones, time);
     if (parsed.kind === 'reject') {
       diagnostics.push({ ...parsed.diagnostic, stage: 'validate' });
       continue;
     }
-    const { values, diagnostics: valueProblems } = ratingValues(item.record, ratingCols, scales, item.source, missing);
+    const { values, diagnostics: valueProblems, missing: absent } = ratingValues(item.record, ratingCols, scales, item.source, missing);
     diagnostics.push(...valueProblems);
+    for (const column of absent) missingCount[column] = (missingCount[column] ?? 0) + 1;
+    for (const note of parsed.notes ?? []) notes[note] = (notes[note] ?? 0) + 1;
     const e = parsed.entry;
     ratings.push({ person: options.person ? options.person(e.person) : e.person, instant: e.instant, zone: e.zone, offsetMinutes: e.offsetMinutes, values, source: item.source });
   }
   if (!columns) throw inputError(`Cannot read \`${file}\`: it holds no self-reports.`);
-  return { ratings, columns: ratingCols, diagnostics, read };
+  const missingByColumn: Record<string, number> = {};
+  for (const column of ratingCols) if (missingCount[column]) missingByColumn[column] = missingCount[column] as number;
+  return { ratings, columns: ratingCols, diagnostics, read, missing: missingByColumn, codes, notes };
 }
 
 async function readSeriesBins(path: string): Promise<{ bins: SeriesBin[]; columns: string[]; diagnostics: Diagnostic[] }> {
@@ -181,22 +196,6 @@ async function readEntryScores(path: string): Promise<{ entries: EntryScore[]; c
     else entries.push(entry);
   }
   return { entries, columns: columns ?? [], diagnostics };
-}
-
-/**
- * A self-report of a person with no known zone whose time carries its own offset (RFC 3339
- * `Z` or `+01:00`, or a format with an offset token): its instant and local time are known
- * without a zone file, so it is read with a fixed-offset zone label (`UTC+01:00`). Epoch numbers
- * and wall-clock times still need the person's zone (undefined here).
- */
-function offsetRating(record: Record<string, string>, c: ColumnMapping, time: TimeOptions): { kind: 'entry'; entry: { person: string; instant: number; zone: string; offsetMinutes: number } } | undefined {
-  const text = (record[c.time] ?? '').trim();
-  if (/^[+-]?\d+(\.\d+)?$/.test(text)) return undefined;
-  const parsed = parseInstant(text, 'UTC', time);
-  if (!parsed.ok || !parsed.hadOffset) return undefined;
-  const m = Math.abs(parsed.offsetMinutes);
-  const label = `UTC${parsed.offsetMinutes < 0 ? '-' : '+'}${String(Math.floor(m / 60)).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}`;
-  return { kind: 'entry', entry: { person: (record[c.person] ?? '').trim(), instant: parsed.instant, zone: label, offsetMinutes: parsed.offsetMinutes } };
 }
 
 /**
@@ -281,7 +280,8 @@ export async function runValidate(options: RunValidateOptions): Promise<RunValid
   };
   const rejected: Record<string, number> = {};
   for (const d of ratings.diagnostics) rejected[d.code] = (rejected[d.code] ?? 0) + 1;
-  const reconciliation = { read: ratings.read, kept: ratings.ratings.length, rejected };
+  const notes = Object.keys(ratings.notes).length > 0 ? { notes: ratings.notes } : {};
+  const reconciliation = { read: ratings.read, kept: ratings.ratings.length, rejected, missing: ratings.missing, codes: ratings.codes, ...notes };
   await writeFileAtomic(files.json as string, validationJson(result, reconciliation));
   return { result, scoreColumns, ratingColumns: ratings.columns, files, resources, reconciliation };
 }

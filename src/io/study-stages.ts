@@ -41,7 +41,7 @@ export const validateStage: StudyStage = async (context) => {
     format: settings.format,
     delimiter: settings.delimiter,
     zones: context.zones,
-    time: context.time,
+    time: context.ratingsTime ?? context.time,
     ratingColumns: settings.ratings,
     missing: settings.missing,
     scales: new Map(Object.entries(settings.scales).map(([k, [min, max]]) => [k, { min, max }])),

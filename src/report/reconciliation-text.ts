@@ -15,6 +15,8 @@ export function reconciliationText(r: Reconciliation): string {
     lines.push(`  dropped    ${pad(dropped)}`);
     for (const [code, n] of Object.entries(r.dropped).sort((a, b) => b[1] - a[1] || (a[0] < b[0] ? -1 : 1))) lines.push(`    ${code.padEnd(22)}${n.toLocaleString('en-US').padStart(10)}`);
   }
+  // Notes on scored rows (e.g. times read by the RFC 3339 fallback of a time format): counted, not subtracted.
+  for (const [note, n] of Object.entries(r.notes ?? {})) lines.push(`  note: ${note.padEnd(16)}${n.toLocaleString('en-US').padStart(10)} of the scored rows`);
   const elsewhere = r.otherShard ?? 0;
   if (r.otherShard !== undefined) lines.push(`  other shard${pad(elsewhere).slice(1)}`);
   if (r.scored + rejected + dropped + elsewhere !== r.read) lines.push(`  MISMATCH: read ${r.read} ≠ scored + rejected + dropped${r.otherShard !== undefined ? ' + other shard' : ''} ${r.scored + rejected + dropped + elsewhere}; please report this as a bug`);

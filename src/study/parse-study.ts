@@ -1,4 +1,7 @@
-import { EPOCH_UNITS, type EpochUnit } from '../ingest/parse-instant.js';
+import type { EpochUnit } from '../ingest/parse-instant.js';
+import { checkTime } from './check-time.js';
+import { INPUT_KEYS, PRIVACY_KEYS, SERIES_KEYS, STUDY_IMPORT_FORMATS, TOP_KEYS } from './study-keys.js';
+import { unknownKeys } from './unknown-keys.js';
 import type { ImportSourceSpec } from '../io/open-import-source.js';
 import { auditSettings, dynamicsSettings, ratingsSettings, reportSettings, type AuditSettings, type DynamicsSettings, type RatingsSettings, type ReportSettings } from './stage-settings.js';
 
@@ -7,8 +10,7 @@ import { auditSettings, dynamicsSettings, ratingsSettings, reportSettings, type 
  * settings of every stage. This module validates it and reports each problem with its JSON path.
  */
 
-/** Formats read through an importer (donated exports) rather than as a table. */
-export const STUDY_IMPORT_FORMATS = ['mbox', 'diary', 'chat-lines', 'chat-table'] as const;
+export { STUDY_IMPORT_FORMATS };
 
 /** The importer options a donated-export input may carry, as on the command line (camel case). */
 type ImportFields = Partial<Pick<ImportSourceSpec, 'addresses' | 'senders' | 'dateOrder' | 'heading' | 'dateFormat' | 'locale' | 'entryTime' | 'entryTimeFormat' | 'senderField' | 'timeField' | 'textField' | 'timeFormat'>>;
@@ -84,67 +86,15 @@ export interface StudyProblem {
   message: string;
 }
 
-const TOP_KEYS = ['name', 'inputs', 'zones', 'timeZone', 'time', 'lexicons', 'keepText', 'countRate', 'names', 'maxRejects', 'series', 'ratings', 'dynamics', 'audit', 'report', 'privacy', 'out', 'description'];
-/** The keys each kind of input uses; any other key is an error (nothing is accepted and ignored). */
-const TABLE_KEYS = ['path', 'format', 'columns', 'delimiter', 'time'];
-const IMPORT_KEYS = ['path', 'format', 'person', 'dedupe', 'mergeBurstMinutes', 'time'];
-const INPUT_KEYS: Record<string, readonly string[]> = {
-  table: TABLE_KEYS,
-  mbox: [...IMPORT_KEYS, 'addresses'],
-  diary: [...IMPORT_KEYS, 'heading', 'dateFormat', 'locale', 'entryTime', 'entryTimeFormat'],
-  'chat-lines': [...IMPORT_KEYS, 'senders', 'dateOrder'],
-  'chat-table': [...IMPORT_KEYS, 'senders', 'senderField', 'timeField', 'textField', 'timeFormat'],
-};
-const TIME_KEYS = ['format', 'epoch', 'window', 'dstGap', 'dstOverlap'];
-const SERIES_KEYS = ['bin', 'dayStart', 'minWords', 'excludeHours', 'fill', 'maxFill', 'detrend', 'aggregate', 'from', 'to', 'window', 'windows', 'maxBins', 'warnSpanDays'];
-const PRIVACY_KEYS = ['keyFile', 'keyEnv', 'names', 'aggregatesOnly'];
-
-/** Levenshtein distance, for "did you mean" hints. */
-function distance(a: string, b: string): number {
-  const d = Array.from({ length: a.length + 1 }, (_, i) => [i, ...Array<number>(b.length).fill(0)]);
-  for (let j = 1; j <= b.length; j++) (d[0] as number[])[j] = j;
-  for (let i = 1; i <= a.length; i++) {
-    for (let j = 1; j <= b.length; j++) {
-      const row = d[i] as number[];
-      const prev = d[i - 1] as number[];
-      row[j] = Math.min((prev[j] as number) + 1, (row[j - 1] as number) + 1, (prev[j - 1] as number) + (a[i - 1] === b[j - 1] ? 0 : 1));
-    }
-  }
-  return (d[a.length] as number[])[b.length] as number;
-}
-
-function unknownKeys(value: Record<string, unknown>, known: readonly string[], path: string, problems: StudyProblem[]): void {
-  for (const key of Object.keys(value)) {
-    if (known.includes(key)) continue;
-    const near = [...known].sort((x, y) => distance(key, x) - distance(key, y))[0];
-    const hint = near && distance(key, near) <= 3 ? `; did you mean \`${near}\`?` : `; known keys are ${known.join(', ')}`;
-    problems.push({ path: `${path}.${key}`, message: `unknown key \`${key}\`${hint}` });
-  }
-}
-
 /** An input's key its kind does not use: named with its JSON path and the keys that kind accepts. */
 function kindKeys(value: Record<string, unknown>, kind: string, path: string, problems: StudyProblem[]): void {
-  const known = INPUT_KEYS[(STUDY_IMPORT_FORMATS as readonly string[]).includes(kind) ? kind : 'table'] ?? TABLE_KEYS;
+  const known = INPUT_KEYS[(STUDY_IMPORT_FORMATS as readonly string[]).includes(kind) ? kind : 'table'] ?? (INPUT_KEYS.table as readonly string[]);
   for (const key of Object.keys(value)) {
     if (known.includes(key)) continue;
     const user = Object.entries(INPUT_KEYS).filter(([, keys]) => keys.includes(key)).map(([k]) => (k === 'table' ? 'table' : k));
     const where = user.length > 0 ? `; it belongs to ${user.join(', ')} inputs` : '';
     problems.push({ path: `${path}.${key}`, message: `a ${kind} input does not use \`${key}\`${where}; its keys are ${known.join(', ')}` });
   }
-}
-
-/** Checks a `time` object (the study's or one input's); problems carry `path`. */
-function checkTime(time: Record<string, unknown>, path: string, problems: StudyProblem[]): void {
-  const need = (ok: boolean, p: string, message: string): void => {
-    if (!ok) problems.push({ path: p, message });
-  };
-  unknownKeys(time, TIME_KEYS, path, problems);
-  const policies = ['reject', 'earlier', 'later'];
-  need(time.format === undefined || (typeof time.format === 'string' && time.format.trim() !== ''), `${path}.format`, 'expected a luxon format such as "MM/dd/yyyy h:mm a"');
-  need(time.epoch === undefined || (EPOCH_UNITS as readonly unknown[]).includes(time.epoch), `${path}.epoch`, `expected ${EPOCH_UNITS.join(', ')}`);
-  need(time.window === undefined || typeof time.window === 'string', `${path}.window`, 'expected a string FROM/TO such as "1990-01-01/2030-12-31" (a side left empty keeps its default)');
-  need(time.dstGap === undefined || policies.includes(time.dstGap as string), `${path}.dstGap`, 'expected reject, earlier or later');
-  need(time.dstOverlap === undefined || policies.includes(time.dstOverlap as string), `${path}.dstOverlap`, 'expected reject, earlier or later');
 }
 
 function isObject(value: unknown): value is Record<string, unknown> {
@@ -213,7 +163,8 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   }
   need(json.zones === undefined || str(json.zones), '$.zones', 'expected the path of a zone file (person, zone[, from])');
   need(json.timeZone === undefined || str(json.timeZone), '$.timeZone', 'expected an IANA zone name such as Europe/Brussels');
-  need(json.zones !== undefined || json.timeZone !== undefined, '$', 'name the persons\' time zones with "zones" (a file) or "timeZone" (one IANA zone for everyone)');
+  // No zones at all is allowed: a study whose every time carries its UTC offset needs none (a time
+  // without one then stops the run with a message naming "zones" and "timeZone", see runStudy).
   const time = isObject(json.time) ? json.time : {};
   if (json.time !== undefined && !isObject(json.time)) problems.push({ path: '$.time', message: 'expected an object {"format": …, "epoch": …, "dstGap": …, "dstOverlap": …}' });
   checkTime(time, '$.time', problems);

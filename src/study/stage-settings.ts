@@ -1,4 +1,6 @@
-import type { StudyProblem } from './parse-study.js';
+import { checkTime } from './check-time.js';
+import { keyHome } from './key-home.js';
+import type { Study, StudyProblem } from './parse-study.js';
 
 /** Validation settings of a study file (`ratings`). */
 export interface RatingsSettings {
@@ -10,7 +12,7 @@ export interface RatingsSettings {
   scales: Record<string, [number, number]>;
   /** Rating columns (default: every column but person, time, zone, id). */
   ratings?: string[];
-  /** Missing-value codes of the rating columns, e.g. ["NA", "-99"]. */
+  /** Missing-value codes of the rating columns, e.g. ["NA", "-99"]; default ["NA"] (DEFAULT_MISSING_CODES); [] leaves only empty cells missing. */
   missing?: string[];
   /** Score columns to validate (default: all). */
   scores?: string[];
@@ -23,6 +25,8 @@ export interface RatingsSettings {
   reliability: number;
   /** Random slopes for the within-person score in the mixed model. */
   randomSlopes: 'auto' | 'always' | 'never';
+  /** The self-reports' own time options, each overriding the study's `time` (as an input's `time`). */
+  time?: Partial<Study['time']>;
 }
 
 /** Dynamics settings of a study file (`dynamics`). */
@@ -75,11 +79,17 @@ interface Rule {
   expected: string;
 }
 
-function checkObject(value: Record<string, unknown>, rules: Record<string, Rule>, path: string, problems: StudyProblem[]): void {
+/**
+ * Checks each key of `value` by its rule. An unknown key is a problem naming its path and, with
+ * `homes` (an object that has its own `time`), where the key belongs (see keyHome).
+ */
+function checkObject(value: Record<string, unknown>, rules: Record<string, Rule>, path: string, problems: StudyProblem[], homes = false): void {
   for (const [key, v] of Object.entries(value)) {
     const rule = rules[key];
     if (!rule) {
-      problems.push({ path: `${path}.${key}`, message: `unknown key \`${key}\`; known keys are ${Object.keys(rules).join(', ')}` });
+      const home = homes ? keyHome(key, path) : undefined;
+      const what = path === '$.ratings' ? 'the ratings do not use' : 'unknown key';
+      problems.push({ path: `${path}.${key}`, message: home ? `${what} \`${key}\`; ${home}` : `unknown key \`${key}\`; known keys are ${Object.keys(rules).join(', ')}` });
       continue;
     }
     if (!rule.check(v)) problems.push({ path: `${path}.${key}`, message: `expected ${rule.expected}` });
@@ -96,7 +106,7 @@ const RATINGS_RULES: Record<string, Rule> = {
     expected: 'the declared scale of each rating, e.g. {"mood": [0, 100], "calm": [1, 7]}',
   },
   ratings: { check: isStrings, expected: 'an array of rating column names' },
-  missing: { check: isStrings, expected: 'an array of missing-value codes such as ["NA", "-99"]' },
+  missing: { check: (v) => Array.isArray(v) && v.every(isString), expected: 'an array of missing-value codes such as ["NA", "-99"] (default ["NA"]; [] leaves only empty cells missing)' },
   scores: { check: isStrings, expected: 'an array of score column names' },
   align: { check: (v) => v === 'bins' || v === 'window', expected: 'bins or window' },
   window: { check: (v) => typeof v === 'string' && /^\s*\d+\s*(m|min|h|d)\s*$/i.test(v), expected: 'a duration such as "3h" or "90m"' },
@@ -105,6 +115,7 @@ const RATINGS_RULES: Record<string, Rule> = {
   minPairs: { check: wholeAtLeast(2), expected: 'a whole number ≥ 2' },
   reliability: { check: between01, expected: 'a number between 0 and 1, e.g. 0.7' },
   randomSlopes: { check: (v) => v === 'auto' || v === 'always' || v === 'never', expected: 'auto, always or never' },
+  time: { check: (v) => v !== null && typeof v === 'object' && !Array.isArray(v), expected: 'an object {"format": …, "epoch": …, "dstGap": …, "dstOverlap": …, "window": …} overriding the study\'s time for the self-reports' },
 };
 
 const DYNAMICS_RULES: Record<string, Rule> = {
@@ -140,7 +151,9 @@ const REPORT_RULES: Record<string, Rule> = {
 
 /** Checks and completes `ratings`; problems carry JSON paths under `$.ratings`. */
 export function ratingsSettings(value: Record<string, unknown>, problems: StudyProblem[]): RatingsSettings {
-  checkObject(value, RATINGS_RULES, '$.ratings', problems);
+  checkObject(value, RATINGS_RULES, '$.ratings', problems, true);
+  const time = value.time !== null && typeof value.time === 'object' && !Array.isArray(value.time) ? (value.time as Record<string, unknown>) : undefined;
+  if (time) checkTime(time, '$.ratings.time', problems);
   if (value.path === undefined) problems.push({ path: '$.ratings.path', message: 'expected the path of the self-report file' });
   if (value.scales === undefined) problems.push({ path: '$.ratings.scales', message: 'declare the scale of each rating, e.g. {"mood": [0, 100]}, so out-of-scale values can be rejected' });
   return {
@@ -159,6 +172,7 @@ export function ratingsSettings(value: Record<string, unknown>, problems: StudyP
     minPairs: (value.minPairs as number | undefined) ?? 10,
     reliability: (value.reliability as number | undefined) ?? 0.7,
     randomSlopes: (value.randomSlopes as RatingsSettings['randomSlopes'] | undefined) ?? 'auto',
+    ...(time ? { time: time as RatingsSettings['time'] } : {}),
   };
 }
 

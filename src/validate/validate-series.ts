@@ -75,6 +75,7 @@ export interface ValidationResult {
   reliability: WordCountReliability[];
   binsPerPerson: BinsPerPerson[];
   diagnostics: Diagnostic[];
+  /** Self-reports with at least one rating value (unanswered prompts are `rating_unanswered` diagnostics), aligned rows, rows with text, persons. */
   counts: { ratings: number; rows: number; rowsWithText: number; persons: number };
 }
 
@@ -90,6 +91,14 @@ export interface ValidationResult {
 export function validateSeries(input: ValidateInput, options: Partial<ValidateOptions> = {}): ValidationResult {
   const o: ValidateOptions = { ...DEFAULT_VALIDATE_OPTIONS, ...options };
   const diagnostics: Diagnostic[] = [];
+  // A prompt without any rating value (every rating column empty or a missing code) is no
+  // observation: it makes no aligned row, no report and no pair, and is counted here.
+  const answered: Rating[] = [];
+  for (const r of input.ratings) {
+    if (input.ratingColumns.some((c) => r.values[c] !== undefined)) answered.push(r);
+    else diagnostics.push({ code: 'rating_unanswered', message: `the self-report of \`${r.person}\` holds no rating (every rating column is empty, a missing-value code or left out); the prompt is not paired`, source: r.source, stage: 'validate' });
+  }
+  input = { ...input, ratings: answered };
   let rows: AlignedRow[];
   if (o.align === 'bins') {
     if (!input.bins) throw usageError('Bin alignment needs the long text series (series-long.csv); pass it as SERIES.');
@@ -138,6 +147,6 @@ export function validateSeries(input: ValidateInput, options: Partial<ValidateOp
     reliability,
     binsPerPerson: perPerson,
     diagnostics,
-    counts: { ratings: input.ratings.length, rows: rows.length, rowsWithText: rows.filter((r) => r.missing === '').length, persons: new Set(rows.map((r) => r.person)).size },
+    counts: { ratings: answered.length, rows: rows.length, rowsWithText: rows.filter((r) => r.missing === '').length, persons: new Set(rows.map((r) => r.person)).size },
   };
 }

@@ -110,7 +110,8 @@ describe('side files are validated', () => {
   it('reads declared missing-value codes as missing ratings instead of rating_not_numeric', async () => {
     const ratings = tmp.write('missing.csv', 'person,time,mood,calm\np1,2026-03-01T10:00:00Z,NA,-99\np1,2026-03-01T11:00:00Z,50,4\np1,2026-03-01T12:00:00Z,n/a,4\n');
     const zones = buildZoneTable([], '', 'UTC');
-    const without = await readRatings({ ratings, zones, scales: 'mood=0:100,calm=1:7' });
+    // With no codes declared at all (an empty list; the default NA is tested in test/validate/missing-codes.test.ts).
+    const without = await readRatings({ ratings, zones, scales: 'mood=0:100,calm=1:7', missing: [] });
     expect(without.diagnostics.map((d) => d.code).sort()).toEqual(['rating_not_numeric', 'rating_not_numeric', 'rating_out_of_scale']);
     const read = await readRatings({ ratings, zones, scales: 'mood=0:100,calm=1:7', missing: ['NA', '-99'] });
     expect(read.diagnostics.map((d) => [d.source?.line, d.code])).toEqual([[4, 'rating_not_numeric']]);

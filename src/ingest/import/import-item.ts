@@ -13,9 +13,10 @@ export type DropReason = 'third_party' | 'system_line' | 'duplicate_exact' | 'du
  * A remark on an entry that was kept:
  * - `mojibake`: double-encoded UTF-8 was repaired;
  * - `windows_1252`: bytes that were not UTF-8 were read as Windows-1252 (a file with mixed encodings);
- * - `undecodable_bytes`: the decoded text holds U+FFFD replacement characters (bytes the declared charset could not decode).
+ * - `undecodable_bytes`: the decoded text holds U+FFFD replacement characters (bytes the declared charset could not decode);
+ * - `time_iso_fallback`: the time did not match the given time format and was read as RFC 3339 / ISO 8601.
  */
-export type EntryNote = 'mojibake' | 'windows_1252' | 'undecodable_bytes';
+export type EntryNote = 'mojibake' | 'windows_1252' | 'undecodable_bytes' | 'time_iso_fallback';
 
 /**
  * What an importer yields for each unit it reads (message, chat line, diary entry):
