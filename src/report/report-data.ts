@@ -217,6 +217,8 @@ export interface RatingsReconciliation {
   valuesLeftOut: Record<string, number>;
   /** Self-reports that found no text to pair with, by code. */
   notPaired: Record<string, number>;
+  /** Prompts whose every rating is missing: never paired (absent when the stage recorded none). */
+  unanswered?: number;
   /** Other problems of the validate stage (e.g. unreadable rows of the series file), by code. */
   other: Record<string, number>;
   /** Aligned occasions (bins, or windows before each self-report), those with text, and persons. */

@@ -8,6 +8,8 @@ const count = (v: unknown): number | undefined => (typeof v === 'number' && Numb
 const VALUE_CODES = new Set(['rating_not_numeric', 'rating_out_of_scale']);
 /** Codes of a self-report that found no text to pair with (src/validate/align-ratings-to-bins.ts, validate-series.ts). */
 const NOT_PAIRED_CODES = new Set(['rating_person_not_in_series', 'rating_outside_series']);
+/** Code of a prompt whose every rating is missing: kept for the study window, never paired (src/validate/). */
+const UNANSWERED_CODE = 'rating_unanswered';
 /** Fields of the reconciliation and the counts that have their own rows. */
 const KNOWN_RECONCILIATION = new Set(['read', 'kept', 'rejected']);
 const KNOWN_COUNTS = new Set(['ratings', 'rows', 'rowsWithText', 'persons']);
@@ -48,7 +50,8 @@ export function ratingsReconciliationFrom(validationJson: unknown, manifestStage
   for (const [code, n] of Object.entries(codeCounts(json.diagnostics) ?? {})) {
     const beyond = n - (rejected[code] ?? 0);
     if (beyond <= 0) continue;
-    if (NOT_PAIRED_CODES.has(code)) out.notPaired[code] = beyond;
+    if (code === UNANSWERED_CODE) out.unanswered = beyond;
+    else if (NOT_PAIRED_CODES.has(code)) out.notPaired[code] = beyond;
     else if (VALUE_CODES.has(code)) out.valuesLeftOut[code] = (out.valuesLeftOut[code] ?? 0) + beyond;
     else out.other[code] = beyond;
   }

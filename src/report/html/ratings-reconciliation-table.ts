@@ -24,8 +24,15 @@ const REASONS: Readonly<Record<string, string>> = {
   bad_entry_row: 'unreadable row of the entry file',
 };
 
+/** Words for the further counts the validate stage records under a name of its own. */
+const COUNT_NAMES: Readonly<Record<string, string>> = {
+  missing: 'Ratings missing (an empty cell or a missing-value code), by column',
+  notes: 'Rows read with a note',
+  time_iso_fallback: 'time read as RFC 3339 instead of the given format',
+};
+
 /** A code in words. */
-const reason = (code: string): string => REASONS[code] ?? code.replace(/_/g, ' ');
+const reason = (code: string): string => REASONS[code] ?? COUNT_NAMES[code] ?? code.replace(/_/g, ' ');
 
 /** `missingCodes` or `missing_codes` → `Missing codes`. */
 function words(name: string): string {
@@ -63,13 +70,15 @@ export function ratingsReconciliationTable(r: RatingsReconciliation): string {
   if (leftOut > 0 || r.read !== undefined) rows.push(...(leftOut > 0 ? withReasons('Rows left out', r.rowsLeftOut) : [row('Rows left out', 0)]));
   rows.push(...withReasons('Single ratings left out (the rest of the row kept)', r.valuesLeftOut));
   for (const m of r.more) {
-    if (typeof m.value === 'number') rows.push(row(words(m.name), m.value));
-    else rows.push(...withReasons(words(m.name), m.value, (code) => code));
+    const label = COUNT_NAMES[m.name] ?? words(m.name);
+    if (typeof m.value === 'number') rows.push(row(label, m.value));
+    else rows.push(...withReasons(label, m.value, (code) => COUNT_NAMES[code] ?? code));
   }
   if (r.read !== undefined && r.kept !== undefined && r.read - r.kept !== leftOut) {
     rows.push(`<tr class="mismatch"><td colspan="2">The counts do not add up: rows read − rows kept = ${groupThousands(r.read - r.kept)}, but the rows left out by reason number ${groupThousands(leftOut)}. Please report this as a bug.</td></tr>`);
   }
   rows.push(group('Pairing with the text'));
+  if (r.unanswered !== undefined && r.unanswered > 0) rows.push(row('Prompts with no rating at all (kept for the study window, not paired)', r.unanswered));
   rows.push(...withReasons('Self-reports with no text to pair with', r.notPaired));
   if (r.occasions !== undefined) rows.push(row('Aligned occasions (bins, or windows before a self-report)', r.occasions));
   if (r.occasionsWithText !== undefined) rows.push(row('of which with text', r.occasionsWithText, 'sub'));

@@ -38,6 +38,11 @@ describe('ratingsReconciliationFrom', () => {
     ]);
   });
 
+  it('counts prompts with no rating at all apart from the problems, since they are kept for the window but never paired', () => {
+    const r = ratingsReconciliationFrom({ reconciliation: { read: 10, kept: 10, rejected: {} }, diagnostics: { rating_unanswered: 3, bad_series_row: 1 } }, undefined);
+    expect(r).toMatchObject({ unanswered: 3, other: { bad_series_row: 1 }, notPaired: {} });
+  });
+
   it('is undefined when neither output records how the self-reports were read, and ignores values that are not counts', () => {
     expect(ratingsReconciliationFrom(undefined, undefined)).toBeUndefined();
     expect(ratingsReconciliationFrom({ pairs: [] }, { pairs: [] })).toBeUndefined();

@@ -32,6 +32,15 @@ describe('ratingsReconciliationTable', () => {
     expect(r).toContainEqual(['Prompts sent', '1,300']);
   });
 
+  it('shows unanswered prompts on a row of their own under the pairing, and missing ratings by column in words', () => {
+    const r = rows(ratingsReconciliationTable({ ...base, unanswered: 31, more: [{ name: 'missing', value: { mood: 31, calm: 40 } }] }));
+    expect(r).toContainEqual(['Prompts with no rating at all (kept for the study window, not paired)', '31']);
+    expect(r).toContainEqual(['Ratings missing (an empty cell or a missing-value code), by column', '71']);
+    expect(r).toContainEqual(['calm', '40']);
+    expect(r.findIndex((x) => x[0]?.startsWith('Prompts with no rating'))).toBeGreaterThan(r.findIndex((x) => x[0] === 'Pairing with the text'));
+    expect(r.some((x) => x[0] === 'Other problems of the validate stage')).toBe(false);
+  });
+
   it('says so when rows read less rows kept differ from the rows left out by reason', () => {
     expect(ratingsReconciliationTable({ ...base, kept: 1190 })).toContain('The counts do not add up: rows read − rows kept = 14, but the rows left out by reason number 4');
   });
