@@ -22,7 +22,7 @@ const FIXED: Record<string, Omit<SchemaField, 'name'>> = {
   person: { type: 'string', description: 'Person id (pseudonymized when a key was given)' },
   time_utc: { type: 'datetime', format: 'any', description: 'Instant of the entry, RFC 3339 in UTC' },
   time_local: { type: 'string', description: 'Local time of the entry with UTC offset, RFC 3339' },
-  zone: { type: 'string', description: 'IANA time zone of the person at that time' },
+  zone: { type: 'string', description: 'IANA time zone of the person at that time, or the fixed offset written with the time (UTC+02:00) for a person with no zone' },
   words: { type: 'integer', description: 'Word tokens (entries: of the entry; series: summed over the bin)' },
   t: { type: 'integer', description: 'Within-person time index, 0-based over every bin of the window (missing bins included)' },
   bin_start: { type: 'string', description: 'Local start of the bin with UTC offset' },
