@@ -8,8 +8,10 @@ import { tempFolder } from '../support/temp-files.js';
 /**
  * End to end: `lexichron run study.json` on the invented multi-source study of
  * test/fixtures/multi-source-study (8 persons in Europe/Berlin and America/Chicago, 21 local days
- * across the EU clock change of 2026-10-25 and the US one of 2026-11-01, one export of each kind as
- * it comes, a dropout, ratings with NA), with no pre-processing. Expected values: pandas 1.5.3,
+ * across the EU clock change of 2026-10-25 and the US one of 2026-11-01, a dropout, ratings with NA)
+ * with one export of each kind lexichron reads, as it comes: JSON Lines (epoch ms), TSV (German
+ * times), CSV (US times, byte-order mark, CRLF), mbox, diary, chat log and a chat app's JSON array,
+ * each with its own column map or importer options and `time` options, and no pre-processing. Expected values: pandas 1.5.3,
  * zoneinfo (IANA tz) and statsmodels 0.13.5 in test/reference/multi-source-study/make-expected.py,
  * which reads the same export files on its own and wrote expected.json (regenerate with
  * /usr/bin/python3 in that folder). The test needs no Python.
@@ -69,11 +71,12 @@ beforeAll(() => {
 }, 120_000);
 
 describe('lexichron run on an invented multi-source study (reference: pandas + zoneinfo, make-expected.py)', () => {
-  it('the exports are as they come: a CSV with byte-order mark, CRLF and US times, a CRLF diary, U+202F before AM/PM, NA ratings', () => {
+  it('the exports are as they come: US and German times, a CSV with byte-order mark and CRLF, a CRLF diary, U+202F before AM/PM, NA ratings', () => {
     const csv = readFileSync(resolve(fixture, 'us-site.csv'), 'utf8');
     expect(csv.charCodeAt(0)).toBe(0xfeff);
     expect(csv).toContain('\r\n');
     expect(csv).toMatch(/\d{2}\/\d{2}\/2026 \d{1,2}:\d{2} [AP]M/);
+    expect(readFileSync(resolve(fixture, 'lab-ema.tsv'), 'utf8')).toMatch(/\t\d{2}\.\d{2}\.2026 \d{2}:\d{2}\t/);
     expect(readFileSync(resolve(fixture, 'p04-diary.txt'), 'utf8')).toContain('\r\n');
     expect(readFileSync(resolve(fixture, 'p07-chat.txt'), 'utf8')).toContain('\u202fPM - ');
     expect(readFileSync(resolve(fixture, 'ratings.csv'), 'utf8')).toContain(',NA');

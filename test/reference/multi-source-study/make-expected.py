@@ -2,7 +2,9 @@
 """Expected values for the invented multi-source study in test/fixtures/multi-source-study,
 computed from the export files themselves, independently of lexichron:
 
-* reading: the JSON Lines export with pandas (epoch milliseconds); the US-site CSV with pandas
+* reading: the JSON Lines export with pandas (epoch milliseconds); the lab TSV with pandas
+  (`%d.%m.%Y %H:%M` in Europe/Berlin); the messaging app's JSON array with pandas (times with
+  offsets, only the handle p08_river); the US-site CSV with pandas
   (`%m/%d/%Y %I:%M %p`, localized in America/Chicago, a repeated hour read as standard time, i.e.
   the later instant); the mbox with Python's `mailbox` and `email` modules (only mails whose From
   holds p03@example.org; quoted lines, the `On ... wrote:` attribution and the signature after
@@ -93,6 +95,21 @@ def add(entry_id, person, instant, text):
 app = pd.read_json(STUDY / "app-export.jsonl", lines=True, dtype={"msg": str, "uid": str})
 for r in app.itertuples():
     add(r.msg, r.uid, pd.to_datetime(r.created_ms, unit="ms", utc=True), r.body)
+
+# Lab TSV: German wall-clock times in Berlin; no id column, so ids are `<file>:<line>`.
+lab = pd.read_csv(STUDY / "lab-ema.tsv", sep="\t", dtype={"subject": str})
+walls = list(pd.to_datetime(lab["answered"], format="%d.%m.%Y %H:%M"))
+for i, (r, t) in enumerate(zip(lab.itertuples(), localize(walls, "Europe/Berlin", later=False))):
+    add(f"lab-ema.tsv:{i + 2}", r.subject, t, r.free_text)
+
+# Messaging app's JSON array: times carry their offsets; ids are `<file>:<record number>`; only p08_river's own.
+app_messages = pd.read_json(STUDY / "p08-messages.json", orient="records", dtype={"handle": str, "timestamp_iso": str})
+for i, r in enumerate(app_messages.itertuples(), start=1):
+    if r.handle != "p08_river":
+        dropped["third_party"] += 1
+        third_party_ids.append(f"p08-messages.json:{i}")
+        continue
+    add(f"p08-messages.json:{i}", "p08", pd.Timestamp(datetime.fromisoformat(r.timestamp_iso)), r.message)
 
 # US-site CSV: US wall-clock times in Chicago; the repeated 1 AM hour read as the later instant.
 site = pd.read_csv(STUDY / "us-site.csv", dtype={"record_no": str, "participant_code": str}, encoding="utf-8-sig")
