@@ -7,8 +7,8 @@ computed from the export files themselves, independently of lexichron:
   offsets, only the handle p08_river); the US-site CSV with pandas
   (`%m/%d/%Y %I:%M %p`, localized in America/Chicago, a repeated hour read as standard time, i.e.
   the later instant); the mbox with Python's `mailbox` and `email` modules (only mails whose From
-  holds p03@example.org; quoted lines, the `On ... wrote:` attribution and the signature after
-  `-- ` removed); the diary and the chat log with regular expressions (dated headings, `HH:MM - `
+  holds p03@example.org; text/plain, or else the HTML part's text without its <blockquote>;
+  quoted lines, the `On ... wrote:` attribution and the signature after `-- ` removed); the diary and the chat log with regular expressions (dated headings, `HH:MM - `
   notes, untimed text at 12:00; chat messages of `Casey Quill` only, continuation lines joined,
   a dated line without `Name: ` a system line). Local wall-clock times are localized twice, by
   pandas `tz_localize(ambiguous=...)` and by zoneinfo with `fold`, and the two must agree.
@@ -33,6 +33,7 @@ computed from the export files themselves, independently of lexichron:
 Writes expected.json and versions.txt. Run: /usr/bin/python3 make-expected.py (in this folder).
 """
 import json
+from html import unescape
 import mailbox
 import platform
 import re
@@ -122,6 +123,18 @@ lines = (STUDY / "p03-mail.mbox").read_text(encoding="utf-8").split("\n")
 separators = [i + 1 for i, line in enumerate(lines) if line.startswith("From ") and (i == 0 or lines[i - 1] == "")]
 messages = list(mailbox.mbox(str(STUDY / "p03-mail.mbox")))
 assert len(messages) == len(separators)
+def mail_text(msg):
+    """text/plain when there is one; otherwise the HTML part's text: the <blockquote> (the other
+    person's words) removed, tags turned into line breaks, entities decoded."""
+    parts = [p for p in msg.walk() if not p.is_multipart()]
+    plain = [p for p in parts if p.get_content_type() == "text/plain"]
+    if plain:
+        return plain[0].get_payload(decode=True).decode("utf-8")
+    html = [p for p in parts if p.get_content_type() == "text/html"][0].get_payload(decode=True).decode("utf-8")
+    html = re.sub(r"<blockquote>.*?</blockquote>", "", html, flags=re.S)
+    return unescape(re.sub(r"<[^>]+>", "\n", html))
+
+
 for line_no, msg in zip(separators, messages):
     senders = [addr.lower() for _, addr in getaddresses(msg.get_all("From", []))]
     entry_id = f"p03-mail.mbox:{line_no}"
@@ -129,7 +142,7 @@ for line_no, msg in zip(separators, messages):
         dropped["third_party"] += 1
         third_party_ids.append(entry_id)
         continue
-    body = msg.get_payload(decode=True).decode("utf-8")
+    body = mail_text(msg)
     own = []
     for line in body.split("\n"):
         if line == "-- ":
