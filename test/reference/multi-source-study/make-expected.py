@@ -77,7 +77,7 @@ def localize(walls, zone, later):
     by_zoneinfo = []
     for w in walls:
         a, b = w.replace(tzinfo=z, fold=0), w.replace(tzinfo=z, fold=1)
-        assert a.astimezone(timezone.utc).astimezone(z).replace(tzinfo=None) == w or b.utcoffset() == a.utcoffset(), f"{w} does not exist in {zone}"
+        assert a.astimezone(timezone.utc).astimezone(z).replace(tzinfo=None) == w, f"{w} does not exist in {zone}"
         by_zoneinfo.append((b if later else a).astimezone(timezone.utc))
     assert [t.to_pydatetime() for t in by_pandas] == by_zoneinfo, "pandas and zoneinfo disagree"
     return list(by_pandas)
