@@ -139,7 +139,7 @@ export async function* readDiary(lines: AsyncIterable<NumberedLine> | Iterable<N
     const text = p.parts.join('\n').trim();
     if (text === '') return importReject(file, p.line, 'diary_empty_entry', p.time === undefined ? 'the heading is followed by no text' : 'the timed line is followed by no text');
     const entry: RawEntry = { id: `${file}:${p.line}`, person: options.person, instant: resolved.instant, zone: options.zone, offsetMinutes: resolved.offsetMinutes, text, source: { file, line: p.line } };
-    return p.notes.size > 0 ? { kind: 'entry', entry, notes: [...p.notes] } : { kind: 'entry', entry };
+    return p.notes.size > 0 ? { kind: 'entry', entry, notes: [...p.notes], wallClock: true } : { kind: 'entry', entry, wallClock: true };
   };
   for await (const { line, text, repaired } of lines) {
     const m = options.heading.exec(text);
