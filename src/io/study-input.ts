@@ -51,6 +51,7 @@ export function studyInput(input: StudyInput, path: string, zones: ZoneTable, ti
         timeField: input.timeField,
         textField: input.textField,
         timeFormat: input.timeFormat ?? input.time?.format,
+        epoch: time.epoch,
         dstGap: time.gap,
         dstOverlap: time.overlap,
         ...(time.window ? { window: time.window } : {}),

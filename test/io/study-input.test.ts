@@ -23,3 +23,17 @@ describe('studyInput reads a donated export of a person who moves in the zone of
     ]);
   });
 });
+
+describe('studyInput passes a chat-table export its own time options', () => {
+  it('reads epoch numbers in the unit of the input\'s time.epoch, not by size: 1792387500 as milliseconds is 1970-01-21T17:53:07.500Z (ECMA-262 time values)', async () => {
+    const path = tmp.write('messages.csv', 'from,time,text\np08_river,1792387500,Late night walk home.\n');
+    const zones = buildZoneTable([{ person: 'p08', zone: 'America/Chicago', line: 2 }], 'zones.csv');
+    const read = async (epoch: 'auto' | 'ms'): Promise<string[]> => {
+      const input = studyInput({ path: 'messages.csv', format: 'chat-table', person: 'p08', senders: ['p08_river'] }, path, zones, { ...DEFAULT_TIME_OPTIONS, epoch }, '$.inputs[0]');
+      const items = await collect(await (input.items as NonNullable<typeof input.items>)());
+      return items.map((i) => (i.kind === 'entry' ? new Date(i.entry.instant).toISOString() : i.kind));
+    };
+    expect(await read('auto')).toEqual(['2026-10-19T05:25:00.000Z']);
+    expect(await read('ms')).toEqual(['1970-01-21T17:53:07.500Z']);
+  });
+});
