@@ -8,7 +8,8 @@ import { tempFolder } from '../support/temp-files.js';
 /**
  * End to end: `lexichron run study.json` on the invented multi-source study of
  * test/fixtures/multi-source-study (8 persons in Europe/Berlin and America/Chicago, 21 local days
- * across the EU clock change of 2026-10-25 and the US one of 2026-11-01, a dropout, ratings with NA)
+ * across the EU clock change of 2026-10-25 and the US one of 2026-11-01, a dropout, a person who
+ * moves from Berlin to Chicago, ratings with NA)
  * with one export of each kind lexichron reads, as it comes: JSON Lines (epoch ms), TSV (German
  * times), CSV (US times, byte-order mark, CRLF), mbox, diary, chat log and a chat app's JSON array,
  * each with its own column map or importer options and `time` options, and no pre-processing. Expected values: pandas 1.5.3,
@@ -143,6 +144,18 @@ describe('lexichron run on an invented multi-source study (reference: pandas + z
     const after = events.find((r) => r.person === 'p02' && r.time_local === '2026-10-25T04:10:00.000+01:00');
     expect(after?.local_date, '04:10 CET is after the 04:00 day start').toBe('2026-10-25');
     expect(event(after?.entry_id ?? '')?.bin_start).toBe('2026-10-25T04:00:00+01:00');
+  });
+
+  it('places the diary of a person who moves (Europe/Berlin, then America/Chicago from 2026-11-04) in the zone of each date: the day before the move lasts 31 hours', () => {
+    const p04 = series.filter((r) => r.person === 'p04');
+    expect(p04.find((r) => r.local_date === '2026-11-03')).toMatchObject({ bin_start: '2026-11-03T04:00:00+01:00', bin_hours: '31' });
+    expect(p04.find((r) => r.local_date === '2026-11-04')?.bin_start).toBe('2026-11-04T04:00:00-06:00');
+    const after = scores.filter((r) => r.person === 'p04' && r.time_local >= '2026-11-04');
+    expect(after.length).toBeGreaterThan(3);
+    for (const r of after) {
+      expect(r.zone, r.entry_id).toBe('America/Chicago');
+      expect(r.time_local.endsWith('-06:00'), r.entry_id).toBe(true);
+    }
   });
 
   it('shows the dropout\'s last 5 days as after_last_entry and the late starter\'s first 2 as before_first_entry', () => {

