@@ -1,6 +1,6 @@
 import { basename } from 'node:path';
 import { inputError, usageError } from '../errors.js';
-import { DEFAULT_TIME_OPTIONS, type TimeOptions } from '../ingest/parse-instant.js';
+import { DEFAULT_TIME_OPTIONS, type EpochUnit, type TimeOptions } from '../ingest/parse-instant.js';
 import type { TimeWindow } from '../ingest/time-window.js';
 import { readRecords } from '../ingest/read-records.js';
 import { tableFile } from './table-file.js';
@@ -43,6 +43,8 @@ export interface ImportSourceSpec {
   timeField?: string;
   textField?: string;
   timeFormat?: string;
+  /** chat-table: unit of epoch-number times (default `auto`: told apart by size). */
+  epoch?: EpochUnit;
   /** Daylight-saving policies for wall-clock times (default: reject both). */
   dstGap?: WallClockPolicy;
   dstOverlap?: WallClockPolicy;
@@ -98,7 +100,7 @@ export async function openImportSource(spec: ImportSourceSpec): Promise<OpenedIm
     }
     case 'chat-table': {
       const senders = requireSenders(spec);
-      const time: TimeOptions = { ...DEFAULT_TIME_OPTIONS, gap: dst.gap, overlap: dst.overlap, ...(spec.timeFormat ? { format: spec.timeFormat } : {}), ...(spec.window ? { window: spec.window } : {}) };
+      const time: TimeOptions = { ...DEFAULT_TIME_OPTIONS, gap: dst.gap, overlap: dst.overlap, ...(spec.epoch ? { epoch: spec.epoch } : {}), ...(spec.timeFormat ? { format: spec.timeFormat } : {}), ...(spec.window ? { window: spec.window } : {}) };
       const options = { file, person: spec.person, zone: spec.zone, senders, time, senderField: spec.senderField, timeField: spec.timeField, textField: spec.textField };
       return { items: readChatTable(readRecords(tableFile(spec.path)), options) };
     }

@@ -1,4 +1,5 @@
 import { usageError } from '../errors.js';
+import { applyZoneTable } from '../ingest/import/apply-zone-table.js';
 import { importEntries } from '../ingest/import/import-entries.js';
 import { zoneAtInstant, type ZoneTable } from '../ingest/zone-table.js';
 import type { TimeOptions } from '../ingest/parse-instant.js';
@@ -12,7 +13,8 @@ import type { ScoreInput } from './run-score.js';
  * JSON) with its column mapping, or a donated export (mbox, diary, chat-lines, chat-table) read
  * through its importer, with duplicates and bursts handled and third parties' messages dropped
  * before scoring. `path` is already resolved against the study folder; `time` is this input's
- * time options (the study's, with the input's own `time` over them).
+ * time options (the study's, with the input's own `time` over them). An export is read in the
+ * person's first zone and each entry then placed in the zone in force for it (applyZoneTable).
  */
 export function studyInput(input: StudyInput, path: string, zones: ZoneTable, time: TimeOptions, where: string): ScoreInput {
   const format = input.format;
@@ -49,11 +51,13 @@ export function studyInput(input: StudyInput, path: string, zones: ZoneTable, ti
         timeField: input.timeField,
         textField: input.textField,
         timeFormat: input.timeFormat ?? input.time?.format,
+        epoch: time.epoch,
         dstGap: time.gap,
         dstOverlap: time.overlap,
         ...(time.window ? { window: time.window } : {}),
       });
-      return importEntries(opened.items, { ...(time.window ? { window: time.window } : {}), ...(input.dedupe ? { dedupe: {} } : {}), ...(input.mergeBurstMinutes !== undefined ? { mergeBurstMinutes: input.mergeBurstMinutes } : {}) });
+      // A person who moves: each entry in the zone in force for it, as table rows are read.
+      return importEntries(applyZoneTable(opened.items, zones, person, { gap: time.gap, overlap: time.overlap }), { ...(time.window ? { window: time.window } : {}), ...(input.dedupe ? { dedupe: {} } : {}), ...(input.mergeBurstMinutes !== undefined ? { mergeBurstMinutes: input.mergeBurstMinutes } : {}) });
     },
   };
 }

@@ -21,10 +21,11 @@ export type EntryNote = 'mojibake' | 'windows_1252' | 'undecodable_bytes' | 'tim
 /**
  * What an importer yields for each unit it reads (message, chat line, diary entry):
  * an entry, a reject with its reason, or a drop. A drop never carries text, so third-party
- * words cannot leak into any output.
+ * words cannot leak into any output. `wallClock` marks an entry whose time was written without
+ * an offset and read in the person's zone (see applyZoneTable).
  */
 export type ImportItem =
-  | { kind: 'entry'; entry: RawEntry; notes?: EntryNote[] }
+  | { kind: 'entry'; entry: RawEntry; notes?: EntryNote[]; wallClock?: boolean }
   | { kind: 'reject'; diagnostic: Diagnostic }
   | { kind: 'drop'; reason: DropReason; source: SourceRef };
 

@@ -1,5 +1,6 @@
 import { simpleParser } from 'mailparser';
 import type { RawEntry } from '../../types.js';
+import { htmlBodyText } from './html-body-text.js';
 import { importReject, type EntryNote, type ImportItem } from './import-item.js';
 import { mailHeader, readMailHeaders } from './read-mail-headers.js';
 import { normalizeAddress, parseAddressList } from './parse-address-list.js';
@@ -44,7 +45,8 @@ function truncation(raw: Buffer, bodyStart: number | undefined, contentType: str
  * 3. Date (section 3.6.1) is read with parseMailDate, keeping its offset: missing → `mail_no_date`,
  *    unreadable → `mail_bad_date`.
  * 4. The body is decoded by mailparser (MIME per RFC 2045–2049, quoted-printable and base64, charsets,
- *    RFC 2047 encoded words); text/plain is preferred, otherwise mailparser's text rendering of the HTML.
+ *    RFC 2047 encoded words); text/plain is preferred, otherwise mailparser's text rendering of the HTML
+ *    (also for an HTML part inside a multipart container without text/plain, see htmlBodyText).
  *    Double-encoded UTF-8 is repaired; replacement characters are noted (`undecodable_bytes`).
  * 5. Quotes, forwarded blocks and the signature are removed by stripMailQuotes; nothing left → `mail_empty`.
  */
@@ -69,6 +71,14 @@ export async function parseMailMessage(raw: Buffer, context: MailContext): Promi
   try {
     const parsed = await simpleParser(raw, { skipImageLinks: true, skipTextLinks: true, skipTextToHtml: true, keepCidLinks: true });
     text = parsed.text ?? '';
+    if (text.trim() === '' && typeof parsed.html === 'string' && parsed.html.trim() !== '') {
+      // An HTML body without a text/plain part inside a multipart container: mailparser leaves it as HTML.
+      const rendered = await htmlBodyText(parsed.html);
+      if (rendered.error !== undefined && rendered.text.trim() === '') {
+        return importReject(file, line, 'mail_unreadable', `the HTML body cannot be turned into text (${diagnosticText(rendered.error, 80)}); the message is left out`);
+      }
+      text = rendered.text;
+    }
   } catch (error) {
     return importReject(file, line, 'mail_unreadable', `the message cannot be decoded (${diagnosticText((error as Error).name || 'error', 60)} in the MIME decoder); check that the file is an mbox export`);
   }

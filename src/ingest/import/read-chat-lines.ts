@@ -83,7 +83,7 @@ export async function* readChatLines(lines: AsyncIterable<NumberedLine> | Iterab
     const text = p.parts.join('\n').trim();
     if (text === '') return importReject(file, p.line, 'empty_text', 'the message holds no text');
     const entry: RawEntry = { id: `${file}:${p.line}`, person: options.person, instant: time.instant, zone: options.zone, offsetMinutes: time.offsetMinutes, text, source: { file, line: p.line } };
-    return p.notes.size > 0 ? { kind: 'entry', entry, notes: [...p.notes] } : { kind: 'entry', entry };
+    return p.notes.size > 0 ? { kind: 'entry', entry, notes: [...p.notes], wallClock: true } : { kind: 'entry', entry, wallClock: true };
   };
   for await (const numbered of lines) {
     // a line that holds another message's header is read as two lines (see splitEmbeddedHeaders)

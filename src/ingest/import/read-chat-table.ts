@@ -100,6 +100,7 @@ export async function* readChatTable(records: AsyncIterable<RecordItem>, options
     const entry: RawEntry = { id: `${file}:${line}`, person: options.person, instant: time.instant, zone: options.zone, offsetMinutes: time.offsetMinutes, text, source: item.source };
     const notes: EntryNote[] = repaired !== raw ? ['mojibake'] : [];
     if (time.ok && time.fallback) notes.push('time_iso_fallback');
-    yield notes.length > 0 ? { kind: 'entry', entry, notes } : { kind: 'entry', entry };
+    const wallClock = time.hadOffset ? {} : { wallClock: true };
+    yield notes.length > 0 ? { kind: 'entry', entry, notes, ...wallClock } : { kind: 'entry', entry, ...wallClock };
   }
 }

@@ -68,6 +68,9 @@ export function compileDiaryEntryTime(pattern: string): RegExp {
   return compileWithGroup(pattern, 'entry time', 'time', EXAMPLE_DIARY_ENTRY_TIME, '^(\\d{1,2}:\\d{2}) - ');
 }
 
+/** Longest line tried as a heading the pattern missed (dated headings are short; longer lines are text). */
+const MISSED_HEADING_MAX_CHARS = 80;
+
 /** True when a luxon format holds a time-of-day token (outside quoted literals). */
 function hasClockTime(format: string): boolean {
   return /[Hhm]|t|T/.test(format.replace(/'[^']*'/g, ''));
@@ -85,18 +88,38 @@ function hasClockTime(format: string): boolean {
  * (with luxon's explanation), an entry time that does not fit `entryTimeFormat` → `diary_bad_time`,
  * an entry without text → `diary_empty_entry`, text before the first heading → one
  * `diary_before_first_heading`, a local time in a daylight-saving gap or overlap as `dst` says.
+ * A line under a heading that is, as a whole, a valid date in `dateFormat` (at most 80 characters)
+ * but does not match `heading` is a heading the pattern missed (a month name with a letter
+ * beyond a–z and `\w` in the pattern, say): the text under it, and each timed entry, is rejected
+ * as `diary_unmatched_heading` instead of being dated to the heading before.
  */
 export async function* readDiary(lines: AsyncIterable<NumberedLine> | Iterable<NumberedLine>, options: DiaryOptions): AsyncGenerator<ImportItem> {
   const withTime = hasClockTime(options.dateFormat);
+  const locale = options.locale ?? 'en';
+  /** A short line that is, as a whole, a valid date in the heading's format: a heading the pattern does not match (a year or day needs a digit). */
+  const digits = /[yd]/.test(options.dateFormat.replace(/'[^']*'/g, ''));
+  const readsAsHeadingDate = (text: string): boolean => {
+    const t = text.trim();
+    if (t.length === 0 || t.length > MISSED_HEADING_MAX_CHARS || (digits && !/\d/.test(t))) return false;
+    return DateTime.fromFormat(t, options.dateFormat, { zone: 'UTC', locale }).isValid;
+  };
   const fallback = options.defaultTime ?? { hour: 12, minute: 0 };
   const timeFormat = options.entryTimeFormat ?? DEFAULT_DIARY_ENTRY_TIME_FORMAT;
   /** An entry being collected: its heading's date, and its own clock time when a timed line started it. */
-  type Pending = { line: number; date: string; time?: string; parts: string[]; notes: Set<EntryNote> };
+  type Pending = { line: number; date: string; time?: string; parts: string[]; notes: Set<EntryNote>; unmatched?: boolean };
   let pending: Pending | undefined;
   let before = 0;
   let beforeStart = 0;
   const finish = (p: Pending): ImportItem => {
     const { file } = options;
+    if (p.unmatched) {
+      return importReject(
+        file,
+        p.line,
+        'diary_unmatched_heading',
+        `${p.time === undefined ? 'this line' : 'this entry comes under a line that'} reads as a date in the format \`${options.dateFormat}\` but does not match the heading pattern; the text under it is left out rather than dated to the heading before. Fix --heading (heading in a study file): \\w and \\b know only the letters a–z, so a month or weekday such as \`März\` needs \\p{L}, e.g. \`^(\\p{L}+, \\d{1,2}\\. \\p{L}+ \\d{4})$\``,
+      );
+    }
     const dt = DateTime.fromFormat(p.date.trim(), options.dateFormat, { zone: 'UTC', locale: options.locale ?? 'en' });
     if (!dt.isValid) {
       return importReject(file, p.line, 'diary_bad_date', `the heading date (${describeValue(p.date.trim())}) does not fit the format \`${options.dateFormat}\` or does not exist (${omitValue(dt.invalidExplanation ?? dt.invalidReason ?? 'no reason given', p.date)})`);
@@ -116,7 +139,7 @@ export async function* readDiary(lines: AsyncIterable<NumberedLine> | Iterable<N
     const text = p.parts.join('\n').trim();
     if (text === '') return importReject(file, p.line, 'diary_empty_entry', p.time === undefined ? 'the heading is followed by no text' : 'the timed line is followed by no text');
     const entry: RawEntry = { id: `${file}:${p.line}`, person: options.person, instant: resolved.instant, zone: options.zone, offsetMinutes: resolved.offsetMinutes, text, source: { file, line: p.line } };
-    return p.notes.size > 0 ? { kind: 'entry', entry, notes: [...p.notes] } : { kind: 'entry', entry };
+    return p.notes.size > 0 ? { kind: 'entry', entry, notes: [...p.notes], wallClock: true } : { kind: 'entry', entry, wallClock: true };
   };
   for await (const { line, text, repaired } of lines) {
     const m = options.heading.exec(text);
@@ -129,8 +152,14 @@ export async function* readDiary(lines: AsyncIterable<NumberedLine> | Iterable<N
     if (pending && timed) {
       // The heading's own text before its first timed line is an entry only when there is some.
       if (pending.time !== undefined || pending.parts.join('').trim() !== '') yield finish(pending);
-      pending = { line, date: pending.date, time: timed.groups?.time ?? timed[1] ?? '', parts: [text.slice(timed.index + timed[0].length)], notes: new Set() };
+      pending = { line, date: pending.date, time: timed.groups?.time ?? timed[1] ?? '', parts: [text.slice(timed.index + timed[0].length)], notes: new Set(), unmatched: pending.unmatched };
       if (repaired) pending.notes.add(repaired);
+      continue;
+    }
+    if (pending && readsAsHeadingDate(text)) {
+      // A dated heading the pattern missed: what follows is not the previous day's.
+      yield finish(pending);
+      pending = { line, date: pending.date, parts: [], notes: new Set(), unmatched: true };
       continue;
     }
     if (pending) {

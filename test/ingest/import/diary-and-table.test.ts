@@ -19,6 +19,36 @@ describe('readDiary reads plain-text diaries with dated headings', () => {
       { id: 'diary.txt:4', local: '2025-03-30T12:00', offset: 120, text: 'Clocks changed.\nTired.' },
     ]);
   });
+  it('rejects the text under a dated line the heading pattern misses (\\w does not match the ä of März) as diary_unmatched_heading, instead of dating it to the day before', async () => {
+    const heading = compileDiaryHeading('^(\\w+, \\d{1,2}\\. \\w+ \\d{4})$');
+    const text = [
+      'Samstag, 28. Februar 2026', // 1
+      'Kalt heute.', // 2
+      '', // 3
+      'Sonntag, 1. März 2026', // 4: a heading the pattern misses
+      'Frühling kommt.', // 5
+      '08:15 - Kaffee am Fenster.', // 6
+      'Mittwoch, 1. April 2026', // 7
+      'Regen.', // 8
+    ].join('\n');
+    const options = { ...base, heading, dateFormat: 'cccc, d. MMMM yyyy', locale: 'de', entryTime: compileDiaryEntryTime('^(\\d{2}:\\d{2}) - ') };
+    const items = await collect(readDiary(lines(text), options));
+    expect(entries(items)).toEqual([
+      { id: 'diary.txt:1', local: '2026-02-28T12:00', offset: 60, text: 'Kalt heute.' },
+      { id: 'diary.txt:7', local: '2026-04-01T12:00', offset: 120, text: 'Regen.' },
+    ]);
+    expect(others(items)).toEqual(['diary_unmatched_heading', 'diary_unmatched_heading']);
+    const rejects = items.flatMap((i) => (i.kind === 'reject' ? [i.diagnostic] : []));
+    expect(rejects.map((d) => d.source.line)).toEqual([4, 6]);
+    expect(rejects[0]?.message).toContain('does not match the heading pattern');
+    expect(rejects[0]?.message).toContain('\\p{L}');
+    expect(rejects[0]?.message).not.toContain('Sonntag');
+  });
+  it('keeps ordinary lines that merely hold a date among other words as text of the entry', async () => {
+    const items = await collect(readDiary(lines('# 2025-03-01\nBack on 2025-03-02 we met.\n2025-03-03 is the deadline.'), { ...base, heading: compileDiaryHeading('^# (\\d{4}-\\d{2}-\\d{2})$'), dateFormat: 'yyyy-MM-dd' }));
+    expect(others(items)).toEqual([]);
+    expect(entries(items).map((e) => e.text)).toEqual(['Back on 2025-03-02 we met.\n2025-03-03 is the deadline.']);
+  });
   it('reads a custom heading with month names in a locale and a clock time', async () => {
     const heading = compileDiaryHeading('^== (?<date>.+) ==$');
     const items = await collect(readDiary(lines('== lundi 3 mars 2025, 21h15 ==\nJe suis content.'), { ...base, heading, dateFormat: "cccc d MMMM yyyy', 'HH'h'mm", locale: 'fr' }));

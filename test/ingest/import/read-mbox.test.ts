@@ -103,6 +103,29 @@ describe('readMbox keeps the participant\'s own messages only', () => {
     expect(out[1]).not.toContain('quoted from Bob');
   });
 
+  it('reads an HTML-only body inside a multipart container (RFC 2046 multipart/alternative, or multipart/mixed with an attachment) as text, without the quoted reply', async () => {
+    const html = '<div>Walked home, felt calm.</div><div><br></div><div class="quote">On Mon, 3 Mar 2025 at 08:30, Bob &lt;bob@example.org&gt; wrote:<blockquote>Horrible news from Bob.</blockquote></div>';
+    const alt = message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', `--XX\nContent-Type: text/html; charset=utf-8\n\n${html}\n--XX--`, 'MIME-Version: 1.0\nContent-Type: multipart/alternative; boundary="XX"\n');
+    const mixed = message(
+      'ann@example.org',
+      'Mon, 3 Mar 2025 10:00:00 +0100',
+      `--YY\nContent-Type: text/html; charset=utf-8\nContent-Transfer-Encoding: quoted-printable\n\n<p>Photo of the lake, so happy=\n today.</p>\n--YY\nContent-Type: image/png; name="lake.png"\nContent-Disposition: attachment; filename="lake.png"\nContent-Transfer-Encoding: base64\n\niVBORw0KGgo=\n--YY--`,
+      'MIME-Version: 1.0\nContent-Type: multipart/mixed; boundary="YY"\n',
+    );
+    const items = await read(alt, mixed);
+    expect(codes(items)).toEqual([]);
+    expect(texts(items)).toEqual(['Walked home, felt calm.', 'Photo of the lake, so happy today.']);
+  });
+
+  it('rejects an HTML body that cannot be rendered as text (nested deeper than mailparser renders) as mail_unreadable, not as mail_empty', async () => {
+    const deep = `${'<div>'.repeat(1100)}Deep words.${'</div>'.repeat(1100)}`;
+    const single = message('ann@example.org', 'Mon, 3 Mar 2025 09:00:00 +0100', deep, 'MIME-Version: 1.0\nContent-Type: text/html; charset=utf-8\n');
+    const mixed = message('ann@example.org', 'Mon, 3 Mar 2025 10:00:00 +0100', `--YY\nContent-Type: text/html; charset=utf-8\n\n${deep}\n--YY--`, 'MIME-Version: 1.0\nContent-Type: multipart/mixed; boundary="YY"\n');
+    const items = await read(single, mixed);
+    expect(codes(items)).toEqual(['mail_unreadable', 'mail_unreadable']);
+    expect(items[0]?.kind === 'reject' && items[0].diagnostic.message).toMatch(/HTML body cannot be turned into text \(HTML nested deeper than 1000 levels\)/);
+  });
+
   it('strips the reply attribution, > quotes, a forwarded block and the signature', async () => {
     const body = 'Thanks, that cheered me up!\n\nOn Mon, 3 Mar 2025 at 08:00, Bob <bob@example.org> wrote:\n> Here is a joke.\n> Bye\n\n-- \nAnn\nPhone 555';
     const fwd = 'See below.\n\n---------- Forwarded message ---------\nFrom: Odalys <c@example.org>\nDate: Sun, 2 Mar 2025\n\nOdalys\'s private news.';
