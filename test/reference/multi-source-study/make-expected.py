@@ -24,8 +24,8 @@ computed from the export files themselves, independently of lexichron:
   against pandas `resample('D', offset='4h')` on a tz-aware local index. Per bin: entries, words
   and the entry mean of the AFINN sums (lexichron's default aggregation of `sum` categories); a
   day without entries is `before_first_entry`, `after_last_entry` or `no_text`.
-* ratings: local times read in the zone of their date; `NA` is missing; each prompt goes to its
-  person's bin, and a bin's rating is the mean of its non-missing values. A pair is a bin with a text score and that rating.
+* ratings: local times read in the zone of their date; `NA` is missing; a prompt with every rating
+  missing is dropped (not a self-report, never paired); each other prompt goes to its person's bin, and a bin's rating is the mean of its non-missing values. A pair is a bin with a text score and that rating.
 * statistics (as README "What is computed for each text score x rating" defines them): pooled
   Pearson r; between persons, Pearson r of person means over complete pairs (one point per
   person); within persons, the repeated-measures correlation (Bakdash & Marusich 2017), computed
@@ -261,6 +261,8 @@ ratings = pd.read_csv(STUDY / "ratings.csv", dtype={"pid": str}, na_values=["NA"
 walls = list(pd.to_datetime(ratings["prompted_at"], format="%Y-%m-%d %H:%M"))
 instants = [localize([w], zone_on(p, w.date()), later=False)[0] for p, w in zip(ratings["pid"], walls)]
 ratings["local_date"] = [bin_of(p, t.to_pydatetime()).isoformat() for p, t in zip(ratings["pid"], instants)]
+# A prompt whose every rating is missing is not a self-report: it makes no row and no pair.
+ratings = ratings[ratings[RATINGS].notna().any(axis=1)]
 per_bin = ratings.groupby(["pid", "local_date"]).agg(reports=("pid", "size"), mood=("mood", "mean"), energy=("energy", "mean")).reset_index()
 merged = bins_frame.merge(per_bin.rename(columns={"pid": "person"}), on=["person", "local_date"], how="inner")
 
