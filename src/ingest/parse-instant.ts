@@ -150,7 +150,8 @@ function bad(value: string, what: string): InstantResult {
  * ISO 8601 calendar date-times, with `T` or a space, optional seconds and fraction, and an
  * optional `Z` or `±hh:mm` offset; other ISO 8601 forms through luxon; or `options.format`.
  * With `options.format`, a time that does not match it but is an RFC 3339 / ISO 8601 time is
- * read as such and marked `fallback` (RFC 3339 section 5.6; ISO 8601-1:2019 section 5.4).
+ * read as such and marked `fallback` (RFC 3339 section 5.6; ISO 8601-1:2019 section 5.4), as is
+ * an epoch number when `options.epoch` names its unit.
  * A time with an offset is taken as written (`hadOffset`); a time without one is a wall-clock
  * time in `zone`, and a daylight-saving gap or overlap is resolved by `options.gap`/`overlap`.
  * A leap second (`:60`, RFC 3339 section 5.7) is read as the first instant of the next minute,
@@ -192,15 +193,17 @@ type ReadResult = { ok: true; instant: number; offsetMinutes: number | undefined
  * parseInstant before the range checks; an epoch number's offset is left undefined (looked up after the checks).
  *
  * With a format, a time that does not match it is read as RFC 3339 / ISO 8601 (with or without
- * an offset, by the same rules as without a format) and marked `fallback`; an epoch number is not
- * (with a format given, a bare number is more likely a mistake than a time).
+ * an offset, by the same rules as without a format) and marked `fallback`; an epoch number only
+ * when its unit is given (`epoch` not `auto`): with a format and a unit left to guess, a bare
+ * number is more likely a mistake than a time.
  */
 function readInstant(raw: string, zone: string, options: TimeOptions): ReadResult {
   const value = raw.trim();
   if (value === '') return { ok: false, code: 'missing_time', message: 'the time is empty; every row needs a time' };
   if (options.format) {
     const formatted = parseWithFormat(value, zone, options);
-    if (formatted.ok || EPOCH.test(value)) return formatted;
+    if (formatted.ok) return formatted;
+    if (EPOCH.test(value)) return options.epoch === 'auto' ? formatted : { ok: true, instant: epochMillis(value, options.epoch), offsetMinutes: undefined, hadOffset: true, fallback: true };
     const general = readIsoInstant(value, zone, options);
     if (general.ok) return { ...general, fallback: true };
     // An RFC 3339 time that falls in a clock change keeps that reason; anything else is named by the format.

@@ -51,8 +51,17 @@ describe('an explicit time format falls back to RFC 3339 / ISO 8601', () => {
     expect(r.ok ? '' : r.message).toContain('RFC 3339');
   });
 
-  it('does not read an epoch number as a fallback: a format was given, so a bare number is not taken as a time', () => {
+  it('does not read an epoch number as a fallback when its unit is left to guess: a format was given, so a bare number is not taken as a time', () => {
     expect(parseInstant('1774764900', 'UTC', US)).toMatchObject({ ok: false, code: 'bad_time' });
+  });
+
+  it('reads an epoch number as a marked fallback when the epoch unit is given too (a study-wide format with one input in epoch milliseconds)', () => {
+    // 1792387500000 ms = 2026-10-19T05:25:00Z (ECMA-262 Date.UTC; 07:25 in Berlin, +02:00 by IANA tz).
+    const r = ok(parseInstant('1792387500000', 'Europe/Berlin', { ...US, epoch: 'ms' }));
+    expect(r.instant).toBe(Date.UTC(2026, 9, 19, 5, 25));
+    expect(r).toMatchObject({ offsetMinutes: 120, fallback: true, epoch: true });
+    // A number that matches the format is still read by the format.
+    expect(ok(parseInstant('202610190925', 'UTC', { ...DEFAULT_TIME_OPTIONS, format: 'yyyyMMddHHmm', epoch: 's' })).instant).toBe(Date.UTC(2026, 9, 19, 9, 25));
   });
 
   it('gives the same instant with and without a format for random RFC 3339 times (fuzz, RFC 3339 section 5.6 grammar)', () => {
