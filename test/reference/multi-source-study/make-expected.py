@@ -258,7 +258,7 @@ bins_frame = pd.DataFrame(bins)
 
 # --- ratings and pairs ----------------------------------------------------------------------
 ratings = pd.read_csv(STUDY / "ratings.csv", dtype={"pid": str}, na_values=["NA"], keep_default_na=False)
-walls = list(pd.to_datetime(ratings["prompted_at"], format="%Y-%m-%d %H:%M"))
+walls = list(pd.to_datetime(ratings["prompted_at"], format="%d/%m/%Y %H:%M"))
 instants = [localize([w], zone_on(p, w.date()), later=False)[0] for p, w in zip(ratings["pid"], walls)]
 ratings["local_date"] = [bin_of(p, t.to_pydatetime()).isoformat() for p, t in zip(ratings["pid"], instants)]
 # A prompt whose every rating is missing is not a self-report: it makes no row and no pair.
