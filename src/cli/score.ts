@@ -3,6 +3,7 @@ import { inputError, usageError } from '../errors.js';
 import { scoreWorkerCount, startScorePool } from '../io/score-pool.js';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
+import type { Diagnostic } from '../types.js';
 import { readNamesFile } from '../io/read-names-file.js';
 import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
 import { createRedactor } from '../privacy/create-redactor.js';
@@ -16,6 +17,17 @@ import { addTimeOptions, delimiterFrom, parseMaxRejects, parseWorkers, progressR
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
 
 /** `lexichron score INPUT... --lexicon NAME_OR_PATH... --out FILE` */
+/**
+ * With no --time-zone or --zones, a time written with its UTC offset is placed by that offset; the
+ * first time without one (or an epoch number) stops the run, since no zone can place it (RFC 3339
+ * section 4.2).
+ */
+function stopOnUnplacedTime(diagnostic: Diagnostic): void {
+  if (diagnostic.code !== 'no_zone') return;
+  const where = diagnostic.source ? `\`${diagnostic.source.file}\` line ${diagnostic.source.line}` : 'a row';
+  throw usageError(`No time zone given, and the entry on ${where} has a time with no UTC offset (or an epoch number): pass --time-zone ZONE (e.g. Europe/Brussels) or --zones FILE with each person's zone, or write every time with its offset (2026-03-29T08:15:00+02:00).`);
+}
+
 export function registerScore(program: Command): void {
   const command = program
     .command('score')
@@ -36,9 +48,6 @@ export function registerScore(program: Command): void {
   command.addOption(new Option('--count-rate <unit>', 'unit of count categories, also written at the end of their column names: per100w (matched words per 100 words), per1000w or prop (share of words, 0–1)').choices(['per100w', 'per1000w', 'prop']).default('per100w'));
   command.addOption(new Option('--strict', 'exit with code 3 on the first rejected row\'s count (same as --max-rejects 0)'));
   command.action(async (inputs: string[], opts: Record<string, unknown>) => {
-    if (!opts.timeZone && !opts.zones) {
-      throw usageError('No time zone given: every entry needs its person\'s IANA zone, to read times without an offset and to place entries in local days; pass --time-zone ZONE (e.g. Europe/Brussels), or --zones FILE with each person\'s zone.');
-    }
     if (opts.aggregatesOnly && opts.keepText) throw usageError('--aggregates-only and --keep-text contradict each other: drop one.');
     const key = await readPseudonymKey(opts.pseudonymKeyFile as string | undefined, process.env[PSEUDONYM_KEY_ENV]);
     const redact = createRedactor({ names: await readNamesFile(opts.redactNames as string | undefined) });
@@ -80,6 +89,7 @@ export function registerScore(program: Command): void {
       ...(shard ? { shard } : {}),
       onProgress: progress.update,
       onFirstRows: restoreJitBudget,
+      ...(!opts.timeZone && !opts.zones ? { onReject: stopOnUnplacedTime } : {}),
     }).finally(progress.stop);
     process.stderr.write(`${reconciliationText(result.reconciliation)}\n`);
     process.stderr.write(`scores:  ${result.scoresPath}\nrejects: ${result.rejectsPath}\nsidecar: ${result.metaPath}\n`);

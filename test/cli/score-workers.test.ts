@@ -49,7 +49,8 @@ describe('scoring threads', () => {
     expect(none.error).toBeUndefined();
     expect(none.status, none.stderr).toBe(0);
     expect(readFileSync(tmp.path('small-out.csv'), 'utf8').split('\n')[1]).toMatch(/^e1,p1,/);
-    const usage = run(tmp.path('small.csv'), '-o', tmp.path('x.csv'));
+    tmp.write('no-offset.csv', 'id,person,time,text\ne1,p1,2026-03-01 08:00,fine\n');
+    const usage = run(tmp.path('no-offset.csv'), '-o', tmp.path('x.csv'));
     expect(usage.error).toBeUndefined();
     expect(usage.status).toBe(2);
     expect(usage.stderr).toContain('No time zone given');

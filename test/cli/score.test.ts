@@ -90,6 +90,23 @@ describe('lexichron score (command line)', () => {
     expect(run(['score', input, '--time-zone', 'Europe/Brussels', '-o', 's4.csv', '--max-rejects', '50%']).status).toBe(0);
   });
 
+  it('needs no zone when every time carries its UTC offset, and stops at the first time without one (RFC 3339 section 4.2)', () => {
+    tmp.write('offsets.csv', 'id,person,time,text\ne1,p1,2026-03-01T08:00:00+01:00,a good day\ne2,p2,2026-03-01T08:00:00-05:00,a bad day\n');
+    const placed = run(['score', tmp.path('offsets.csv'), '-o', 'offsets-out.csv']);
+    expect(placed.status, placed.stderr).toBe(0);
+    const rows = readFileSync(tmp.path('offsets-out.csv'), 'utf8').trim().split('\n').slice(1).map((l) => l.split(',').slice(0, 5));
+    // 08:00+01:00 = 07:00Z and 08:00-05:00 = 13:00Z; the zone column holds the written offset.
+    expect(rows).toEqual([
+      ['e1', 'p1', '2026-03-01T07:00:00.000Z', 'UTC+01:00', '2026-03-01T08:00:00.000+01:00'],
+      ['e2', 'p2', '2026-03-01T13:00:00.000Z', 'UTC-05:00', '2026-03-01T08:00:00.000-05:00'],
+    ]);
+    tmp.write('one-local.csv', 'id,person,time,text\ne1,p1,2026-03-01T08:00:00+01:00,fine\ne2,p1,2026-03-01 09:00,fine\n');
+    const stopped = run(['score', tmp.path('one-local.csv'), '-o', 'one-local-out.csv']);
+    expect(stopped.status).toBe(2);
+    expect(stopped.stderr).toContain('line 3 has a time with no UTC offset');
+    expect(stopped.stderr).toContain('--time-zone ZONE');
+  });
+
   it('exits 2 with a message for usage errors', () => {
     const noZone = run(['score', input, '-o', 'x.csv']);
     expect(noZone.status).toBe(2);
