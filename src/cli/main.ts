@@ -3,6 +3,8 @@ import { exitCodeFor, LexichronError } from '../errors.js';
 import { TOOL_VERSION } from '../version.js';
 import { raiseJitBudget, restoreJitBudget } from './jit-budget.js';
 import { diagnosticText, ERROR_MAX_CHARS } from '../privacy/diagnostic-text.js';
+import { readCoreModel } from '../io/read-core-model.js';
+import { provideCoreModel } from '../text/core-model.js';
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
@@ -46,6 +48,7 @@ export async function main(argv: string[]): Promise<number> {
   // A scoring run starts its scoring thread first thing (it loads wink-nlp's model while the
   // rest of the start-up happens; commander is imported only after it for that reason), and V8
   // optimizes less eagerly until the first scores are written (see jit-budget.ts).
+  provideCoreModel(readCoreModel);
   const scoring = argv[2] === 'score' || argv[2] === 'run';
   const scorePool = scoring ? await import('../io/score-pool.js') : undefined;
   if (scoring) raiseJitBudget();

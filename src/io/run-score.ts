@@ -13,7 +13,7 @@ import type { Pseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { csvRow } from '../report/csv.js';
 import { scoreRowFiller, scoresHeader } from '../report/score-rows.js';
 import { scoreColumns, scoredEntryFrom, type CountRate, type ScoreColumn } from '../score/score-entry.js';
-import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../score/score-text.js';
+import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../fast/score-texts.js';
 import { createScorePool, scoreWorkerCount, type ScorePool } from './score-pool.js';
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';

@@ -1,8 +1,8 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import { writeLocalTime, writeUtcTime } from '../ingest/parse-instant.js';
-import { writeAscii } from '../text/ascii-bytes.js';
+import { writeAscii } from '../fast/write-ascii.js';
 import type { ScoreColumn } from '../score/score-entry.js';
-import type { BatchScores } from '../score/score-text.js';
+import type { BatchScores } from '../fast/score-texts.js';
 import type { RawEntry } from '../types.js';
 import { csvField, isFormulaStart } from './csv.js';
 import { formatNumber, integerText } from './format-number.js';

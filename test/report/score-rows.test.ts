@@ -9,7 +9,7 @@ import { csvField } from '../../src/report/csv.js';
 import { formatNumber, integerText } from '../../src/report/format-number.js';
 import { scoreRowFiller, scoreRowText, scoresHeader } from '../../src/report/score-rows.js';
 import { scoreColumns } from '../../src/score/score-columns.js';
-import { createBatchScores } from '../../src/score/score-text.js';
+import { createBatchScores } from '../../src/fast/score-texts.js';
 import { random } from '../../src/stats/random.js';
 import type { RawEntry } from '../../src/types.js';
 

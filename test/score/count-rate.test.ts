@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { compileLexicon } from '../../src/lexicon/compile-lexicon.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
 import { scoreColumns, scoreEntry } from '../../src/score/score-entry.js';
-import { scoreTexts } from '../../src/score/score-text.js';
+import { scoreTexts } from '../../src/fast/score-texts.js';
 import { scoreRowFiller, scoreRowText } from '../../src/report/score-rows.js';
 
 // An invented two-category lexicon: one count, one sum.

@@ -1,10 +1,16 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
-import { SerialCache } from '../text/serial-cache.js';
-import { isEnglish, pieceSerialEpoch, tokenize, tokenizeEnglishShared, type Piece, type Tokens } from '../text/tokenize.js';
-import { matchLexicon, type LexiconMatch } from './match-lexicon.js';
-import { matchPlainWords } from './match-plain-words.js';
-import { VADER_COLUMNS } from './score-columns.js';
-import { scoreVader, scoreVaderPieces, scoreVaderSerials, type PieceWords, type VaderLexicon, type VaderScores } from './vader.js';
+import { matchLexicon, type LexiconMatch } from '../score/match-lexicon.js';
+import { matchPlainWords } from '../score/match-plain-words.js';
+import { VADER_COLUMNS } from '../score/score-columns.js';
+import { scoreVader } from '../score/score-vader.js';
+import type { VaderLexicon, VaderScores } from '../score/vader-types.js';
+import type { VaderWord } from '../score/vader-word.js';
+import { isEnglish } from '../text/is-english.js';
+import { tokenize } from '../text/tokenize.js';
+import type { Tokens } from '../text/tokens.js';
+import { scoreVaderPieces, scoreVaderSerials, type PieceWords } from './score-vader-pieces.js';
+import { SerialCache } from './serial-cache.js';
+import { pieceSerialEpoch, tokenizeEnglishInto, type Piece } from './tokenize-english.js';
 
 /**
  * Scores of a batch of texts as flat typed arrays (row-major), the form the scoring workers send
@@ -51,6 +57,31 @@ export function batchBuffers(batch: BatchScores): ArrayBuffer[] {
 }
 
 /**
+ * What scoreTextInto reuses from text to text within one batch (its contents are copied out at
+ * once): the English tokens (arrays never shortened, see tokenizeEnglishInto), the text's pieces
+ * and their offsets, one match result per lexicon and VADER's token buffer. Made per batch by
+ * scoreTexts, so no scoring state is shared between calls or kept at module level.
+ */
+export interface TextScratch {
+  tokens: Tokens;
+  pieces: Piece[];
+  starts: number[];
+  matches: LexiconMatch[];
+  vaderWords: VaderWord[];
+}
+
+/** A TextScratch for these lexicons. */
+export function createTextScratch(lexicons: readonly CompiledLexicon[]): TextScratch {
+  return {
+    tokens: { norm: [], raw: [], kind: [], nWords: 0, ids: [], generation: 0, size: 0, pieceCount: 0 },
+    pieces: [],
+    starts: [],
+    matches: lexicons.map((lex) => ({ sums: new Float64Array(lex.categories.length), counts: new Int32Array(lex.categories.length), negated: 0 })),
+    vaderWords: [],
+  };
+}
+
+/**
  * Scores text `i` of a batch into `out`, each text on its own (a saturating score such as VADER's
  * compound is never computed over concatenated text).
  *
@@ -66,7 +97,8 @@ export function batchBuffers(batch: BatchScores): ArrayBuffer[] {
  * was split into by the English tokenizer (listed in the first entries of `pieces` and
  * `pieceStarts`), or −1 when it was not tokenized in English.
  */
-export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): number {
+export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all', scratch: TextScratch = createTextScratch(lexicons)): number {
+  const { pieces, starts: pieceStarts } = scratch;
   let byLanguage: Map<string, Tokens> | undefined;
   let english: Tokens | undefined;
   let c = i * columns;
@@ -76,14 +108,14 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
       // VADER splits the text its own way, but on whitespace only, so it can start from the
       // memoised pieces of the English tokens (see scoreVaderPieces).
       if (part === 'all') {
-        english ??= tokenizeEnglishShared(text, pieces, pieceStarts);
-        writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence, english.pieceCount));
+        english ??= tokenizeEnglishInto(scratch.tokens, text, pieces, pieceStarts);
+        writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence, english.pieceCount, scratch.vaderWords));
       }
       c += VADER_COLUMNS.length;
       continue;
     }
     if (lex.scoring === 'plain-words') {
-      const m = scratchFor(lex);
+      const m = scratch.matches[l] as LexiconMatch;
       const words = matchPlainWords(text, lex, m);
       out.negated[i * lexicons.length + l] = 0;
       for (let k = 0; k < lex.categories.length; k++, c++) writeCategory(out, c, (lex.categories[k] as { aggregation: string }).aggregation, m.sums[k] as number, m.counts[k] as number, words);
@@ -91,18 +123,18 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
     }
     let tokens: Tokens;
     if (isEnglish(lex.language)) {
-      tokens = english ??= tokenizeEnglishShared(text, pieces, pieceStarts);
+      tokens = english ??= tokenizeEnglishInto(scratch.tokens, text, pieces, pieceStarts);
     } else {
       byLanguage ??= new Map();
       let t = byLanguage.get(lex.language);
       if (!t) byLanguage.set(lex.language, (t = tokenize(text, lex.language)));
       tokens = t;
     }
-    const m = matchLexicon(tokens, lex, undefined, scratchFor(lex));
+    const m = matchLexicon(tokens, lex, undefined, scratch.matches[l]);
     out.negated[i * lexicons.length + l] = m.negated;
     for (let k = 0; k < lex.categories.length; k++, c++) writeCategory(out, c, (lex.categories[k] as { aggregation: string }).aggregation, m.sums[k] as number, m.counts[k] as number, tokens.nWords);
   }
-  if (english === undefined && byLanguage === undefined) english = tokenizeEnglishShared(text, pieces, pieceStarts);
+  if (english === undefined && byLanguage === undefined) english = tokenizeEnglishInto(scratch.tokens, text, pieces, pieceStarts);
   const counted = english ?? (byLanguage?.values().next().value as Tokens);
   out.words[i] = counted.nWords;
   return english === undefined ? -1 : (english.pieceCount as number);
@@ -115,26 +147,6 @@ function writeCategory(out: BatchScores, c: number, aggregation: string, sum: nu
   else if (aggregation === 'rating') out.values[c] = count > 0 ? sum / count : NaN;
   else out.values[c] = sum;
 }
-
-/** Per lexicon, the match result scoreTextInto reuses from text to text (its values are copied out at once). */
-const scratchMatches = new WeakMap<CompiledLexicon, LexiconMatch>();
-
-function scratchFor(lexicon: CompiledLexicon): LexiconMatch {
-  let m = scratchMatches.get(lexicon);
-  if (m === undefined) {
-    const n = lexicon.categories.length;
-    m = { sums: new Float64Array(n), counts: new Int32Array(n), negated: 0 };
-    scratchMatches.set(lexicon, m);
-  }
-  return m;
-}
-
-/**
- * The memoised pieces of the text being scored and their offsets in it (scoring is synchronous):
- * the first entries, as many as scoreTextInto returns (see tokenizeEnglishShared).
- */
-const pieces: Piece[] = [];
-const pieceStarts: number[] = [];
 
 /** Which lexicons scoreTextInto scores: all, or all but VADER (`rules`). */
 export type ScorePart = 'all' | 'rules';
@@ -155,40 +167,28 @@ function writeVader(out: BatchScores, c: number, v: VaderScores): void {
  */
 export function scoreTexts(texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number, part: ScorePart = 'all'): BatchScores {
   const out = createBatchScores(texts.length, columns, lexicons.length);
+  const scratch = createTextScratch(lexicons);
   if (part !== 'rules' || !lexicons.some((l) => l.scoring === 'vader')) {
-    for (let i = 0; i < texts.length; i++) scoreTextInto(texts[i] as string, lexicons, out, i, columns, part);
+    for (let i = 0; i < texts.length; i++) scoreTextInto(texts[i] as string, lexicons, out, i, columns, part, scratch);
     return out;
   }
   const counts = new Int32Array(texts.length);
-  let n = 0;
+  const serials: number[] = [];
+  const starts: number[] = [];
   for (let i = 0; i < texts.length; i++) {
-    const count = scoreTextInto(texts[i] as string, lexicons, out, i, columns, part);
+    const count = scoreTextInto(texts[i] as string, lexicons, out, i, columns, part, scratch);
     counts[i] = count;
-    if (count < 0) continue;
-    if (n + count > serialBuffer.length) {
-      serialBuffer = grownTo(serialBuffer, 2 * (n + count));
-      startBuffer = grownTo(startBuffer, 2 * (n + count));
-    }
-    for (let k = 0; k < count; k++, n++) {
-      serialBuffer[n] = (pieces[k] as Piece).serial;
-      startBuffer[n] = pieceStarts[k] as number;
+    for (let k = 0; k < count; k++) {
+      serials.push((scratch.pieces[k] as Piece).serial);
+      starts.push(scratch.starts[k] as number);
     }
   }
+  const n = serials.length;
   const listed = new Int32Array(2 * n);
-  listed.set(serialBuffer.subarray(0, n));
-  listed.set(startBuffer.subarray(0, n), n);
+  listed.set(serials);
+  listed.set(starts, n);
   out.pieces = { serials: listed.subarray(0, n), starts: listed.subarray(n), counts, epoch: pieceSerialEpoch() };
   return out;
-}
-
-/** Where scoreTexts lists the pieces of a batch before copying them out (reused: it only grows). */
-let serialBuffer = new Int32Array(8192);
-let startBuffer = new Int32Array(8192);
-
-function grownTo(list: Int32Array<ArrayBuffer>, size: number): Int32Array<ArrayBuffer> {
-  const next = new Int32Array(size);
-  next.set(list);
-  return next;
 }
 
 /** Per VADER lexicon, the VADER tokens of the pieces one scoring thread has sent, by serial (see scoreVaderInto). */
@@ -209,6 +209,7 @@ export function scoreVaderInto(batch: BatchScores, texts: readonly string[], lex
     cache.useEpoch(pieceList.epoch);
     return cache;
   });
+  const words: VaderWord[] = [];
   let first = 0;
   for (let i = 0; i < texts.length; i++) {
     const text = texts[i] as string;
@@ -222,7 +223,7 @@ export function scoreVaderInto(batch: BatchScores, texts: readonly string[], lex
       }
       const cache = vaderCaches[l];
       if (count < 0 || !pieceList || !cache) writeVader(batch, c, scoreVader(text, lex.valence));
-      else writeVader(batch, c, scoreVaderSerials(text, pieceList.serials, pieceList.starts, first, count, lex.valence, cache));
+      else writeVader(batch, c, scoreVaderSerials(text, pieceList.serials, pieceList.starts, first, count, lex.valence, cache, words));
       c += VADER_COLUMNS.length;
     }
     if (count > 0) first += count;

@@ -2,9 +2,9 @@ import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { loadLexicons } from '../../src/io/load-lexicon.js';
 import { scoreColumns } from '../../src/score/score-columns.js';
-import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../../src/score/score-text.js';
-import { SerialCache } from '../../src/text/serial-cache.js';
-import type { PieceWords } from '../../src/score/vader.js';
+import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../../src/fast/score-texts.js';
+import { SerialCache } from '../../src/fast/serial-cache.js';
+import type { PieceWords } from '../../src/fast/score-vader-pieces.js';
 import { readCsv } from '../support/csv.js';
 
 const lexiconsPromise = loadLexicons(['afinn-165', 'vader', 'daily-constructs']);
