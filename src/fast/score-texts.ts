@@ -107,10 +107,10 @@ export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[]
     if (lex.scoring === 'vader') {
       // VADER splits the text its own way, but on whitespace only, so it can start from the
       // memoised pieces of the English tokens (see scoreVaderPieces).
-      if (part === 'all') {
-        english ??= tokenizeEnglishInto(scratch.tokens, text, pieces, pieceStarts);
-        writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence, english.pieceCount, scratch.vaderWords));
-      }
+      // Tokenized in part `rules` too: the pieces go to the thread that scores VADER, and the
+      // words column counts English words whenever VADER is among the lexicons (see scoreText).
+      english ??= tokenizeEnglishInto(scratch.tokens, text, pieces, pieceStarts);
+      if (part === 'all') writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence, english.pieceCount, scratch.vaderWords));
       c += VADER_COLUMNS.length;
       continue;
     }
