@@ -111,8 +111,6 @@ function argValue(name, fallback) {
 const MESSAGES = Number(argValue('--messages', '200000'));
 const ROUNDS = Number(argValue('--rounds', '3'));
 const runHooks = !process.argv.includes('--no-hooks');
-/** With --jit-default: `lexichron score` once more with V8's own tiering budget given on the command line (which the tool then leaves alone). */
-const JIT_DEFAULT = 'lexichron score, V8 default budget';
 
 async function writeCorpus(path, count) {
   const { wordnetDictDir } = await import('../dist/io/open-wordnet.js');
@@ -151,14 +149,14 @@ try {
   const mb = statSync(input).size / 1024 / 1024;
   console.log(`corpus: ${MESSAGES.toLocaleString('en-US')} messages, ${tokens.toLocaleString('en-US')} tokens (words split on spaces), ${distinct.toLocaleString('en-US')} distinct, ${mb.toFixed(1)} MB\n  ${input}\n`);
 
-  const pipelines = ['papaparse alone', 'papaparse + sentiment', 'papaparse + vader-sentiment', 'lexichron score', 'lexichron score --workers 0', ...(process.argv.includes('--jit-default') ? [JIT_DEFAULT] : [])];
+  const pipelines = ['papaparse alone', 'papaparse + sentiment', 'papaparse + vader-sentiment', 'lexichron score', 'lexichron score --workers 0'];
   const runs = new Map(pipelines.map((p) => [p, []]));
   for (let round = 1; round <= ROUNDS; round++) {
     process.stderr.write(`round ${round} of ${ROUNDS}: `);
     for (const pipeline of pipelines) {
       process.stderr.write(`${pipeline}… `);
       const started = performance.now();
-      const child = spawnSync(process.execPath, [...(pipeline === JIT_DEFAULT ? ['--interrupt-budget=67584'] : []), self, '--child', pipeline, input, join(dir, 'scores.csv')], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 24 });
+      const child = spawnSync(process.execPath, [self, '--child', pipeline, input, join(dir, 'scores.csv')], { cwd: root, encoding: 'utf8', maxBuffer: 1 << 24 });
       const wall = (performance.now() - started) / 1000;
       if (child.status !== 0) {
         console.error(`\nbench: ${pipeline} failed (exit ${child.status}):\n${child.stderr}`);

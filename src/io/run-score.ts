@@ -68,8 +68,6 @@ export interface RunScoreOptions {
    * runScore sends them the lexicons and stops them when done.
    */
   pool?: ScorePool;
-  /** Called once, when the first scored batch is back and about to be written (the start-up is over: lexicons compiled, tokenizer loaded). */
-  onFirstRows?: () => void;
   /** Also receives each scored entry. */
   onEntry?: (entry: ScoredEntry) => void;
   /** Also receives each entry with its text, after pseudonymization and before scoring (for the term audit of `run`). */
@@ -213,16 +211,11 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       }
       inflight.push({ entries, seqs, scores: scored });
     };
-    let firstRows = options.onFirstRows;
     const drain = async (keep: number): Promise<void> => {
       while (inflight.length > keep) {
         const { entries, seqs, scores: pendingScores } = inflight.shift() as (typeof inflight)[number];
         const scored = await pendingScores;
         if (seqWriter && seqs.length > 0) await seqWriter.write(seqs.join('\n'));
-        if (firstRows) {
-          firstRows();
-          firstRows = undefined;
-        }
         for (let i = 0; i < entries.length; i++) {
           const raw = entries[i] as RawEntry;
           const text = keepText ? (options.redact ? options.redact(raw.text) : raw.text) : undefined;
