@@ -100,3 +100,21 @@ describe('SerialCache', () => {
     expect(cache.get(19)).toBeUndefined();
   });
 });
+
+describe('the words column does not depend on which thread scores VADER', () => {
+  it('with VADER and only a German lexicon, the `rules` part counts the English words as `all` does (scoreText counts English words whenever VADER is scored)', async () => {
+    const { compileLexicon } = await import('../../src/lexicon/compile-lexicon.js');
+    const { parseLexicon } = await import('../../src/lexicon/parse-lexicon.js');
+    const lines = ['## lexichron lexicon 1', '## name\tgerman-test', '## version\t1', '## license\tCC0-1.0', '## source\tthis test', '## language\tde', '## scale\t-5\t5', '## category\tvalence\tsum', 'term\tcategory\tweight', 'schön\tvalence\t2'];
+    const parsed = parseLexicon(lines.join('\n'));
+    if (!parsed.lexicon) throw new Error(JSON.stringify(parsed.problems));
+    const [vader] = await loadLexicons(['vader']);
+    const lexicons = [vader!, compileLexicon(parsed.lexicon)];
+    const columns = scoreColumns(lexicons).length;
+    // An e-mail address is one English (wink) word and several Intl.Segmenter words.
+    const texts = ['schön, mail me at jo@example.com today', 'ein schöner Tag :)'];
+    const all = scoreTexts(texts, lexicons, columns);
+    const rules = scoreTexts(texts, lexicons, columns, 'rules');
+    expect([...rules.words]).toEqual([...all.words]);
+  });
+});
