@@ -34,7 +34,8 @@ export { tokenizeEnglish } from './fast/tokenize-english.js';
 export { tokenizeSegmenter } from './text/tokenize-segmenter.js';
 export { TokenKind, type Tokens } from './text/tokens.js';
 export { matchLexicon, type LexiconMatch } from './score/match-lexicon.js';
-export { scoreEntry, scoreColumns, type ScoreColumn } from './score/score-entry.js';
+export { scoreEntry } from './score/score-entry.js';
+export { scoreColumns, type ScoreColumn } from './score/score-columns.js';
 export { scoreVader, type VaderLexicon, type VaderScores } from './score/score-vader.js';
 
 // series

@@ -1,5 +1,5 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
-import type { ScoreColumn } from '../score/score-entry.js';
+import type { ScoreColumn } from '../score/score-columns.js';
 
 /** Fixed leading columns of a scores file (docs/architecture.md). */
 export const SCORE_ID_COLUMNS = ['entry_id', 'person', 'time_utc', 'zone', 'time_local', 'words'] as const;

@@ -3,8 +3,6 @@ import type { RawEntry, ScoredEntry } from '../types.js';
 import { scoreColumns, type ScoreColumn } from './score-columns.js';
 import { scoreTexts, type BatchScores } from '../fast/score-texts.js';
 
-export { scoreColumns, VADER_COLUMNS, COUNT_RATES, type ScoreColumn, type CountRate } from './score-columns.js';
-
 /**
  * Turns text `i` of batch scores back into a ScoredEntry (NaN becomes undefined: no score).
  * `columns` is scoreColumns(lexicons) for the same lexicons.

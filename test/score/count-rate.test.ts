@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { compileLexicon } from '../../src/lexicon/compile-lexicon.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
-import { scoreColumns, scoreEntry } from '../../src/score/score-entry.js';
+import { scoreColumns } from '../../src/score/score-columns.js';
+import { scoreEntry } from '../../src/score/score-entry.js';
 import { scoreTexts } from '../../src/fast/score-texts.js';
 import { scoreRowFiller, scoreRowText } from '../../src/fast/score-row-filler.js';
 

@@ -3,7 +3,8 @@ import { compileLexicon, type CompiledLexicon } from '../../src/lexicon/compile-
 import type { Lexicon } from '../../src/lexicon/lexicon-types.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
 import { matchLexicon } from '../../src/score/match-lexicon.js';
-import { scoreColumns, scoreEntry } from '../../src/score/score-entry.js';
+import { scoreColumns } from '../../src/score/score-columns.js';
+import { scoreEntry } from '../../src/score/score-entry.js';
 import { clearTokenMemo } from '../../src/fast/tokenize-english.js';
 import { tokenize } from '../../src/text/tokenize.js';
 import { tokenizeSegmenter } from '../../src/text/tokenize-segmenter.js';
