@@ -1,6 +1,13 @@
 /**
- * lexichron's public library API: re-exports only (test/index.test.ts pins the list).
+ * lexichron's public library API: re-exports only (test/index.test.ts pins the list), and the
+ * one set-up the library needs: the English tokenizer is given wink's model, read from the
+ * installed package by src/io/read-core-model.ts (the text layer reads no file).
  */
+import { readCoreModel } from './io/read-core-model.js';
+import { provideCoreModel } from './text/core-model.js';
+
+provideCoreModel(readCoreModel);
+
 export type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef, Stage } from './types.js';
 export { LexichronError, usageError, inputError, exitCodeFor } from './errors.js';
 export { TOOL_VERSION } from './version.js';
@@ -22,10 +29,14 @@ export { lexiconHash } from './lexicon/lexicon-hash.js';
 export { compileLexicon, type CompiledLexicon } from './lexicon/compile-lexicon.js';
 export type { Lexicon, Category, TermRow, Aggregation, NegationRule, TermStatus } from './lexicon/lexicon-types.js';
 export { readLexicon, loadLexicons, bundledLexiconNames } from './io/load-lexicon.js';
-export { tokenize, tokenizeEnglish, tokenizeSegmenter, TokenKind, type Tokens } from './text/tokenize.js';
+export { tokenize } from './text/tokenize.js';
+export { tokenizeEnglish } from './fast/tokenize-english.js';
+export { tokenizeSegmenter } from './text/tokenize-segmenter.js';
+export { TokenKind, type Tokens } from './text/tokens.js';
 export { matchLexicon, type LexiconMatch } from './score/match-lexicon.js';
-export { scoreEntry, scoreColumns, type ScoreColumn } from './score/score-entry.js';
-export { scoreVader, type VaderLexicon, type VaderScores } from './score/vader.js';
+export { scoreEntry } from './score/score-entry.js';
+export { scoreColumns, type ScoreColumn } from './score/score-columns.js';
+export { scoreVader, type VaderLexicon, type VaderScores } from './score/score-vader.js';
 
 // series
 export { parseBinSpec, parseClockTime, parseExcludedHours, type BinSpec } from './series/bin-spec.js';
@@ -129,7 +140,7 @@ export { readCorpus, type ReadCorpusOptions, type CorpusItem } from './io/read-c
 export { LEXICON_EXTENSION, OVERRIDES_EXTENSION } from './io/load-lexicon.js';
 
 // batch scoring and worker threads
-export { scoreTexts, scoreTextInto, createBatchScores, type BatchScores } from './score/score-text.js';
+export { scoreTexts, scoreTextInto, createBatchScores, type BatchScores } from './fast/score-texts.js';
 export { scoredEntryFrom } from './score/score-entry.js';
 export { createScorePool, autoWorkers, type ScorePool } from './io/score-pool.js';
 

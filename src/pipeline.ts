@@ -149,8 +149,6 @@ export interface RunStudyOptions {
   stages?: Array<[string, StudyStage]>;
   seed?: number;
   onProgress?: (rows: number) => void;
-  /** Called once, when the first scored rows are written (see RunScoreOptions.onFirstRows). */
-  onFirstRows?: () => void;
   /** Environment variables the study may name (`privacy.keyEnv`), passed in by the caller. */
   env?: Readonly<Record<string, string | undefined>>;
   /** Accept an output folder that is a symbolic link (refused by default, see checkOutputFolder). */
@@ -436,7 +434,6 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     ...(p.pseudonyms ? { pseudonyms: p.pseudonyms } : {}),
     ...(options.shard ? { shard: options.shard } : {}),
     onProgress: options.onProgress,
-    onFirstRows: options.onFirstRows,
     onRawEntry: auditEntryFeeder(p, auditors),
     ...(!study.zones && !study.timeZone ? { onReject: (d: Diagnostic) => { if (d.code === 'no_zone') throw noZonesError(studyPath, d, 'the entry on'); } } : {}),
   });

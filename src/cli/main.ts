@@ -1,8 +1,9 @@
 import type { Command } from 'commander';
 import { exitCodeFor, LexichronError } from '../errors.js';
 import { TOOL_VERSION } from '../version.js';
-import { raiseJitBudget, restoreJitBudget } from './jit-budget.js';
 import { diagnosticText, ERROR_MAX_CHARS } from '../privacy/diagnostic-text.js';
+import { readCoreModel } from '../io/read-core-model.js';
+import { provideCoreModel } from '../text/core-model.js';
 /** Each command file exports a function that adds its command to the program. */
 type Register = (program: Command) => void;
 
@@ -44,11 +45,10 @@ export async function buildProgram(only?: string): Promise<Command> {
 /** Runs the command line; returns the exit code (0 ok, 1 internal, 2 usage, 3 bad input data). */
 export async function main(argv: string[]): Promise<number> {
   // A scoring run starts its scoring thread first thing (it loads wink-nlp's model while the
-  // rest of the start-up happens; commander is imported only after it for that reason), and V8
-  // optimizes less eagerly until the first scores are written (see jit-budget.ts).
+  // rest of the start-up happens; commander is imported only after it for that reason).
+  provideCoreModel(readCoreModel);
   const scoring = argv[2] === 'score' || argv[2] === 'run';
   const scorePool = scoring ? await import('../io/score-pool.js') : undefined;
-  if (scoring) raiseJitBudget();
   scorePool?.prestartScoreWorker();
   try {
     const program = await buildProgram(argv[2]);
@@ -67,7 +67,6 @@ export async function main(argv: string[]): Promise<number> {
     process.stderr.write(`lexichron: internal error, please report it with the command you ran: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
     return 1;
   } finally {
-    restoreJitBudget();
     await scorePool?.releasePrestartedWorker();
   }
 }

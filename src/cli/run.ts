@@ -3,7 +3,6 @@ import { relative } from 'node:path';
 import { runStudy } from '../pipeline.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { inputError, usageError } from '../errors.js';
-import { restoreJitBudget } from './jit-budget.js';
 import { parseMaxRejects, progressReporter, tooManyRejects } from './common-options.js';
 import { studyStages } from './study-stages.js';
 import { SHARD_HELP, shardFrom } from './shard-option.js';
@@ -21,10 +20,9 @@ export function registerRun(program: Command): void {
     .option('--shard <spec>', SHARD_HELP)
     .action(async (studyPath: string, opts: Record<string, unknown>) => {
       const progress = progressReporter('scored');
-      // V8 optimizes less eagerly until the first scores are written (see jit-budget.ts and main.ts).
       const shard = shardFrom(opts.shard);
       if (shard && opts.out === undefined) throw usageError(`--shard ${shard.index}/${shard.count} needs --out DIR: every shard writes a folder of its own (e.g. --out parts/${shard.index}), which \`lexichron merge\` then puts together.`);
-      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, onFirstRows: restoreJitBudget, env: process.env, allowSymlinks: opts.allowSymlinks === true, ...(opts.out !== undefined ? { out: String(opts.out) } : {}), ...(shard ? { shard } : {}), ...(opts.names ? { names: opts.names as 'as-written' | 'syntactic' } : {}) };
+      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, env: process.env, allowSymlinks: opts.allowSymlinks === true, ...(opts.out !== undefined ? { out: String(opts.out) } : {}), ...(shard ? { shard } : {}), ...(opts.names ? { names: opts.names as 'as-written' | 'syntactic' } : {}) };
       const result = await runStudy(studyPath, options).finally(progress.stop);
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;

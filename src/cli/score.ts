@@ -9,7 +9,6 @@ import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js
 import { createRedactor } from '../privacy/create-redactor.js';
 import { createPseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
-import { restoreJitBudget } from './jit-budget.js';
 import { SHARD_HELP, shardFrom } from './shard-option.js';
 import { FILE_COLUMNS_HELP, fileColumnsFrom } from './file-columns-option.js';
 import { addTimeOptions, delimiterFrom, parseMaxRejects, parseWorkers, progressReporter, timeOptionsFrom, tooManyRejects } from './common-options.js';
@@ -57,8 +56,7 @@ export function registerScore(program: Command): void {
     const scoreInputs = inputs.map((path) => ({ path, columns: fileColumns.get(path) ?? (opts.columns as string | undefined), format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) }));
     // The scoring threads start now (one may have started already: see main.ts) and load
     // wink-nlp's model while this thread loads the code that reads and scores (imported only
-    // now, for that reason) and the lexicons; V8 optimizes less eagerly until the first scores
-    // are written (see jit-budget.ts).
+    // now, for that reason) and the lexicons.
     const workers = await scoreWorkerCount(inputs, parseWorkers(String(opts.workers)));
     const pool = startScorePool(workers);
     let lexicons: CompiledLexicon[];
@@ -88,7 +86,6 @@ export function registerScore(program: Command): void {
       pool,
       ...(shard ? { shard } : {}),
       onProgress: progress.update,
-      onFirstRows: restoreJitBudget,
       ...(!opts.timeZone && !opts.zones ? { onReject: stopOnUnplacedTime } : {}),
     }).finally(progress.stop);
     process.stderr.write(`${reconciliationText(result.reconciliation)}\n`);

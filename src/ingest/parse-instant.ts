@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon';
-import { writeAscii } from '../text/ascii-bytes.js';
+import { writeAscii } from '../fast/write-ascii.js';
 import { inTimeWindow, type TimeWindow } from './time-window.js';
 import { daysInMonth, utcFromFields } from './utc-from-fields.js';
 import { resolveWallClock, zoneOffset, type WallClockPolicy } from './zone-offset.js';

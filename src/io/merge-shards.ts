@@ -6,7 +6,7 @@ import { readEntryBatches } from '../ingest/read-entries.js';
 import { tableFile } from './table-file.js';
 import { auditEntryFeeder, DEFAULT_SEED, finishStudy, prepareStudy, readStudy, SHARD_MANIFEST, studyAuditors, type PreparedStudy, type RunStudyOptions, type RunStudyResult } from '../pipeline.js';
 import type { Manifest } from '../report/manifest.js';
-import type { ScoreColumn } from '../score/score-entry.js';
+import type { ScoreColumn } from '../score/score-columns.js';
 import { checkShardSet, type ShardRecord } from '../shard/check-shard-set.js';
 import type { ShardSpec } from '../shard/shard-of-person.js';
 import type { LexiconRef, RawEntry, Reconciliation } from '../types.js';

@@ -11,9 +11,11 @@ import type { ZoneTable } from '../ingest/zone-table.js';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import type { Pseudonymizer } from '../privacy/create-pseudonymizer.js';
 import { csvRow } from '../report/csv.js';
-import { scoreRowFiller, scoresHeader } from '../report/score-rows.js';
-import { scoreColumns, scoredEntryFrom, type CountRate, type ScoreColumn } from '../score/score-entry.js';
-import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../score/score-text.js';
+import { scoresHeader } from '../report/score-rows.js';
+import { scoreRowFiller } from '../fast/score-row-filler.js';
+import { scoreColumns, type CountRate, type ScoreColumn } from '../score/score-columns.js';
+import { scoredEntryFrom } from '../score/score-entry.js';
+import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../fast/score-texts.js';
 import { createScorePool, scoreWorkerCount, type ScorePool } from './score-pool.js';
 import type { Diagnostic, LexiconRef, RawEntry, ReadItem, Reconciliation, ScoredEntry, SourceRef } from '../types.js';
 import { TOOL_VERSION } from '../version.js';
@@ -67,8 +69,6 @@ export interface RunScoreOptions {
    * runScore sends them the lexicons and stops them when done.
    */
   pool?: ScorePool;
-  /** Called once, when the first scored batch is back and about to be written (the start-up is over: lexicons compiled, tokenizer loaded). */
-  onFirstRows?: () => void;
   /** Called with each rejected row before it is written; may throw to stop the run (the outputs are then discarded). */
   onReject?: (diagnostic: Diagnostic) => void;
   /** Also receives each scored entry. */
@@ -223,16 +223,11 @@ export async function runScore(options: RunScoreOptions): Promise<RunScoreResult
       }
       inflight.push({ entries, seqs, scores: scored });
     };
-    let firstRows = options.onFirstRows;
     const drain = async (keep: number): Promise<void> => {
       while (inflight.length > keep) {
         const { entries, seqs, scores: pendingScores } = inflight.shift() as (typeof inflight)[number];
         const scored = await pendingScores;
         if (seqWriter && seqs.length > 0) await seqWriter.write(seqs.join('\n'));
-        if (firstRows) {
-          firstRows();
-          firstRows = undefined;
-        }
         for (let i = 0; i < entries.length; i++) {
           const raw = entries[i] as RawEntry;
           const text = keepText ? (options.redact ? options.redact(raw.text) : raw.text) : undefined;

@@ -4,7 +4,7 @@ import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
-import type { BatchScores, ScorePart } from '../score/score-text.js';
+import type { BatchScores, ScorePart } from '../fast/score-texts.js';
 
 /** Scoring workers that score batches of texts in parallel, results in submission order per call. */
 export interface ScorePool {

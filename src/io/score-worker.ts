@@ -7,8 +7,10 @@ import { parentPort } from 'node:worker_threads';
 import { compileLexicon, type CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import type { Lexicon } from '../lexicon/lexicon-types.js';
 import { scoreColumns } from '../score/score-columns.js';
-import { batchBuffers, scoreTexts, type ScorePart } from '../score/score-text.js';
-import { preparePieceReader } from '../text/wink-pieces.js';
+import { batchBuffers, scoreTexts, type ScorePart } from '../fast/score-texts.js';
+import { preparePieceReader } from '../fast/read-piece.js';
+import { provideCoreModel } from '../text/core-model.js';
+import { readCoreModel } from './read-core-model.js';
 
 let lexicons: CompiledLexicon[] = [];
 let columns = 0;
@@ -25,4 +27,5 @@ parentPort?.on('message', (message: { lexicons: Lexicon[]; hashes: string[] } | 
 
 // The model takes a fifth of a second to load: done while the reading thread loads the lexicons
 // and reads the first rows (messages wait in the queue meanwhile).
+provideCoreModel(readCoreModel);
 preparePieceReader();

@@ -1,4 +1,4 @@
-import { termNorms } from '../text/tokenize.js';
+import { termNorms } from '../text/term-norms.js';
 import type { LexiconRef } from '../types.js';
 import { lexiconHash } from './lexicon-hash.js';
 import type { Aggregation, Lexicon, LexiconScoring, NegationRule } from './lexicon-types.js';

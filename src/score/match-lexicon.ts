@@ -1,6 +1,7 @@
-import type { CompiledLexicon, Hit } from '../lexicon/compile-lexicon.js';
+import type { CompiledLexicon, Hit, Phrase } from '../lexicon/compile-lexicon.js';
 import { MIN_WILDCARD_STEM } from '../lexicon/parse-lexicon.js';
-import { TokenKind, tokenGeneration, type Tokens } from '../text/tokenize.js';
+import { tokenGeneration } from '../fast/tokenize-english.js';
+import { TokenKind, type Tokens } from '../text/tokens.js';
 import { hitWeight } from './hit-weight.js';
 
 /** Per-category totals of one lexicon over one entry. */
@@ -24,9 +25,6 @@ function isNegated(tokens: Tokens, at: number, lexicon: CompiledLexicon): boolea
   }
   return false;
 }
-
-/** Length in tokens of the last hit found by findHit (saves an allocation per hit on the hot path). */
-let hitLength = 1;
 
 type Start = NonNullable<ReturnType<CompiledLexicon['starts']['get']>>;
 
@@ -97,6 +95,7 @@ function answerAt(tokens: Tokens, i: number, lexicon: CompiledLexicon, known: An
   return answer;
 }
 
+/** The hit at token `i`, or undefined: a Phrase covers its tokens, any other hit one token (see hitLength). */
 function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon, known: Answers | undefined): Hit | undefined {
   const answer = answerAt(tokens, i, lexicon, known);
   if (answer === undefined) return undefined;
@@ -113,20 +112,17 @@ function findHit(tokens: Tokens, i: number, lexicon: CompiledLexicon, known: Ans
             break;
           }
         }
-        if (ok) {
-          hitLength = n;
-          return phrase;
-        }
+        if (ok) return phrase;
       }
     }
-    if (start.exact) {
-      hitLength = 1;
-      return start.exact;
-    }
+    if (start.exact) return start.exact;
   }
-  if (answer.wild === null) return undefined;
-  hitLength = 1;
-  return answer.wild;
+  return answer.wild ?? undefined;
+}
+
+/** Tokens a hit covers: a phrase's tokens, else one. */
+function hitLength(hit: Hit): number {
+  return (hit as Partial<Phrase>).tokens?.length ?? 1;
 }
 
 /** The wildcard with the longest stem that `token` starts with, or null. */
@@ -186,7 +182,7 @@ export function matchLexicon(tokens: Tokens, lexicon: CompiledLexicon, onHit?: H
       i++;
       continue;
     }
-    const length = hitLength;
+    const length = hitLength(hit);
     const neg = hasNegation && isNegated(tokens, i, lexicon);
     onHit?.(hit, i, length, neg);
     if (neg) negated++;

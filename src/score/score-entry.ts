@@ -1,9 +1,7 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import type { RawEntry, ScoredEntry } from '../types.js';
 import { scoreColumns, type ScoreColumn } from './score-columns.js';
-import { scoreTexts, type BatchScores } from './score-text.js';
-
-export { scoreColumns, VADER_COLUMNS, COUNT_RATES, type ScoreColumn, type CountRate } from './score-columns.js';
+import { scoreTexts, type BatchScores } from '../fast/score-texts.js';
 
 /**
  * Turns text `i` of batch scores back into a ScoredEntry (NaN becomes undefined: no score).

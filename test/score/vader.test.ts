@@ -5,8 +5,9 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { compileLexicon } from '../../src/lexicon/compile-lexicon.js';
 import { parseLexicon } from '../../src/lexicon/parse-lexicon.js';
-import { scoreVader, scoreVaderPieces, type VaderScores } from '../../src/score/vader.js';
-import { tokenizeEnglishPieces, type Piece } from '../../src/text/tokenize.js';
+import { scoreVaderPieces } from '../../src/fast/score-vader-pieces.js';
+import { tokenizeEnglishPieces, type Piece } from '../../src/fast/tokenize-english.js';
+import { scoreVader, type VaderScores } from '../../src/score/score-vader.js';
 import { vaderTokens } from '../../src/score/vader-tokens.js';
 import { vaderSentences } from './vader-sentences.js';
 

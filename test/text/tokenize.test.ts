@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { loadLexicons } from '../../src/io/load-lexicon.js';
-import { TokenKind, termNorms, tokenize, tokenizeSegmenter } from '../../src/text/tokenize.js';
-import { readPlainPiece } from '../../src/text/wink-pieces.js';
+import { readPlainPiece } from '../../src/fast/read-piece.js';
+import { termNorms } from '../../src/text/term-norms.js';
+import { TokenKind, tokenize } from '../../src/text/tokenize.js';
+import { tokenizeSegmenter } from '../../src/text/tokenize-segmenter.js';
 
 describe('tokenize (English, wink-nlp)', () => {
   it('lower-cases words and counts them', () => {
@@ -68,7 +70,7 @@ describe('tokenizeSegmenter (other languages, Intl.Segmenter)', () => {
 });
 
 describe('termNorms (the tokens of a lexicon term, for its tables)', () => {
-  it("equals tokenize(term).norm for every term of the bundled lexicons and for edge cases (tokenize is checked against wink-nlp's readDoc in tokenize-memo.test.ts)", async () => {
+  it("equals tokenize(term).norm for every term of the bundled lexicons and for edge cases (tokenize is checked against wink-nlp's readDoc in test/fast/tokenize-english.test.ts)", async () => {
     const lexicons = await loadLexicons(['afinn-165', 'vader', 'daily-constructs', 'basic-emotions']);
     const terms = lexicons.flatMap((l) => l.lexicon.terms.map((t) => t.term));
     terms.push('cannot', 'Cannot', 'dont', 'AINT', 'cannot,', 'etc.', 'a.', 'x', 'Happy!', 'well...', "can't", 'kind of', '🐝', ':)', 'naïve', 'e.g.', '');

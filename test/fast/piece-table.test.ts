@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { detached, GenerationalTable, HASH_START, hashOfRange, hashStep, PieceTable } from '../../src/text/piece-table.js';
+import { detached, GenerationalTable, HASH_START, hashOfRange, hashStep, PieceTable } from '../../src/fast/piece-table.js';
 
 describe('hashOfRange', () => {
   it('is 32-bit FNV-1a (reference: FNV test vectors of draft-eastlake-fnv, IETF; values recalled from memory and recomputed with a separate Python loop)', () => {

@@ -1,15 +1,7 @@
 import { createRequire } from 'node:module';
-import { loadCoreModel, type CoreModel } from './wink-model.js';
-
-/** wink-nlp's output for one text: token values, types, contraction flags and normals, and whether each token follows spaces. */
-export interface WinkTokens {
-  values: string[];
-  types: string[];
-  contraction: boolean[];
-  /** Normal forms (used for contraction pieces). */
-  normals: string[];
-  spaced: boolean[];
-}
+import { coreModel } from '../text/core-model.js';
+import type { CoreModel } from '../text/prepare-core-model.js';
+import type { WinkTokens } from '../text/wink-tokens.js';
 
 /**
  * Reading one piece of text (no spaces) with the parts of wink-nlp 2.4.0 that its `readDoc`
@@ -26,7 +18,7 @@ export interface WinkTokens {
  * through wink's spelling map when the lower case is a known word). Later look-ups in the same
  * piece see the overlay as wink's would see the cache, so the tokens equal those of a freshly
  * loaded wink-nlp, and the model is never changed: nothing to take out again, nothing that
- * grows. wink-nlp is pinned at 2.4.0 (package.json), and test/text/tokenize-memo.test.ts checks
+ * grows. wink-nlp is pinned at 2.4.0 (package.json), and test/fast/tokenize-english.test.ts checks
  * the tokens against `readDoc` on every test corpus, so a change inside wink-nlp fails tests.
  */
 interface WinkCache {
@@ -63,6 +55,7 @@ interface PieceReader {
 }
 
 const requireWink = createRequire(import.meta.url);
+/** The piece reader of this thread, loaded at its first use (a cache of wink's model: it never changes, see above). */
 let reader: PieceReader | undefined;
 
 function loadPieceReader(): PieceReader {
@@ -71,7 +64,7 @@ function loadPieceReader(): PieceReader {
   const tokenizer = requireWink('wink-nlp/src/tokenizer.js') as (trex: unknown, categories: unknown, preserve: unknown) => PieceReader['tokenize'];
   const DocDataWrapper = requireWink('wink-nlp/src/dd-wrapper.js') as (record: object) => WinkDocCalls;
   const featureFn = requireWink('wink-eng-lite-web-model/dist/feature.js') as unknown;
-  const core = loadCoreModel();
+  const core = coreModel();
   const cache = Cache(core, featureFn);
   const tokens: number[] = [];
   const record = Object.assign(Object.create(null) as object, { cache, tokens, sentences: [], markings: [], nonBreakingSpaces: Object.create(null) as object });
@@ -154,7 +147,7 @@ const PLAIN_MARKS = '.,!?;:';
  * word-then-punctuation, and is added as two tokens, the word (its model type when known,
  * without contraction expansion; else `word`) and the mark, except a single letter and a point
  * (`a.`), added as one `word` token.
- * test/text/tokenize-memo.test.ts checks this against wink-nlp's readDoc.
+ * test/fast/tokenize-english.test.ts checks this against wink-nlp's readDoc.
  */
 export function readPlainPiece(text: string): PlainPiece | undefined {
   const n = text.length;
@@ -182,6 +175,12 @@ export function readPlainPiece(text: string): PlainPiece | undefined {
     mark,
     markType: markLexeme === undefined ? 'punctuation' : cache.property(markLexeme, 'tokenType'),
   };
+}
+
+/** The normal forms of a plain piece's tokens: the word in lower case, then the mark (if any) as it is. */
+export function plainNorms(plain: PlainPiece): string[] {
+  const word = plain.word.toLowerCase();
+  return plain.mark === '' ? [word] : [word, plain.mark];
 }
 
 /** wink's tokens of one piece of text (no spaces, or one run of tabs and line breaks), as a freshly loaded wink-nlp reads it. */

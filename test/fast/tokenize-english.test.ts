@@ -6,7 +6,10 @@ import winkNLP from 'wink-nlp';
 import model from 'wink-eng-lite-web-model';
 import { describe, expect, it } from 'vitest';
 import { random } from '../../src/stats/random.js';
-import { loadCoreModel, tokenizeEnglish as tokenizeWithIds, tokenizeEnglishWhole, type Tokens } from '../../src/text/tokenize.js';
+import { tokenizeEnglish as tokenizeWithIds } from '../../src/fast/tokenize-english.js';
+import { readCoreModel as loadCoreModel } from '../../src/io/read-core-model.js';
+import { tokenizeEnglishWhole } from '../../src/text/tokenize-english-whole.js';
+import type { Tokens } from '../../src/text/tokens.js';
 
 /** The tokens without their ids (the reference has none). */
 function tokenizeEnglish(text: string): Omit<Tokens, 'ids' | 'generation'> {

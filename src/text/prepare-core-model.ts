@@ -1,6 +1,3 @@
-import { readFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
-
 /** The parts of wink-eng-lite-web-model's core model read by lexichron (see loadCoreModel). */
 export interface CoreModel {
   lexicon: Uint32Array | string;
@@ -16,8 +13,6 @@ export interface CoreModel {
   preserve: unknown;
 }
 
-const requireModelFile = createRequire(import.meta.url);
-
 /** A fresh ArrayBuffer holding the bytes of base64 `data`. */
 function bytesOfBase64(data: string): ArrayBuffer {
   const bytes = Buffer.from(data, 'base64');
@@ -25,16 +20,16 @@ function bytesOfBase64(data: string): ArrayBuffer {
 }
 
 /**
- * wink-eng-lite-web-model's core model, prepared as the package's own `core()` prepares it
+ * wink-eng-lite-web-model's core model from the text of its model file (read by
+ * readCoreModel, src/io/read-core-model.ts), prepared as the package's own `core()` prepares it
  * (dist/read-core-model.js and dist/load-core-model.js of version 1.8.1), with two cheaper
- * steps: the model file parsed once into a fresh object (the package loads it with `require`
- * and copies it through a JSON round trip), and Node's base64 decoder instead of a character
- * loop. About 0.17 s less per start of the tool and of each scoring worker.
- * test/text/tokenize-memo.test.ts checks the tokens equal those of the package's own loader.
+ * steps: the file parsed once into a fresh object (the package loads it with `require` and
+ * copies it through a JSON round trip), and Node's base64 decoder instead of a character loop.
+ * About 0.17 s less per start of the tool and of each scoring worker.
+ * test/fast/tokenize-english.test.ts checks the tokens equal those of the package's own loader.
  */
-export function loadCoreModel(): CoreModel {
-  const path = requireModelFile.resolve('wink-eng-lite-web-model/dist/languages/cur/models/eng-core-web-model.json');
-  const core = JSON.parse(readFileSync(path, 'utf8')) as CoreModel;
+export function prepareCoreModel(json: string): CoreModel {
+  const core = JSON.parse(json) as CoreModel;
   const { packing, features, pos } = core;
   core.lexicon = new Uint32Array(bytesOfBase64(core.lexicon as string));
   core.xpansions = new Uint32Array(bytesOfBase64(core.xpansions as string));

@@ -7,9 +7,10 @@ import { formatLocal, formatUtc, writeLocalTime, writeUtcTime } from '../../src/
 import { loadLexicons } from '../../src/io/load-lexicon.js';
 import { csvField } from '../../src/report/csv.js';
 import { formatNumber, integerText } from '../../src/report/format-number.js';
-import { scoreRowFiller, scoreRowText, scoresHeader } from '../../src/report/score-rows.js';
+import { scoreRowFiller, scoreRowText } from '../../src/fast/score-row-filler.js';
+import { scoresHeader } from '../../src/report/score-rows.js';
 import { scoreColumns } from '../../src/score/score-columns.js';
-import { createBatchScores } from '../../src/score/score-text.js';
+import { createBatchScores } from '../../src/fast/score-texts.js';
 import { random } from '../../src/stats/random.js';
 import type { RawEntry } from '../../src/types.js';
 
