@@ -29,7 +29,10 @@ export { scoreVader, type VaderLexicon, type VaderScores } from './score/vader.j
 
 // series
 export { parseBinSpec, parseClockTime, parseExcludedHours, type BinSpec } from './series/bin-spec.js';
-export { createSeriesState, addSeriesEntry, buildPersonSeries, type SeriesOptions, type SeriesRow, type SeriesEntry } from './series/build-series.js';
+export { createSeriesState } from './series/create-series-state.js';
+export { addSeriesEntry } from './series/add-series-entry.js';
+export { buildPersonSeries } from './series/build-person-series.js';
+export type { SeriesOptions, SeriesRow, SeriesEntry } from './series/series-types.js';
 
 // runners (files)
 export { runScore, type RunScoreOptions, type RunScoreResult } from './io/run-score.js';
