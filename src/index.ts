@@ -108,7 +108,7 @@ export {
 
 // validation against self-reports
 export {
-  validateSeries, DEFAULT_VALIDATE_OPTIONS, analyzePair, pairVerdict, VERDICT_THRESHOLDS, betweenPersonCorrelation, personMeans,
+  validateSeries, DEFAULT_VALIDATE_OPTIONS, analysePair, pairVerdict, VERDICT_THRESHOLDS, betweenPersonCorrelation, personMeans,
   perPersonCorrelations, wordCountReliability, binsPerPerson, alignRatingsToBins, alignRatingsToWindows,
   parseRatingScales, ratingValues, ratingColumns, seriesBinFromRecord, seriesScoreColumns, entryScoreColumns, entryScoreFromRecord,
   type ValidateInput, type ValidateOptions, type ValidationResult, type PairAnalysis, type Verdict, type VerdictWarning,

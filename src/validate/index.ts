@@ -2,7 +2,7 @@ export { alignRatingsToBins } from './align-ratings-to-bins.js';
 export { alignRatingsToWindows, type WindowOptions } from './align-ratings-to-windows.js';
 export type { AlignedPair } from './aligned-pair.js';
 export type { AlignedRow } from './aligned-row.js';
-export { analyzePair, type PairAnalysis, type PairAnalysisOptions } from './analyze-pair.js';
+export { analysePair, type PairAnalysis, type PairAnalysisOptions } from './analyse-pair.js';
 export { betweenPersonCorrelation, personMeans, type BetweenWeighting, type PersonMeans } from './between-person-correlation.js';
 export { binsPerPerson, type BinsPerPerson } from './bins-per-person.js';
 export { entryScoreColumns, entryScoreFromRecord, type EntryScore } from './entry-score.js';
