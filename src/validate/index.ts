@@ -3,7 +3,7 @@ export { alignRatingsToWindows, type WindowOptions } from './align-ratings-to-wi
 export type { AlignedPair } from './aligned-pair.js';
 export type { AlignedRow } from './aligned-row.js';
 export { analysePair, type PairAnalysis, type PairAnalysisOptions } from './analyse-pair.js';
-export { betweenPersonCorrelation, personMeans, type BetweenWeighting, type PersonMeans } from './between-person-correlation.js';
+export { betweenPersonCorrelation, personMeans, type PersonMeans } from './between-person-correlation.js';
 export { binsPerPerson, type BinsPerPerson } from './bins-per-person.js';
 export { entryScoreColumns, entryScoreFromRecord, type EntryScore } from './entry-score.js';
 export { pairVerdict, VERDICT_THRESHOLDS, type Verdict, type VerdictWarning } from './pair-verdict.js';
