@@ -1,5 +1,5 @@
 import { createReadStream } from 'node:fs';
-import { lstat, readdir, readFile, rm, stat } from 'node:fs/promises';
+import { readdir, readFile, rm, stat } from 'node:fs/promises';
 import { extname, join, relative } from 'node:path';
 import { StringDecoder } from 'node:string_decoder';
 import { usageError } from '../errors.js';
