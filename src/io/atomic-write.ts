@@ -102,9 +102,16 @@ export async function openAtomicLineWriter(path: string): Promise<AtomicLineWrit
     write: (line: string) => writeWith(3 * line.length, (into, at) => at + into.write(line, at, 'utf8')),
     writeWith,
     append(text: string) {
-      if (text === '') return undefined;
+      // Into the same buffer as lines (a UTF-16 code unit takes at most 3 bytes of UTF-8).
+      const most = 3 * text.length;
+      if (used + most <= SIZE) {
+        used += buffer.write(text, used, 'utf8');
+        return undefined;
+      }
       const flushed = flush();
-      return send(Buffer.from(text, 'utf8')) ?? flushed;
+      if (most > SIZE) return send(Buffer.from(text, 'utf8')) ?? flushed;
+      used += buffer.write(text, used, 'utf8');
+      return flushed;
     },
     async commit() {
       await flush();

@@ -90,6 +90,17 @@ describe('forgetPerson removes a person from every output of a study folder', ()
     expect(result.changed).toEqual([{ file: 'scores.csv', removed: 2 }]);
     expect(readFileSync(join(dir, 'scores.csv'), 'utf8')).toBe(keep.join(''));
   });
+  it('leaves a table larger than the writer\'s buffer untouched when the person is not in it, and removes them from another', async () => {
+    const dir = join(tmp.dir, 'big');
+    mkdirSync(dir, { recursive: true });
+    const big = 'person,text\r\n' + Array.from({ length: 40_000 }, (_, i) => `pB,"row ${i}, ""quoted""\r\nsecond line"\r\n`).join('');
+    tmp.write(join('big', 'a-big.csv'), big);
+    tmp.write(join('big', 'b-small.csv'), 'person,n\npA,1\npB,2\n');
+    const result = await forgetPerson(dir, { ids: ['pA'], record: 'pA', at: '2025-04-01T10:00:00Z' });
+    expect(result.changed).toEqual([{ file: 'b-small.csv', removed: 1 }]);
+    expect(readFileSync(join(dir, 'a-big.csv'), 'utf8')).toBe(big);
+    expect(readFileSync(join(dir, 'b-small.csv'), 'utf8')).toBe('person,n\npB,2\n');
+  });
 });
 
 describe('createPersonRowFilter and removePersonFromJson', () => {
