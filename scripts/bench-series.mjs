@@ -43,7 +43,9 @@ if (process.argv[2] === '--child-run') {
 if (process.argv[2] === '--child-synthetic') {
   const persons = Number(process.argv[3]);
   const perBin = Number(process.argv[4]);
-  const { createSeriesState, addSeriesEntry, buildPersonSeries } = await import('../dist/series/build-series.js');
+  const { createSeriesState } = await import('../dist/series/create-series-state.js');
+  const { addSeriesEntry } = await import('../dist/series/add-series-entry.js');
+  const { buildPersonSeries } = await import('../dist/series/build-person-series.js');
   const { parseBinSpec } = await import('../dist/series/bin-spec.js');
   const baseline = peakMb();
   const state = createSeriesState({ bin: parseBinSpec('1h'), dayStart: 0, minWords: 1, fill: 'none', maxFill: 0, detrend: false, reducers: ['weighted', 'mean'] }, 2);

@@ -40,7 +40,10 @@ export { scoreVader, type VaderLexicon, type VaderScores } from './score/score-v
 
 // series
 export { parseBinSpec, parseClockTime, parseExcludedHours, type BinSpec } from './series/bin-spec.js';
-export { createSeriesState, addSeriesEntry, buildPersonSeries, type SeriesOptions, type SeriesRow, type SeriesEntry } from './series/build-series.js';
+export { createSeriesState } from './series/create-series-state.js';
+export { addSeriesEntry } from './series/add-series-entry.js';
+export { buildPersonSeries } from './series/build-person-series.js';
+export type { SeriesOptions, SeriesRow, SeriesEntry } from './series/series-types.js';
 
 // runners (files)
 export { runScore, type RunScoreOptions, type RunScoreResult } from './io/run-score.js';
@@ -116,7 +119,7 @@ export {
 
 // validation against self-reports
 export {
-  validateSeries, DEFAULT_VALIDATE_OPTIONS, analyzePair, pairVerdict, VERDICT_THRESHOLDS, betweenPersonCorrelation, personMeans,
+  validateSeries, DEFAULT_VALIDATE_OPTIONS, analysePair, pairVerdict, VERDICT_THRESHOLDS, betweenPersonCorrelation, personMeans,
   perPersonCorrelations, wordCountReliability, binsPerPerson, alignRatingsToBins, alignRatingsToWindows,
   parseRatingScales, ratingValues, ratingColumns, seriesBinFromRecord, seriesScoreColumns, entryScoreColumns, entryScoreFromRecord,
   type ValidateInput, type ValidateOptions, type ValidationResult, type PairAnalysis, type Verdict, type VerdictWarning,

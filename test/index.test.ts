@@ -13,7 +13,7 @@ const EXPORTS = [
   'PSEUDONYM_KEY_ENV', 'REDACTION_TOKENS', 'REPORT_CAUTIONS', 'SEEDS_SIGNATURE', 'TERM_AUDIT_FILES',
   'TOOL_VERSION', 'TOP_TERMS_COLUMNS', 'TokenKind', 'VERDICT_THRESHOLDS', 'WORDNET_FILE_SUFFIX',
   'WORDNET_LICENSE', 'addSeriesEntry', 'alignRatingsToBins', 'alignRatingsToWindows',
-  'analyseDynamics', 'analyzePair', 'applyLexiconOverrides', 'autoWorkers', 'betweenPersonCorrelation',
+  'analyseDynamics', 'analysePair', 'applyLexiconOverrides', 'autoWorkers', 'betweenPersonCorrelation',
   'binsPerPerson', 'buildManifest', 'buildPersonSeries', 'buildReportData', 'buildSeedLexicon',
   'buildZoneTable', 'bundledLexiconNames', 'categoryScore', 'chatStampTime', 'cholesky',
   'chooseEmbeddingDimension', 'clusterBootstrap', 'compileDiaryHeading', 'compileLexicon',

@@ -1,6 +1,5 @@
 import { SHARD_HELP, shardFrom } from './shard-option.js';
 import { shardOfPerson } from '../shard/shard-of-person.js';
-import { readFile } from 'node:fs/promises';
 import { Option, type Command } from 'commander';
 import { usageError } from '../errors.js';
 import type { DedupeOptions } from '../ingest/import/create-deduplicator.js';

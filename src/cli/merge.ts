@@ -2,7 +2,8 @@ import type { Command } from 'commander';
 import { relative } from 'node:path';
 import { mergeShards } from '../io/merge-shards.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
-import { studyStages } from './study-stages.js';
+import { defaultStudyStages } from '../io/study-stages.js';
+import { crossMapProgress } from './cross-map-progress.js';
 
 /** `lexichron merge SHARD_DIR... --out DIR`: one run's outputs from its shards. */
 export function registerMerge(program: Command): void {
@@ -13,7 +14,7 @@ export function registerMerge(program: Command): void {
     .option('-o, --out <dir>', 'output folder (default: the study file\'s "out")')
     .option('--allow-symlinks', 'accept an output folder that is a symbolic link (refused by default)')
     .action(async (shardDirs: string[], opts: Record<string, unknown>) => {
-      const result = await mergeShards({ shardDirs, now: new Date().toISOString(), stages: studyStages(), env: process.env, allowSymlinks: opts.allowSymlinks === true, ...(opts.out !== undefined ? { out: String(opts.out) } : {}) });
+      const result = await mergeShards({ shardDirs, now: new Date().toISOString(), stages: defaultStudyStages({ dynamics: { onProgress: crossMapProgress() } }), env: process.env, allowSymlinks: opts.allowSymlinks === true, ...(opts.out !== undefined ? { out: String(opts.out) } : {}) });
       process.stderr.write(`merged ${shardDirs.length} shard${shardDirs.length === 1 ? '' : 's'}\n${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;
       process.stderr.write(`series: ${s.persons} persons, ${s.bins} bins, ${s.observed} observed\n`);

@@ -4,7 +4,8 @@ import { runStudy } from '../pipeline.js';
 import { reconciliationText } from '../report/reconciliation-text.js';
 import { inputError, usageError } from '../errors.js';
 import { parseMaxRejects, progressReporter, tooManyRejects } from './common-options.js';
-import { studyStages } from './study-stages.js';
+import { defaultStudyStages } from '../io/study-stages.js';
+import { crossMapProgress } from './cross-map-progress.js';
 import { SHARD_HELP, shardFrom } from './shard-option.js';
 
 /** `lexichron run STUDY.json`: score, series and the optional stages in one command. */
@@ -22,7 +23,7 @@ export function registerRun(program: Command): void {
       const progress = progressReporter('scored');
       const shard = shardFrom(opts.shard);
       if (shard && opts.out === undefined) throw usageError(`--shard ${shard.index}/${shard.count} needs --out DIR: every shard writes a folder of its own (e.g. --out parts/${shard.index}), which \`lexichron merge\` then puts together.`);
-      const options = { now: new Date().toISOString(), stages: studyStages(), seed: Number(opts.seed), onProgress: progress.update, env: process.env, allowSymlinks: opts.allowSymlinks === true, ...(opts.out !== undefined ? { out: String(opts.out) } : {}), ...(shard ? { shard } : {}), ...(opts.names ? { names: opts.names as 'as-written' | 'syntactic' } : {}) };
+      const options = { now: new Date().toISOString(), stages: defaultStudyStages({ dynamics: { onProgress: crossMapProgress() } }), seed: Number(opts.seed), onProgress: progress.update, env: process.env, allowSymlinks: opts.allowSymlinks === true, ...(opts.out !== undefined ? { out: String(opts.out) } : {}), ...(shard ? { shard } : {}), ...(opts.names ? { names: opts.names as 'as-written' | 'syntactic' } : {}) };
       const result = await runStudy(studyPath, options).finally(progress.stop);
       process.stderr.write(`${reconciliationText(result.score.reconciliation)}\n`);
       const s = result.series;

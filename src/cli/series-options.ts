@@ -1,7 +1,5 @@
 import { Option, type Command } from 'commander';
 
-export { parseReducers, seriesOptionsFrom } from '../series/series-options.js';
-
 /** Adds the options of the series stage. */
 export function addSeriesOptions(command: Command): Command {
   return command

@@ -5,7 +5,8 @@ import { readWindowsFile } from '../io/read-windows-file.js';
 import { readZoneFile } from '../io/read-zone-file.js';
 import { zoneOnDay } from '../series/zone-on-day.js';
 import { SHARD_HELP, shardFrom } from './shard-option.js';
-import { addSeriesOptions, parseReducers, seriesOptionsFrom } from './series-options.js';
+import { parseReducers, seriesOptionsFrom } from '../series/series-options.js';
+import { addSeriesOptions } from './series-options.js';
 
 /** `lexichron series SCORES... --bin DURATION --out FILE` */
 export function registerSeries(program: Command): void {

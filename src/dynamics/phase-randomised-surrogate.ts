@@ -92,11 +92,6 @@ export function phaseRandomisedSurrogates(
   });
 }
 
-/** One phase-randomised surrogate ({@link phaseRandomisedSurrogates}). */
-export function phaseRandomisedSurrogate(values: readonly (number | undefined)[], random: RandomSource, segment?: readonly number[]): (number | undefined)[] {
-  return phaseRandomisedSurrogates(values, 1, random, segment)[0] as (number | undefined)[];
-}
-
 /** The bins of each segment, in order of first appearance (one segment of every bin when `segment` is absent). */
 export function segmentPositions(length: number, segment?: readonly number[]): number[][] {
   if (!segment) return [Array.from({ length }, (_, t) => t)];

@@ -42,8 +42,3 @@ export function seasonalSurrogates(
   }
   return phaseRandomisedSurrogates(residuals, count, random, segment).map((shuffled) => values.map((v, t) => (isNumber(v) ? (cycle[t] as number) + (shuffled[t] as number) : v)));
 }
-
-/** One seasonal surrogate ({@link seasonalSurrogates}). */
-export function seasonalSurrogate(values: readonly (number | undefined)[], phase: readonly number[], random: RandomSource, segment?: readonly number[]): (number | undefined)[] {
-  return seasonalSurrogates(values, phase, 1, random, segment)[0] as (number | undefined)[];
-}

@@ -48,6 +48,8 @@ export interface AtomicLineWriter {
    * from parts without joining them into a string first. Returns as `write` does.
    */
   writeWith(most: number, fill: (buffer: Buffer, at: number) => number): Promise<void> | undefined;
+  /** Appends `text` as UTF-8, exactly as it is (no line end added). Returns as `write` does. */
+  append(text: string): Promise<void> | undefined;
   commit(): Promise<void>;
   abort(): Promise<void>;
 }
@@ -99,6 +101,18 @@ export async function openAtomicLineWriter(path: string): Promise<AtomicLineWrit
     // A UTF-16 code unit takes at most 3 bytes of UTF-8.
     write: (line: string) => writeWith(3 * line.length, (into, at) => at + into.write(line, at, 'utf8')),
     writeWith,
+    append(text: string) {
+      // Into the same buffer as lines (a UTF-16 code unit takes at most 3 bytes of UTF-8).
+      const most = 3 * text.length;
+      if (used + most <= SIZE) {
+        used += buffer.write(text, used, 'utf8');
+        return undefined;
+      }
+      const flushed = flush();
+      if (most > SIZE) return send(Buffer.from(text, 'utf8')) ?? flushed;
+      used += buffer.write(text, used, 'utf8');
+      return flushed;
+    },
     async commit() {
       await flush();
       await new Promise<void>((resolve, reject) => stream.end((error?: Error | null) => (error ? reject(error) : resolve())));

@@ -1,7 +1,6 @@
 import { createReadStream } from 'node:fs';
-import { lstat, readdir, readFile, rm, stat } from 'node:fs/promises';
+import { readdir, readFile, rm, stat } from 'node:fs/promises';
 import { extname, join, relative } from 'node:path';
-import { createInterface } from 'node:readline';
 import { StringDecoder } from 'node:string_decoder';
 import { usageError } from '../errors.js';
 import { createPersonRowFilter } from '../privacy/create-person-row-filter.js';
@@ -83,11 +82,8 @@ async function filterTable(path: string, file: string, format: 'csv' | 'tsv' | '
   const writer = await openAtomicLineWriter(path);
   const input = createReadStream(path, { encoding: 'utf8' });
   try {
-    const lines = createInterface({ input, crlfDelay: Infinity });
-    for await (const line of lines) {
-      for (const out of filter.push(line)) await writer.write(out);
-    }
-    for (const out of filter.end()) await writer.write(out);
+    for await (const text of input as AsyncIterable<string>) await writer.append(filter.push(text));
+    await writer.append(filter.end());
   } catch (error) {
     await writer.abort();
     throw error;

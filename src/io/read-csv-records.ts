@@ -1,31 +1,46 @@
 import { createReadStream } from 'node:fs';
+import Papa from 'papaparse';
 
 /**
  * The records of a CSV file written by lexichron (RFC 4180, `\n` line ends) as their exact text,
- * without the line end: a line break inside a quoted field stays inside its record (a record
- * ends at a `\n` after an even number of `"`). Streamed; for copying records byte for byte.
+ * without the line end: papaparse finds where each record ends (a line break inside a quoted
+ * field stays inside its record). Streamed; for copying records byte for byte.
  */
 export async function* readCsvRecords(path: string): AsyncGenerator<string> {
   const stream = createReadStream(path, { encoding: 'utf8', highWaterMark: 1 << 20 });
-  let rest = '';
   let pending = '';
-  let quotes = 0;
   for await (const chunk of stream as AsyncIterable<string>) {
-    const text = rest + chunk;
-    let start = 0;
-    for (let nl = text.indexOf('\n'); nl >= 0; nl = text.indexOf('\n', start)) {
-      const line = text.slice(start, nl);
-      start = nl + 1;
-      for (let i = line.indexOf('"'); i >= 0; i = line.indexOf('"', i + 1)) quotes++;
-      if (quotes % 2 === 1) {
-        pending += `${line}\n`;
-        continue;
-      }
-      yield pending + line;
-      pending = '';
-      quotes = 0;
-    }
-    rest = text.slice(start);
+    const { records, rest } = completeRecords(pending + chunk, false);
+    pending = rest;
+    yield* records;
   }
-  if (rest !== '' || pending !== '') yield pending + rest;
+  yield* completeRecords(pending, true).records;
+}
+
+/**
+ * The whole records at the start of `text` (all of it when `final`: a last record without a line
+ * end, or an unclosed quoted field read to the end), and the text after them.
+ */
+function completeRecords(text: string, final: boolean): { records: string[]; rest: string } {
+  const records: string[] = [];
+  let done = 0;
+  let stopped = false;
+  Papa.parse<string[]>(text, {
+    delimiter: ',',
+    newline: '\n',
+    step(result) {
+      if (stopped) return;
+      const cursor = result.meta.cursor;
+      const raw = text.slice(done, cursor);
+      if (raw === '') return;
+      const ended = raw.endsWith('\n') && !result.errors.some((e) => e.code === 'MissingQuotes');
+      if (!ended && !final) {
+        stopped = true;
+        return;
+      }
+      done = cursor;
+      records.push(ended ? raw.slice(0, -1) : raw);
+    },
+  });
+  return { records, rest: text.slice(done) };
 }

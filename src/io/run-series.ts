@@ -11,7 +11,10 @@ import { tableResource, type TableResource } from '../report/data-dictionary.js'
 import { formatNumber } from '../report/format-number.js';
 import { seriesHeader, seriesRow, type SeriesLayout } from '../report/series-rows.js';
 import type { BinReducer } from '../series/bin-accumulator.js';
-import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesOptions } from '../series/build-series.js';
+import { addSeriesEntry } from '../series/add-series-entry.js';
+import { buildPersonSeries } from '../series/build-person-series.js';
+import { createSeriesState } from '../series/create-series-state.js';
+import type { SeriesOptions } from '../series/series-types.js';
 import { dateOfDayNumber } from '../series/local-day.js';
 import type { Diagnostic } from '../types.js';
 import { openAtomicLineWriter } from './atomic-write.js';

@@ -1,5 +1,5 @@
 import { join, relative } from 'node:path';
-import type { StageOutput, StudyContext, StudyStage } from '../pipeline.js';
+import type { StageOutput, StudyStage } from '../pipeline.js';
 import { fileDigest } from './run-score.js';
 import { runDynamics, type RatingsByBin, type RunDynamicsOptions } from './run-dynamics.js';
 import { runValidate } from './run-validate.js';

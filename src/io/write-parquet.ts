@@ -1,5 +1,6 @@
 import { rename, rm } from 'node:fs/promises';
-import { readFile } from 'node:fs/promises';
+import { open } from 'node:fs/promises';
+import Papa from 'papaparse';
 import { usageError } from '../errors.js';
 import { temporaryPathFor } from './own-temporaries.js';
 
@@ -50,8 +51,7 @@ export function parquetColumns(header: readonly string[]): string[] {
  */
 export async function writeParquet(csvPath: string, table: ParquetTable): Promise<string> {
   const out = csvPath.replace(/\.csv$/i, '') + '.parquet';
-  const firstLine = (await readFile(csvPath, 'utf8').then((t) => t.slice(0, t.indexOf('\n')))).split(',');
-  if (firstLine.some((c) => c.includes('"'))) throw usageError(`\`${csvPath}\` has quoted column names; only files written by lexichron can be copied to Parquet.`);
+  const firstLine = await headerOf(csvPath);
   const { DuckDBInstance } = await import('@duckdb/node-api');
   const db = await DuckDBInstance.create(':memory:', { autoinstall_known_extensions: 'false', autoload_known_extensions: 'true', threads: '1' });
   const connection = await db.connect();
@@ -68,4 +68,16 @@ export async function writeParquet(csvPath: string, table: ParquetTable): Promis
     db.closeSync();
   }
   return out;
+}
+
+/** The column names of a CSV written by lexichron: its first record, read by papaparse (RFC 4180 quoting) from the file's first 1 MB. */
+async function headerOf(csvPath: string): Promise<string[]> {
+  const file = await open(csvPath, 'r');
+  try {
+    const { buffer, bytesRead } = await file.read({ buffer: Buffer.alloc(1 << 20), position: 0 });
+    const text = buffer.subarray(0, bytesRead).toString('utf8');
+    return Papa.parse<string[]>(text, { delimiter: ',', newline: '\n', preview: 1 }).data[0] ?? [];
+  } finally {
+    await file.close();
+  }
 }

@@ -1,6 +1,6 @@
 import { formatLocal } from '../ingest/parse-instant.js';
 import { zoneOffset } from '../ingest/zone-offset.js';
-import type { SeriesRow } from '../series/build-series.js';
+import type { SeriesRow } from '../series/series-types.js';
 import { csvRow } from './csv.js';
 import { formatNumber } from './format-number.js';
 

@@ -43,11 +43,6 @@ export function newBinSlot(store: BinStore): number {
   return store.size++;
 }
 
-/** Bytes held by the store's chunks. */
-export function binStoreBytes(store: BinStore): number {
-  return store.chunks.length * store.stride * CHUNK * 8;
-}
-
 /** Adds one entry to slot `slot`: its word count, score values (undefined = no value) and matched terms. */
 export function addToBin(store: BinStore, slot: number, words: number, values: ReadonlyArray<number | undefined>, matched: ReadonlyArray<number>): void {
   const d = store.chunks[slot >>> CHUNK_BITS] as Float64Array;

@@ -2,7 +2,7 @@ import { isCalendarDate } from '../ingest/is-calendar-date.js';
 import { usageError } from '../errors.js';
 import type { BinReducer } from './bin-accumulator.js';
 import { parseBinSpec, parseClockTime, parseExcludedHours } from './bin-spec.js';
-import type { FillMethod, SeriesOptions } from './build-series.js';
+import type { FillMethod, SeriesOptions } from './series-types.js';
 import { dayNumberOfDate } from './local-day.js';
 
 /*

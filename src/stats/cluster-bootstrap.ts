@@ -1,3 +1,4 @@
+import { quantile } from './quantile.js';
 import { randomInteger, type RandomSource } from './random.js';
 import { notEstimable, type StatResult } from './stat-result.js';
 
@@ -29,7 +30,8 @@ export interface ClusterBootstrapOptions {
  * Cluster (case) bootstrap: resamples whole clusters (persons) with replacement, keeping each
  * cluster's observations together (Davison & Hinkley 1997, Bootstrap Methods and their
  * Application, §3.8; Field & Welsh 2007), recomputes `statistic` on each resample and returns the
- * percentile interval (quantiles (1−level)/2 and (1+level)/2, type-7 interpolation).
+ * percentile interval (quantiles (1−level)/2 and (1+level)/2 by `quantile`: Hyndman & Fan 1996
+ * type 7, R's default `quantile`).
  *
  * `statistic` receives the resampled clusters as an array; a cluster drawn twice appears twice
  * and must be treated as two distinct clusters (use its array index as the cluster id). A
@@ -66,20 +68,12 @@ export function clusterBootstrap<T>(
   });
   return {
     ok: true,
-    ciLow: quantileSorted(draws, (1 - level) / 2),
-    ciHigh: quantileSorted(draws, (1 + level) / 2),
+    // At least 2 finite draws, so both quantiles exist for a level in (0, 1).
+    ciLow: quantile(draws, (1 - level) / 2) as number,
+    ciHigh: quantile(draws, (1 + level) / 2) as number,
     se: Math.sqrt(m2 / (succeeded - 1)),
     replicates,
     succeeded,
     level,
   };
-}
-
-/** Type-7 (R default, d3 `quantileSorted`) quantile of sorted values. */
-function quantileSorted(sorted: readonly number[], p: number): number {
-  const h = (sorted.length - 1) * p;
-  const lo = Math.floor(h);
-  const a = sorted[lo] as number;
-  const b = sorted[Math.min(lo + 1, sorted.length - 1)] as number;
-  return a + (h - lo) * (b - a);
 }

@@ -29,15 +29,14 @@ export interface OneWayIntraclassCorrelation {
  *
  * MSb = Σnᵢ(ȳᵢ − ȳ)²/(g − 1), MSw = ΣΣ(y − ȳᵢ)²/(N − g) (two-pass, around group means),
  * ICC(1) = (MSb − MSw)/(MSb + (n₀ − 1)MSw), ICC(1,k) = (MSb − MSw)/MSb.
- * `groupSize: 'mean'` uses the plain mean group size N/g instead of n₀, as R psych::statsBy does
- * (identical for balanced groups). Missing values are skipped. Not estimable with fewer than 2 groups, no within-group
+ * (R psych::statsBy uses the plain mean group size N/g instead of n₀: identical for balanced
+ * groups.) Missing values are skipped. Not estimable with fewer than 2 groups, no within-group
  * replication, or no variation at all.
  */
 export function oneWayIntraclassCorrelation<T>(
   values: Iterable<T>,
   groupof: (d: T, i: number) => string,
   valueof: (d: T, i: number) => number | undefined | null,
-  options: { groupSize?: 'n0' | 'mean' } = {},
 ): StatResult<OneWayIntraclassCorrelation> {
   const groups = new Map<string, number[]>();
   let i = -1;
@@ -79,7 +78,7 @@ export function oneWayIntraclassCorrelation<T>(
   const msBetween = ssBetween / df1;
   const msWithin = ssWithin / df2;
   if (!(msBetween > 0) && !(msWithin > 0)) return notEstimable('zero_variance', 'the variable is constant, so no intraclass correlation can be computed');
-  const n0 = options.groupSize === 'mean' ? n / g : (n - sumSquaredSizes / n) / df1;
+  const n0 = (n - sumSquaredSizes / n) / df1;
   const f = msWithin > 0 ? msBetween / msWithin : Infinity;
   const p = Number.isFinite(f) ? fUpperTail(f, df1, df2) : 0;
   const icc1 = (msBetween - msWithin) / (msBetween + (n0 - 1) * msWithin);

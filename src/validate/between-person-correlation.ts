@@ -1,8 +1,7 @@
 import { groupBy } from '../stats/group-by.js';
 import { isNumber } from '../stats/is-number.js';
 import { mean } from '../stats/mean.js';
-import { studentTTwoSidedP } from '../stats/distributions.js';
-import { fisherInterval, pearsonCorrelation, type Correlation } from '../stats/pearson-correlation.js';
+import { pearsonCorrelation, type Correlation } from '../stats/pearson-correlation.js';
 import type { StatResult } from '../stats/stat-result.js';
 import type { AlignedPair } from './aligned-pair.js';
 
@@ -29,30 +28,11 @@ export function personMeans(pairs: Iterable<AlignedPair>): PersonMeans[] {
   return out;
 }
 
-/** How person means are weighted in {@link betweenPersonCorrelation}. */
-export type BetweenWeighting = 'persons' | 'observations';
-
 /**
- * Between-person correlation: Pearson's r of the person means of x and y.
- *
- * `persons` (default): one point per person, unweighted, as Bland & Altman's (1995) correlation
- * of subject means. `observations`: each person mean weighted by the person's number of pairs,
- * which is what R psych::statsBy reports as `rbg` (it correlates the group means attached to every
- * row). Either way n, df and the Fisher-z interval (n − 3) count persons, not observations.
+ * Between-person correlation: Pearson's r of the person means of x and y, one unweighted point
+ * per person, as Bland & Altman's (1995) correlation of subject means; n, df and the Fisher-z
+ * interval (n − 3) count persons, not observations.
  */
-export function betweenPersonCorrelation(pairs: Iterable<AlignedPair>, level = 0.95, weighting: BetweenWeighting = 'persons'): StatResult<Correlation> {
-  const means = personMeans(pairs);
-  const unweighted = pearsonCorrelation(means, (d) => d.x, (d) => d.y, { level });
-  if (weighting === 'persons' || !unweighted.ok) return unweighted;
-  const replicated = pearsonCorrelation(
-    means.flatMap((m) => Array.from({ length: m.pairs }, () => m)),
-    (d) => d.x,
-    (d) => d.y,
-  );
-  if (!replicated.ok) return replicated;
-  const r = replicated.r;
-  const [ciLow, ciHigh] = fisherInterval(r, means.length - 3, level);
-  const df = means.length - 2;
-  const p = Math.abs(r) === 1 ? 0 : studentTTwoSidedP(r * Math.sqrt(df / (1 - r * r)), df);
-  return { ...unweighted, r, p, ciLow, ciHigh };
+export function betweenPersonCorrelation(pairs: Iterable<AlignedPair>, level = 0.95): StatResult<Correlation> {
+  return pearsonCorrelation(personMeans(pairs), (d) => d.x, (d) => d.y, { level });
 }

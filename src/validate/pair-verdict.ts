@@ -112,7 +112,7 @@ export function pairVerdict(input: {
   iccRating: StatResult<OneWayIntraclassCorrelation>;
   bootstrapWithin: StatResult<BootstrapInterval>;
   bootstrapBetween: StatResult<BootstrapInterval>;
-  /** The mixed model's reading of the within-person slope, when fitted (see `analyzePair`). */
+  /** The mixed model's reading of the within-person slope, when fitted (see `analysePair`). */
   model?: ModelReading;
 }): Verdict {
   const warnings: VerdictWarning[] = [];

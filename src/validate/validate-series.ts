@@ -6,7 +6,7 @@ import type { Diagnostic } from '../types.js';
 import { alignRatingsToBins } from './align-ratings-to-bins.js';
 import { alignRatingsToWindows } from './align-ratings-to-windows.js';
 import type { AlignedRow } from './aligned-row.js';
-import { analyzePair, type PairAnalysis, type RandomSlopeChoice } from './analyze-pair.js';
+import { analysePair, type PairAnalysis, type RandomSlopeChoice } from './analyse-pair.js';
 import { binsPerPerson, type BinsPerPerson } from './bins-per-person.js';
 import type { EntryScore } from './entry-score.js';
 import type { Rating } from './rating.js';
@@ -81,7 +81,7 @@ export interface ValidationResult {
 
 /**
  * Validates text scores against self-reports: aligns them (by bins or by prompt windows), then
- * analyses every score × rating pair with {@link analyzePair}, estimates the word-count
+ * analyses every score × rating pair with {@link analysePair}, estimates the word-count
  * reliability of each score from the entry-level file when given, and counts the bins behind
  * each person mean. Pure: the randomness of each pair is seeded from `seed`, the score and the
  * rating, so results do not depend on the order in which pairs are analysed.
@@ -122,7 +122,7 @@ export function validateSeries(input: ValidateInput, options: Partial<ValidateOp
   const pairs: ValidationResult['pairs'] = [];
   for (const score of input.scoreColumns) {
     for (const rating of input.ratingColumns) {
-      const analysis = analyzePair(
+      const analysis = analysePair(
         rows.map((r) => ({ person: r.person, x: r.scores[score], y: r.ratings[rating] })),
         { random: random(`${o.seed}\u0000${score}\u0000${rating}`), replicates: o.replicates, minPairs: o.minPairs, level: o.level, inference: o.inference, randomSlopes: o.randomSlopes },
       );

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { random } from '../../src/stats/random.js';
 import { librarySizes } from '../../src/dynamics/library-sizes.js';
-import { seasonalSurrogate } from '../../src/dynamics/seasonal-surrogate.js';
+import { seasonalSurrogates } from '../../src/dynamics/seasonal-surrogate.js';
 import { stackSegments } from '../../src/dynamics/stack-segments.js';
 import { leastSquares } from '../../src/dynamics/least-squares.js';
 import { simplexEstimate } from '../../src/dynamics/simplex-estimate.js';
@@ -18,7 +18,7 @@ describe('dynamics building blocks', () => {
     const values = [0, 10, 1, 11, undefined, 10, 0, 12, 5, 0, 6, 1, 5, 0, 7, 1];
     const phase = [0, 1, 0, 1, 0, 1, 0, 1, 0, 1, 0, 1, 0, 1, 0, 1];
     const segment = [0, 0, 0, 0, 0, 0, 0, 0, 1, 1, 1, 1, 1, 1, 1, 1];
-    for (const seasonal of [seasonalSurrogate(values, phase, random(2), segment), seasonalSurrogate(values, phase, random(3), segment)]) {
+    for (const seasonal of [seasonalSurrogates(values, phase, 1, random(2), segment)[0]!, seasonalSurrogates(values, phase, 1, random(3), segment)[0]!]) {
       expect(seasonal[4]).toBeUndefined();
       const meanAt = (k: number, p: number) => {
         const xs = seasonal.filter((v, t) => segment[t] === k && phase[t] === p && v !== undefined) as number[];

@@ -77,26 +77,64 @@ describe('forgetPerson removes a person from every output of a study folder', ()
   it('refuses a path that is not a folder', async () => {
     await expect(forgetPerson(tmp.path('missing'), { ids: ['pA'], record: 'pA', at: 'x' })).rejects.toThrow(/not a folder/);
   });
+  it('keeps every other CSV row byte for byte, CRLF line ends and quoted commas, quotes and line breaks included (RFC 4180 section 2)', async () => {
+    const dir = join(tmp.dir, 'rfc4180');
+    mkdirSync(dir, { recursive: true });
+    // RFC 4180: CRLF between records (rule 1); fields holding commas, quotes ("" inside, rule 7) and
+    // line breaks (CRLF, and a lone CR or LF as other writers leave them) are enclosed in quotes
+    // (rule 6); the last record has no line end (rule 2).
+    const keep = ['person,text,n\r\n', 'pB,"a, b\r\nc ""d"", e",1\r\n', 'pC,"x\ry",2\r\n', 'pD,"one\ntwo, ""three""",3'];
+    const drop = ['pA,"q, ""pB""\r\npB,z",9\r\n', 'pA,plain,8\r\n'];
+    tmp.write(join('rfc4180', 'scores.csv'), [keep[0], drop[0], keep[1], keep[2], drop[1], keep[3]].join(''));
+    const result = await forgetPerson(dir, { ids: ['pA'], record: 'pA', at: '2025-04-01T10:00:00Z' });
+    expect(result.changed).toEqual([{ file: 'scores.csv', removed: 2 }]);
+    expect(readFileSync(join(dir, 'scores.csv'), 'utf8')).toBe(keep.join(''));
+  });
+  it('leaves a table larger than the writer\'s buffer untouched when the person is not in it, and removes them from another', async () => {
+    const dir = join(tmp.dir, 'big');
+    mkdirSync(dir, { recursive: true });
+    const big = 'person,text\r\n' + Array.from({ length: 40_000 }, (_, i) => `pB,"row ${i}, ""quoted""\r\nsecond line"\r\n`).join('');
+    tmp.write(join('big', 'a-big.csv'), big);
+    tmp.write(join('big', 'b-small.csv'), 'person,n\npA,1\npB,2\n');
+    const result = await forgetPerson(dir, { ids: ['pA'], record: 'pA', at: '2025-04-01T10:00:00Z' });
+    expect(result.changed).toEqual([{ file: 'b-small.csv', removed: 1 }]);
+    expect(readFileSync(join(dir, 'a-big.csv'), 'utf8')).toBe(big);
+    expect(readFileSync(join(dir, 'b-small.csv'), 'utf8')).toBe('person,n\npB,2\n');
+  });
 });
 
 describe('createPersonRowFilter and removePersonFromJson', () => {
+  const run = (filter: ReturnType<typeof createPersonRowFilter>, pieces: readonly string[]): string => pieces.map((p) => filter.push(p)).join('') + filter.end();
   it('keeps a CSV record whose quoted field spans lines together (RFC 4180 section 2 rule 6)', () => {
     const filter = createPersonRowFilter(new Set(['x']), 'csv');
-    const out = ['person,text', 'x,"a', 'b"', 'y,"c', 'd"', '"x","q ""x"", r"', 'z,x'].flatMap((l) => filter.push(l));
-    expect(out).toEqual(['person,text', 'y,"c', 'd"', 'z,x']);
+    const out = run(filter, ['person,text\nx,"a\nb"\ny,"c\nd"\n"x","q ""x"", r"\nz,x\n']);
+    expect(out).toBe('person,text\ny,"c\nd"\nz,x\n');
     expect(filter.removed).toBe(2);
+  });
+  it('gives the same text wherever the file is cut into pieces, inside quoted fields and CRLF line ends too (RFC 4180 section 2)', () => {
+    const text = 'person,text\r\nx,"a, ""b""\r\nx,c"\r\ny,"d\re"\r\nx,f\r\ny,"g\nh, ""i"""';
+    const expected = 'person,text\r\ny,"d\re"\r\ny,"g\nh, ""i"""';
+    for (let cut = 0; cut <= text.length; cut++) {
+      for (const second of [cut, Math.min(text.length, cut + 3)]) {
+        const filter = createPersonRowFilter(new Set(['x']), 'csv');
+        expect(run(filter, [text.slice(0, cut), text.slice(cut, second), text.slice(second)]), `cut at ${cut}, ${second}`).toBe(expected);
+        expect(filter.removed).toBe(2);
+      }
+    }
   });
   it('matches a person id that the CSV writers neutralised as a formula cell (OWASP CSV Injection)', () => {
     const filter = createPersonRowFilter(new Set(['=p1', '-p2']), 'csv');
-    const out = ['person,words', `"'=p1",3`, `"'-p2",4`, 'p3,5', `"'=p1x",6`].flatMap((l) => filter.push(l));
-    expect(out).toEqual(['person,words', 'p3,5', `"'=p1x",6`]);
+    const out = run(filter, ['person,words\n', `"'=p1",3\n"'-p2",4\np3,5\n"'=p1x",6\n`]);
+    expect(out).toBe(`person,words\np3,5\n"'=p1x",6\n`);
     expect(filter.removed).toBe(2);
   });
-  it('reads TSV and leaves a table without a person column alone', () => {
+  it('reads TSV and JSON Lines, and leaves a table without a person column alone', () => {
     const tsv = createPersonRowFilter(new Set(['x']), 'tsv');
-    expect(['person\tv', 'x\t1', 'y\t2'].flatMap((l) => tsv.push(l))).toEqual(['person\tv', 'y\t2']);
+    expect(run(tsv, ['person\tv\nx\t"1\ny\t2\n'])).toBe('person\tv\ny\t2\n');
+    const jsonl = createPersonRowFilter(new Set(['x']), 'jsonl');
+    expect(run(jsonl, ['{"person":"x"}\r\n{"pers', 'on":"y"}\r\nnot json\n{"person":"x"}'])).toBe('{"person":"y"}\r\nnot json\n');
     const none = createPersonRowFilter(new Set(['x']), 'csv');
-    expect(['id,v', 'x,1'].flatMap((l) => none.push(l))).toEqual(['id,v', 'x,1']);
+    expect(run(none, ['id,v\nx,1\n'])).toBe('id,v\nx,1\n');
     expect(none.hasPersonColumn).toBe(false);
   });
   it('treats a top-level JSON object of the person as the whole document', () => {

@@ -24,6 +24,12 @@ describe('readCsvRecords', () => {
     expect(parsed).toHaveLength(records.length);
   });
 
+  it('reads a quote inside an unquoted field as a character, as papaparse does, so the next records stay apart', async () => {
+    // RFC 4180 section 2 rule 5 keeps quotes out of unquoted fields; a hand-edited file may still
+    // hold one (5" screen). Counting quotes would join every line after it into one record.
+    const path = tmp.write('stray-quote.csv', 'id,text\n1,5" screen\n2,"x\ny"\n3,z\n');
+    expect(await collect(readCsvRecords(path))).toEqual(['id,text', '1,5" screen', '2,"x\ny"', '3,z']);
+  });
   it('gives nothing for an empty file', async () => {
     expect(await collect(readCsvRecords(tmp.write('empty.csv', '')))).toEqual([]);
   });

@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import { DuckDBInstance } from '@duckdb/node-api';
 import { describe, expect, it } from 'vitest';
+import { writeParquet } from '../../src/io/write-parquet.js';
 import { runCli } from '../support/run-cli.js';
 import { tempFolder } from '../support/temp-files.js';
 
@@ -32,6 +33,17 @@ async function readParquet(path: string): Promise<Array<Record<string, unknown>>
 }
 
 describe('Parquet outputs (--parquet)', () => {
+  it('reads the column names with papaparse, so a quoted name holding a comma becomes one column (RFC 4180 section 2 rule 6)', async () => {
+    const csv = tmp.write('quoted-names.csv', 'entry_id,person,"mine.a,b",words\ne1,p1,1.5,3\n');
+    const out = await writeParquet(csv, 'scores');
+    const db = await DuckDBInstance.create(':memory:', { autoinstall_known_extensions: 'false' });
+    const c = await db.connect();
+    const r = await c.runAndReadAll(`SELECT * FROM read_parquet('${out}')`);
+    expect(r.columnNames()).toEqual(['entry_id', 'person', 'mine.a,b', 'words']);
+    expect(r.getRowObjectsJS().map((row) => ({ ...row, words: Number(row.words) }))).toEqual([{ entry_id: 'e1', person: 'p1', 'mine.a,b': 1.5, words: 3 }]);
+    c.closeSync();
+    db.closeSync();
+  });
   it('score --parquet writes the scores with the UTC instant, the wall-clock time and the zone as separate columns, equal to the CSV', async () => {
     const out = tmp.path('s/scores.csv');
     const r = await runCli('score', input, '--zones', zones, '--out', out, '--parquet', '--workers', '0', '--lexicon', 'afinn-165', '--lexicon', 'vader');

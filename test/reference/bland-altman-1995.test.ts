@@ -4,7 +4,7 @@ import { pearsonCorrelation } from '../../src/stats/pearson-correlation.js';
 import { repeatedMeasuresCorrelation } from '../../src/stats/repeated-measures-correlation.js';
 import { groupBy } from '../../src/stats/group-by.js';
 import { random } from '../../src/stats/random.js';
-import { analyzePair } from '../../src/validate/analyze-pair.js';
+import { analysePair } from '../../src/validate/analyse-pair.js';
 import { DEFAULT_VALIDATE_OPTIONS } from '../../src/validate/validate-series.js';
 import { readSharedReferenceCsv } from './shared/read-shared-reference.js';
 
@@ -41,7 +41,7 @@ describe.skipIf(!data)('Bland & Altman (1995) pH and PaCO2 of 8 subjects (../sha
     expect(result.ok && result.r).toBeCloseTo(-0.0652177, 7);
   });
   it('reports the pooled r of the 47 clustered pairs as descriptive only, with no interval or p-value (Bland & Altman 1995)', () => {
-    const a = analyzePair(rows.map((d) => ({ person: d.subject, x: d.paco2, y: d.pH })), { random: random(1), replicates: 0 });
+    const a = analysePair(rows.map((d) => ({ person: d.subject, x: d.paco2, y: d.pH })), { random: random(1), replicates: 0 });
     if (!a.pooled.ok) throw new Error(a.pooled.reason);
     expect(a.pooled.r).toBeCloseTo(-0.0652177, 7);
     expect(a.pooled).not.toHaveProperty('ciLow');
@@ -54,9 +54,9 @@ describe.skipIf(!data)('Bland & Altman (1995) pH and PaCO2 of 8 subjects (../sha
     expect(result.ok && result.r).toBeCloseTo(0.0817731, 7);
     expect(result.ok && result.n).toBe(8);
   });
-  it('gives the same three correlations through analyzePair, as the validate stage computes them with its default options (rmcorr 0.8.1 and SOURCES.md)', () => {
+  it('gives the same three correlations through analysePair, as the validate stage computes them with its default options (rmcorr 0.8.1 and SOURCES.md)', () => {
     const o = DEFAULT_VALIDATE_OPTIONS;
-    const analysis = analyzePair(
+    const analysis = analysePair(
       rows.map((d) => ({ person: d.subject, x: d.paco2, y: d.pH })),
       { random: random(`${o.seed}\u0000PaCO2\u0000pH`), replicates: o.replicates, minPairs: o.minPairs, level: o.level, inference: o.inference },
     );

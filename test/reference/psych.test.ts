@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { cronbachAlpha } from '../../src/stats/cronbach-alpha.js';
 import { random } from '../../src/stats/random.js';
-import { analyzePair, type PairAnalysis } from '../../src/validate/analyze-pair.js';
+import { analysePair, type PairAnalysis } from '../../src/validate/analyse-pair.js';
 import { DEFAULT_VALIDATE_OPTIONS } from '../../src/validate/validate-series.js';
 import { readReferenceCsv } from './reference-csv.js';
 
 // Expected values from R psych 2.2.9 (statsBy, alpha) and R stats (anova) written by
-// test/reference/psych/make-expected.R. The within/between checks go through analyzePair, the
+// test/reference/psych/make-expected.R. The within/between checks go through analysePair, the
 // function the validate stage calls for every score × rating pair, with the validate stage's
 // default options (DEFAULT_VALIDATE_OPTIONS, seeded per pair as validateSeries seeds it).
 const expected = readReferenceCsv('psych/expected-statsby.csv');
@@ -16,14 +16,14 @@ const datasets: Record<string, { group: string; rows: Record<string, string>[] }
 };
 
 const analyses = new Map<string, PairAnalysis>();
-/** analyzePair of variable x (as the score) against y (as the rating), as validateSeries calls it (memoised). */
+/** analysePair of variable x (as the score) against y (as the rating), as validateSeries calls it (memoised). */
 function pipelineAnalysis(dataset: string, x: string, y: string): PairAnalysis {
   const key = `${dataset}\u0000${x}\u0000${y}`;
   const known = analyses.get(key);
   if (known) return known;
   const { group, rows } = datasets[dataset]!;
   const o = DEFAULT_VALIDATE_OPTIONS;
-  const analysis = analyzePair(
+  const analysis = analysePair(
     rows.map((d) => ({ person: d[group] as string, x: Number(d[x]), y: Number(d[y]) })),
     { random: random(`${o.seed}\u0000${x}\u0000${y}`), replicates: o.replicates, minPairs: o.minPairs, level: o.level, inference: o.inference },
   );
@@ -31,7 +31,7 @@ function pipelineAnalysis(dataset: string, x: string, y: string): PairAnalysis {
   return analysis;
 }
 
-describe('validate-stage within/between statistics (analyzePair, default options) against R psych::statsBy 2.2.9 and stats::anova (psych data withinBetween and sat.act)', () => {
+describe('validate-stage within/between statistics (analysePair, default options) against R psych::statsBy 2.2.9 and stats::anova (psych data withinBetween and sat.act)', () => {
   const correlations = expected.filter((e) => e.quantity === 'rwg' || e.quantity === 'r_group_means');
   it.each(correlations.map((e) => [e.dataset as string, e.quantity as string, e.x as string, e.y as string, Number(e.value)] as const))('%s: %s of %s and %s is %f', (dataset, quantity, x, y, value) => {
     const analysis = pipelineAnalysis(dataset, x, y);

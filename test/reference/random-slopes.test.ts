@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { linearMixedModel } from '../../src/stats/linear-mixed-model.js';
 import { randomSlopeMixedModel, type MixedModelMethod } from '../../src/stats/random-slope-mixed-model.js';
 import { random } from '../../src/stats/random.js';
-import { analyzePair } from '../../src/validate/analyze-pair.js';
+import { analysePair } from '../../src/validate/analyse-pair.js';
 import { readReferenceCsv } from './reference-csv.js';
 
 // lme4 1.1.31 (R 4.2.2) fits of correlated random intercepts and slopes, `y ~ x + (1 + x | g)`,
@@ -62,8 +62,8 @@ describe('the random-slope likelihood-ratio statistic against lme4 (REML fits wi
     expect(relative(intercept.remlCriterion, value(dataset, 'REML', 'null_criterion'))).toBeLessThan(1e-6);
     expect(relative(intercept.remlCriterion - slopes.criterion, value(dataset, 'REML', 'lrt_statistic'))).toBeLessThan(1e-4);
   });
-  it('gives lme4’s random-slope fit through analyzePair, which centres the score itself', () => {
-    const a = analyzePair(centred.map((d) => ({ person: d.g, x: d.score, y: d.y })), { random: random(1), replicates: 0 });
+  it('gives lme4’s random-slope fit through analysePair, which centres the score itself', () => {
+    const a = analysePair(centred.map((d) => ({ person: d.g, x: d.score, y: d.y })), { random: random(1), replicates: 0 });
     if (!a.randomSlopeModel.ok) throw new Error(a.randomSlopeModel.reason);
     expect(relative(a.randomSlopeModel.fixed[1]?.se, value('centred', 'REML', 'se_score_within'))).toBeLessThan(1e-4);
     expect(relative(a.randomSlopeModel.varianceSlope, value('centred', 'REML', 'var_slope'))).toBeLessThan(1e-4);

@@ -1,7 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import type { BinReducer } from '../../src/series/bin-accumulator.js';
 import { parseBinSpec } from '../../src/series/bin-spec.js';
-import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesRow } from '../../src/series/build-series.js';
+import { addSeriesEntry } from '../../src/series/add-series-entry.js';
+import { buildPersonSeries } from '../../src/series/build-person-series.js';
+import { createSeriesState } from '../../src/series/create-series-state.js';
+import type { SeriesRow } from '../../src/series/series-types.js';
 import { readReferenceCsv } from './reference-csv.js';
 
 /**

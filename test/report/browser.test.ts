@@ -13,7 +13,7 @@ import { pathToFileURL } from 'node:url';
 import { chromium, type BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { writeReport } from '../../src/io/write-report.js';
-import { studyStages } from '../../src/cli/study-stages.js';
+import { defaultStudyStages } from '../../src/io/study-stages.js';
 import { runStudy } from '../../src/pipeline.js';
 
 const CHROMIUM = '/usr/bin/chromium';
@@ -48,7 +48,7 @@ if (inCi && !haveBrowser) {
       const study = JSON.parse(readFileSync(join(demo, 'study.json'), 'utf8')) as Record<string, unknown>;
       writeFileSync(join(demo, 'study.json'), JSON.stringify({ ...study, out: '../out' }));
       // the same stages as `lexichron run` (validation, dynamics, term audit as the runner wires them)
-      const run = await runStudy(join(demo, 'study.json'), { now: '2026-05-01T00:00:00.000Z', stages: studyStages() });
+      const run = await runStudy(join(demo, 'study.json'), { now: '2026-05-01T00:00:00.000Z', stages: defaultStudyStages() });
       reportPath = (await writeReport(run.outDir)).path;
       context = await chromium.launchPersistentContext(join(work, 'profile'), {
         executablePath: CHROMIUM,

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { binInExcludedHours, parseBinSpec, parseExcludedHours } from '../../src/series/bin-spec.js';
-import { addSeriesEntry, buildPersonSeries, createSeriesState } from '../../src/series/build-series.js';
+import { addSeriesEntry } from '../../src/series/add-series-entry.js';
+import { buildPersonSeries } from '../../src/series/build-person-series.js';
+import { createSeriesState } from '../../src/series/create-series-state.js';
 
 describe('excluded hours with sub-daily bins (common practice: night hours left out of diary series)', () => {
   it('excludes entries by their own clock time, so a bin that only overlaps the excluded hours keeps its other entries', () => {

@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { parseBinSpec } from '../../src/series/bin-spec.js';
-import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesOptions } from '../../src/series/build-series.js';
+import { addSeriesEntry } from '../../src/series/add-series-entry.js';
+import { buildPersonSeries } from '../../src/series/build-person-series.js';
+import { createSeriesState } from '../../src/series/create-series-state.js';
+import type { SeriesOptions } from '../../src/series/series-types.js';
 
 const options: SeriesOptions = { bin: parseBinSpec('1d'), dayStart: 0, minWords: 1, fill: 'none', maxFill: 0, detrend: false, reducers: ['weighted'] };
 

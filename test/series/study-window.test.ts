@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { parseBinSpec } from '../../src/series/bin-spec.js';
-import { addSeriesEntry, buildPersonSeries, createSeriesState, type SeriesOptions } from '../../src/series/build-series.js';
+import { addSeriesEntry } from '../../src/series/add-series-entry.js';
+import { buildPersonSeries } from '../../src/series/build-person-series.js';
+import { createSeriesState } from '../../src/series/create-series-state.js';
+import type { SeriesOptions } from '../../src/series/series-types.js';
 import { dayNumberOfDate } from '../../src/series/local-day.js';
 import { promptWindows } from '../../src/series/prompt-windows.js';
 

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { clusterBootstrap } from '../../src/stats/cluster-bootstrap.js';
 import { mean } from '../../src/stats/mean.js';
+import { quantile } from '../../src/stats/quantile.js';
 import { random } from '../../src/stats/random.js';
 
 describe('clusterBootstrap', () => {
@@ -20,6 +21,14 @@ describe('clusterBootstrap', () => {
     expect(result.ciLow).toBeGreaterThanOrEqual(1.5);
     expect(result.ciHigh).toBeLessThanOrEqual(10);
     expect(result.succeeded).toBe(1000);
+  });
+  it('ends its percentile interval at the type-7 quantiles of the replicate statistics (Hyndman & Fan 1996 type 7, R quantile default; quantile is checked against R)', () => {
+    const drawn: number[] = [];
+    const result = clusterBootstrap(clusters, (s) => { const v = meanOfMeans(s) as number; drawn.push(v); return v; }, { random: random(5), replicates: 99, level: 0.9 });
+    if (!result.ok) throw new Error(result.reason);
+    // 99 draws: h = 98 · 0.05 = 4.9 falls between order statistics, so the interpolation shows.
+    expect(result.ciLow).toBe(quantile(drawn, (1 - 0.9) / 2));
+    expect(result.ciHigh).toBe(quantile(drawn, (1 + 0.9) / 2));
   });
   it('resamples whole clusters: a statistic that is constant within clusters sees only cluster values', () => {
     const seen = new Set<number>();

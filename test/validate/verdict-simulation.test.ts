@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { random, type RandomSource } from '../../src/stats/random.js';
-import { analyzePair } from '../../src/validate/analyze-pair.js';
+import { analysePair } from '../../src/validate/analyse-pair.js';
 import type { AlignedPair } from '../../src/validate/aligned-pair.js';
 
 function normal(source: RandomSource): number {
@@ -34,7 +34,7 @@ describe('pairVerdict in seeded simulations: the deciding interval keeps false p
     let verdictClear = 0;
     let analyticClear = 0;
     for (let k = 0; k < 100; k++) {
-      const a = analyzePair(nullWithVaryingSlopes(source, 30, 15, 0.4), { random: random(k), replicates: 300, randomSlopes: 'never' });
+      const a = analysePair(nullWithVaryingSlopes(source, 30, 15, 0.4), { random: random(k), replicates: 300, randomSlopes: 'never' });
       if (a.verdict.within !== 'none') verdictClear += 1;
       if (a.within.ok && a.within.ciLow !== undefined && a.within.ciHigh !== undefined && (a.within.ciLow > 0 || a.within.ciHigh < 0)) analyticClear += 1;
     }

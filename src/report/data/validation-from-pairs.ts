@@ -1,18 +1,18 @@
 import { isNumber } from '../../stats/is-number.js';
-import { analyzePair } from '../../validate/analyze-pair.js';
+import { analysePair } from '../../validate/analyse-pair.js';
 import type { AlignedPair } from '../../validate/aligned-pair.js';
 import type { ValidationPair } from '../report-data.js';
 import { shownCorrelation } from './shown-correlation.js';
 
 /**
- * A validation entry computed from aligned pairs with the validate stage's own `analyzePair`
+ * A validation entry computed from aligned pairs with the validate stage's own `analysePair`
  * (without the bootstrap, which the report does not redo): pooled, between-person and
  * within-person (repeated-measures) correlations with 95% intervals, the plain-words verdict and
  * its warnings, and the complete pairs for the scatters. Used when the folder holds aligned pairs
  * but no statistics file.
  */
 export function validationFromPairs(score: string, rating: string, pairs: readonly AlignedPair[]): ValidationPair {
-  const a = analyzePair(pairs, { random: () => 0.5, replicates: 0 });
+  const a = analysePair(pairs, { random: () => 0.5, replicates: 0 });
   const points = completePoints(pairs);
   return {
     score,

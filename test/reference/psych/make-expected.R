@@ -3,7 +3,7 @@
 # Needs Debian r-base-core and r-cran-psych.
 #
 # 1. The within/between statistics that lexichron's validate stage reports for a score x rating
-#    pair (analyzePair, with the pipeline's own options), on two of psych's example data sets:
+#    pair (analysePair, with the pipeline's own options), on two of psych's example data sets:
 #    `withinBetween` (16 rows, 4 groups of 4, built so that within- and between-group
 #    correlations differ, even in sign) and `sat.act` (self-reported ACT, SAT verbal and SAT
 #    quantitative of 700 people, grouped by education; complete rows only).

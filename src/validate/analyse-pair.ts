@@ -17,7 +17,7 @@ import { modelReading } from './model-reading.js';
 import { pairVerdict, type Verdict } from './pair-verdict.js';
 import { pooledCorrelation, type PooledCorrelation } from './pooled-correlation.js';
 
-/** Options of {@link analyzePair}. */
+/** Options of {@link analysePair}. */
 export interface PairAnalysisOptions {
   /** Seeded random source for the cluster bootstrap. */
   random: RandomSource;
@@ -92,7 +92,7 @@ function personMoments(list: readonly AlignedPair[]): CoMoments {
  * Separating within- and between-person associations follows Curran & Bauer (2011, Annu Rev
  * Psychol 62:583–619) and Bland & Altman (1995).
  */
-export function analyzePair(pairs: readonly AlignedPair[], options: PairAnalysisOptions): PairAnalysis {
+export function analysePair(pairs: readonly AlignedPair[], options: PairAnalysisOptions): PairAnalysis {
   const level = options.level ?? 0.95;
   const complete = pairs.filter((d) => isNumber(d.x) && isNumber(d.y));
   const means = personMeans(complete);

@@ -2,7 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { buildZoneTable, zoneAtInstant } from '../../src/ingest/zone-table.js';
 import type { BinReducer } from '../../src/series/bin-accumulator.js';
 import { parseBinSpec, parseExcludedHours } from '../../src/series/bin-spec.js';
-import { addSeriesEntry, buildPersonSeries, createSeriesState, type FillMethod, type SeriesRow } from '../../src/series/build-series.js';
+import { addSeriesEntry } from '../../src/series/add-series-entry.js';
+import { buildPersonSeries } from '../../src/series/build-person-series.js';
+import { createSeriesState } from '../../src/series/create-series-state.js';
+import type { FillMethod, SeriesRow } from '../../src/series/series-types.js';
 
 const H = 3_600_000;
 

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { random } from '../../src/stats/random.js';
-import { analyzePair } from '../../src/validate/analyze-pair.js';
+import { analysePair } from '../../src/validate/analyse-pair.js';
 import { buildPairs } from './build-pairs.js';
 
-describe('analyzePair', () => {
+describe('analysePair', () => {
   const pairs = buildPairs({ persons: 40, occasions: 20, withinSlope: 0.5, betweenSlope: -1, seed: 3 });
-  const result = analyzePair(pairs, { random: random(1), replicates: 300 });
+  const result = analysePair(pairs, { random: random(1), replicates: 300 });
 
   it('recovers a positive within-person and a negative between-person association built into the data', () => {
     expect(result.within.ok && result.within.r).toBeGreaterThan(0.3);
@@ -42,23 +42,23 @@ describe('analyzePair', () => {
     expect((result.perPerson.q1 as number) <= (result.perPerson.median as number)).toBe(true);
   });
   it('is reproducible with the same seed', () => {
-    const again = analyzePair(pairs, { random: random(1), replicates: 300 });
+    const again = analysePair(pairs, { random: random(1), replicates: 300 });
     expect(again.bootstrapWithin).toEqual(result.bootstrapWithin);
   });
   it('calls a clear but weak within-person association weak and says it should not be oversold', () => {
-    const weak = analyzePair(buildPairs({ persons: 60, occasions: 30, withinSlope: 0.15, betweenSlope: 0.15, seed: 5 }), { random: random(2), replicates: 200 });
+    const weak = analysePair(buildPairs({ persons: 60, occasions: 30, withinSlope: 0.15, betweenSlope: 0.15, seed: 5 }), { random: random(2), replicates: 200 });
     expect(weak.within.ok && Math.abs(weak.within.r)).toBeLessThan(0.25);
     expect(weak.verdict.warnings.map((w) => w.code)).toContain('weak_within');
   });
   it('says why when every person has a single observation, without NaN', () => {
-    const single = analyzePair([{ person: 'a', x: 1, y: 2 }, { person: 'b', x: 2, y: 3 }, { person: 'c', x: 3, y: 3 }, { person: 'd', x: 4, y: 5 }], { random: random(3), replicates: 50 });
+    const single = analysePair([{ person: 'a', x: 1, y: 2 }, { person: 'b', x: 2, y: 3 }, { person: 'c', x: 3, y: 3 }, { person: 'd', x: 4, y: 5 }], { random: random(3), replicates: 50 });
     expect(single.within.ok ? '' : single.within.code).toBe('too_few_pairs');
     expect(single.verdict.within).toBe('not_estimable');
     expect(single.verdict.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(['within_not_estimable', 'few_persons']));
     expect(JSON.stringify(single)).not.toMatch(/NaN/);
   });
   it('says why when the rating is constant', () => {
-    const constant = analyzePair(['a', 'b', 'c'].flatMap((person) => [1, 2, 3].map((x) => ({ person, x, y: 4 }))), { random: random(4), replicates: 0 });
+    const constant = analysePair(['a', 'b', 'c'].flatMap((person) => [1, 2, 3].map((x) => ({ person, x, y: 4 }))), { random: random(4), replicates: 0 });
     expect(constant.within.ok ? '' : constant.within.code).toBe('zero_variance');
     expect(constant.pooled.ok ? '' : constant.pooled.code).toBe('zero_variance');
     expect(constant.bootstrapWithin.ok ? '' : constant.bootstrapWithin.code).toBe('not_requested');
@@ -80,7 +80,7 @@ describe('analyzePair', () => {
         return { person: `p${p}`, x: mx + dx, y: slope * dx + normal() * 0.7 };
       });
     }).flat();
-    const a = analyzePair(varying, { random: random(3), replicates: 0 });
+    const a = analysePair(varying, { random: random(3), replicates: 0 });
     expect(a.reportedModel).toBe('random_slopes');
     expect(a.slopeTest?.p).toBeLessThan(0.001);
     if (!a.mixedModel.ok || !a.randomSlopeModel.ok) throw new Error('fit failed');
@@ -88,12 +88,12 @@ describe('analyzePair', () => {
     expect(a.randomSlopeModel.fixed[1]?.df).toBe(30 - 2);
     expect(a.verdict.text).toMatch(/lets each person's slope vary \(1 \+ score_within \| person\), because a likelihood-ratio test favours it \(χ² = /);
     expect(a.verdict.warnings.map((w) => w.code)).toContain('slopes_vary');
-    const never = analyzePair(varying, { random: random(3), replicates: 0, randomSlopes: 'never' });
+    const never = analysePair(varying, { random: random(3), replicates: 0, randomSlopes: 'never' });
     expect(never.reportedModel).toBe('random_intercept');
     expect(never.randomSlopeModel.ok ? '' : never.randomSlopeModel.code).toBe('not_requested');
   });
   it('says why when every value is missing', () => {
-    const empty = analyzePair([{ person: 'a', x: undefined, y: 1 }, { person: 'b', x: 2, y: undefined }], { random: random(5), replicates: 10 });
+    const empty = analysePair([{ person: 'a', x: undefined, y: 1 }, { person: 'b', x: 2, y: undefined }], { random: random(5), replicates: 10 });
     expect(empty.pairs).toBe(0);
     expect(empty.within.ok).toBe(false);
     expect(empty.mixedModel.ok).toBe(false);
