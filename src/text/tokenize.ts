@@ -11,5 +11,3 @@ import type { Tokens } from './tokens.js';
 export function tokenize(text: string, language = 'en'): Tokens {
   return isEnglish(language) ? tokenizeEnglish(text) : tokenizeSegmenter(text, language);
 }
-
-export { TokenKind, type Tokens } from './tokens.js';

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { loadLexicons } from '../../src/io/load-lexicon.js';
 import { readPlainPiece } from '../../src/fast/read-piece.js';
 import { termNorms } from '../../src/text/term-norms.js';
-import { TokenKind, tokenize } from '../../src/text/tokenize.js';
+import { tokenize } from '../../src/text/tokenize.js';
+import { TokenKind } from '../../src/text/tokens.js';
 import { tokenizeSegmenter } from '../../src/text/tokenize-segmenter.js';
 
 describe('tokenize (English, wink-nlp)', () => {
