@@ -187,7 +187,7 @@ export function parseStudy(json: unknown): { study?: Study; problems: StudyProbl
   need(!(windowDates && (series.from !== undefined || series.to !== undefined)), '$.series.window', 'give the study window once: either window {"from", "to"} or from and to, not both');
   need(!(series.window === 'ratings' && !isObject(json.ratings)), '$.series.window', '"ratings" takes the window from the self-reports, but the study has no ratings; give dates {"from", "to"} or "entries"');
   need(json.ratings === undefined || isObject(json.ratings), '$.ratings', 'expected an object such as {"path": "ratings.csv", "scales": {"mood": [0, 100]}}');
-  for (const key of ['dynamics', 'audit', 'report']) need(json[key] === undefined || json[key] === false || isObject(json[key]), `$.${key}`, 'expected an object of settings, or false to skip the stage');
+  for (const key of ['dynamics', 'audit', 'report']) need(json[key] === undefined || json[key] === false || json[key] === true || isObject(json[key]), `$.${key}`, 'expected an object of settings, true for the default settings, or false to skip the stage');
   const ratings = isObject(json.ratings) ? ratingsSettings(json.ratings, problems) : undefined;
   const stage = <T>(value: unknown, settings: (v: Record<string, unknown>, p: StudyProblem[]) => T): T | false => (value === false ? false : settings(isObject(value) ? value : {}, problems));
   const dynamics = stage(json.dynamics, dynamicsSettings);

@@ -26,3 +26,17 @@ describe('study files carry the time window, epoch units, series bounds and miss
     expect(problems.map((p) => p.path).sort()).toEqual(['$.ratings.missing', '$.series.maxBins', '$.time.epoch', '$.time.window']);
   });
 });
+
+describe('study files switch the optional stages on with true', () => {
+  it('reads true as the default settings and false as skipping the stage, and names any other value', () => {
+    const on = parseStudy({ ...base, dynamics: true, audit: true, report: true });
+    const defaults = parseStudy({ ...base, dynamics: {}, audit: {}, report: {} });
+    expect(on.problems).toEqual([]);
+    expect([on.study?.dynamics, on.study?.audit, on.study?.report]).toEqual([defaults.study?.dynamics, defaults.study?.audit, defaults.study?.report]);
+    expect(on.study?.report).not.toBe(false);
+    const off = parseStudy({ ...base, dynamics: false, audit: false, report: false });
+    expect([off.study?.dynamics, off.study?.audit, off.study?.report]).toEqual([false, false, false]);
+    const wrong = parseStudy({ ...base, report: 'yes' });
+    expect(wrong.problems).toEqual([{ path: '$.report', message: 'expected an object of settings, true for the default settings, or false to skip the stage' }]);
+  });
+});
