@@ -71,6 +71,8 @@ describe('renderReport', () => {
     expect(bare).toContain('Dynamics results are not available.');
     expect(bare).toContain('The manifest is not available.');
     expect(bare).toContain('The input reconciliation is not available.');
+    // Each reason after the heading reads as a sentence of its own.
+    expect(bare).not.toMatch(/not available\.<\/strong> [a-z]/);
   });
 
   it('lists the terms that never matched per category, escaped, with a count of those not shown', () => {
