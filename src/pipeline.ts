@@ -20,6 +20,7 @@ import { checkOutputFolder } from './io/check-output-folder.js';
 import { lockOutputFolder } from './io/lock-output-folder.js';
 import { removeStaleTemporaries } from './io/own-temporaries.js';
 import { openStagedOutput } from './io/staged-output.js';
+import { unplacedTime } from './ingest/unplaced-time.js';
 import { loadLexicons } from './io/load-lexicon.js';
 import { readZoneFile } from './io/read-zone-file.js';
 import { fileDigest, runScore, type RunScoreResult } from './io/run-score.js';
@@ -233,8 +234,7 @@ async function studyRatings(settings: RatingsSettings, at: (p: string) => string
  * epoch number): such a time cannot be placed without its person's zone (RFC 3339 section 4.2).
  */
 function noZonesError(studyPath: string, diagnostic: Diagnostic, what: string): Error {
-  const where = diagnostic.source ? `\`${diagnostic.source.file}\` line ${diagnostic.source.line}` : 'a row';
-  return usageError(`Study file \`${studyPath}\`: ${what} ${where} has a time with no UTC offset (or an epoch number), and the study names no time zones; add "timeZone": "Europe/Brussels" (one IANA zone for everyone) or "zones": "zones.csv" (columns person, zone[, from]) to the study file, or write every time with its offset (2026-03-29T08:15:00+02:00).`);
+  return usageError(`Study file \`${studyPath}\`: ${unplacedTime(diagnostic, what)}, and the study names no time zones; add "timeZone": "Europe/Brussels" (one IANA zone for everyone) or "zones": "zones.csv" (columns person, zone[, from]) to the study file, or write every time with its offset (2026-03-29T08:15:00+02:00).`);
 }
 
 /** A study file read and checked, with everything its stages need (lexicons, zones, key, series options). */
@@ -310,7 +310,7 @@ export async function prepareStudy(study: Study, studyPath: string, env: RunStud
   const noZones = !study.zones && !study.timeZone;
   const ratings = study.ratings && ((!study.series.windows && study.series.window === 'ratings') || noZones) ? await studyRatings(study.ratings, at, zones, ratingsTime, person) : undefined;
   const unplaced = noZones ? ratings?.diagnostics.find((d) => d.code === 'no_zone') : undefined;
-  if (unplaced) throw noZonesError(studyPath, unplaced, 'the self-report on');
+  if (unplaced) throw noZonesError(studyPath, unplaced, 'the self-report');
   const windows = study.series.windows ? await readWindowsFile(at(study.series.windows)) : study.series.window === 'ratings' && ratings ? promptWindows(ratings.ratings, seriesOptions.dayStart) : undefined;
   return { study, studyPath, studyDir, at, lexicons, zones, time, inputTimes, ratingsTime, key, ...(pseudonyms ? { pseudonyms } : {}), person, redact, seriesOptions, reducers, ...(windows ? { windows } : {}) };
 }
@@ -435,7 +435,7 @@ async function runStudyInto(outDir: string, study: Study, studyPath: string, opt
     ...(options.shard ? { shard: options.shard } : {}),
     onProgress: options.onProgress,
     onRawEntry: auditEntryFeeder(p, auditors),
-    ...(!study.zones && !study.timeZone ? { onReject: (d: Diagnostic) => { if (d.code === 'no_zone') throw noZonesError(studyPath, d, 'the entry on'); } } : {}),
+    ...(!study.zones && !study.timeZone ? { onReject: (d: Diagnostic) => { if (d.code === 'no_zone') throw noZonesError(studyPath, d, 'the entry'); } } : {}),
   });
   if (options.shard) {
     // A shard may hold no person at all (more shards than persons): it then writes no series.

@@ -4,6 +4,7 @@ import { scoreWorkerCount, startScorePool } from '../io/score-pool.js';
 import type { CompiledLexicon } from '../lexicon/compile-lexicon.js';
 import type { ZoneTable } from '../ingest/zone-table.js';
 import type { Diagnostic } from '../types.js';
+import { unplacedTime } from '../ingest/unplaced-time.js';
 import { readNamesFile } from '../io/read-names-file.js';
 import { PSEUDONYM_KEY_ENV, readPseudonymKey } from '../io/read-pseudonym-key.js';
 import { createRedactor } from '../privacy/create-redactor.js';
@@ -15,7 +16,6 @@ import { addTimeOptions, delimiterFrom, parseMaxRejects, parseWorkers, progressR
 
 const collect = (value: string, previous: string[] = []): string[] => [...previous, value];
 
-/** `lexichron score INPUT... --lexicon NAME_OR_PATH... --out FILE` */
 /**
  * With no --time-zone or --zones, a time written with its UTC offset is placed by that offset; the
  * first time without one (or an epoch number) stops the run, since no zone can place it (RFC 3339
@@ -23,10 +23,10 @@ const collect = (value: string, previous: string[] = []): string[] => [...previo
  */
 function stopOnUnplacedTime(diagnostic: Diagnostic): void {
   if (diagnostic.code !== 'no_zone') return;
-  const where = diagnostic.source ? `\`${diagnostic.source.file}\` line ${diagnostic.source.line}` : 'a row';
-  throw usageError(`No time zone given, and the entry on ${where} has a time with no UTC offset (or an epoch number): pass --time-zone ZONE (e.g. Europe/Brussels) or --zones FILE with each person's zone, or write every time with its offset (2026-03-29T08:15:00+02:00).`);
+  throw usageError(`No time zone given, and ${unplacedTime(diagnostic, 'the entry')}: pass --time-zone ZONE (e.g. Europe/Brussels) or --zones FILE with each person's zone, or write every time with its offset (2026-03-29T08:15:00+02:00).`);
 }
 
+/** `lexichron score INPUT... --lexicon NAME_OR_PATH... --out FILE` */
 export function registerScore(program: Command): void {
   const command = program
     .command('score')
